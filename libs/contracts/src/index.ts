@@ -1,0 +1,3 @@
+export * from './lib/roles';
+export * from './lib/routes';
+export * from './lib/dto';
