@@ -1,3 +1,4 @@
 export * from './lib/roles';
 export * from './lib/routes';
 export * from './lib/dto';
+export * from './lib/users-query';

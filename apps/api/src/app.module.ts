@@ -1,0 +1,52 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module';
+import { DatabaseErrorFilter } from './common/filters/database-error.filter';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { PermissionsGuard } from './common/guards/permissions.guard';
+import { AppConfig } from './config/app-config';
+import { ConfigModule } from './config/config.module';
+import { dataSourceOptions } from './database/data-source-options';
+import { serialiseTransactions } from './database/serialised-transactions';
+import { DataSource } from 'typeorm';
+import { DemoModule } from './demo/demo.module';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { OrganisationModule } from './organisation/organisation.module';
+import { UnitsModule } from './units/units.module';
+import { UsersModule } from './users/users.module';
+
+@Module({})
+export class AppModule {
+  /** The whole API for a validated configuration (with its JWT secret resolved). */
+  static forRoot(config: AppConfig): DynamicModule {
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot(config),
+        TypeOrmModule.forRootAsync({
+          useFactory: () => dataSourceOptions(config.databaseFile),
+          dataSourceFactory: async (options) => {
+            const dataSource = new DataSource(options!);
+            serialiseTransactions(dataSource);
+            return dataSource.initialize();
+          },
+        }),
+        HealthModule,
+        MailModule,
+        OrganisationModule,
+        UnitsModule,
+        UsersModule,
+        AuthModule,
+        DemoModule,
+      ],
+      providers: [
+        // Order matters: authentication first, then the route's access rule.
+        { provide: APP_GUARD, useClass: JwtAuthGuard },
+        { provide: APP_GUARD, useClass: PermissionsGuard },
+        { provide: APP_FILTER, useClass: DatabaseErrorFilter },
+      ],
+    };
+  }
+}

@@ -1,0 +1,49 @@
+import { Module } from '@nestjs/common';
+import { JwtModule } from '@nestjs/jwt';
+import { PassportModule } from '@nestjs/passport';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AppConfig } from '../config/app-config';
+import { MailModule } from '../mail/mail.module';
+import { OrganisationModule } from '../organisation/organisation.module';
+import { UserEntity } from '../users/user.entity';
+import { UsersModule } from '../users/users.module';
+import { AuthThrottlerGuard } from './auth-throttler.guard';
+import { AuthController } from './auth.controller';
+import { AuthService } from './auth.service';
+import { JWT_AUDIENCE, JWT_ISSUER, JwtStrategy } from './jwt.strategy';
+import { MeController } from './me.controller';
+import { TokensModule } from './tokens.module';
+
+@Module({
+  imports: [
+    TypeOrmModule.forFeature([UserEntity]),
+    PassportModule,
+    JwtModule.registerAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => ({
+        secret: config.jwtSecret!,
+        signOptions: {
+          algorithm: 'HS256',
+          expiresIn: config.jwtAccessTtl,
+          issuer: JWT_ISSUER,
+          audience: JWT_AUDIENCE,
+        },
+      }),
+    }),
+    ThrottlerModule.forRootAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => ({
+        throttlers: [{ name: 'auth', ttl: 60_000, limit: config.loginRateLimit }],
+        errorMessage: 'Too many attempts: wait a minute and try again',
+      }),
+    }),
+    TokensModule,
+    UsersModule,
+    OrganisationModule,
+    MailModule,
+  ],
+  controllers: [AuthController, MeController],
+  providers: [AuthService, JwtStrategy, AuthThrottlerGuard],
+})
+export class AuthModule {}

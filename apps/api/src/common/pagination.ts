@@ -1,0 +1,43 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { MAX_PAGE_SIZE, type Page, type PageQuery } from '@rotaplex/contracts';
+import { Transform, Type } from 'class-transformer';
+import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+
+/** page (1-based), pageSize, order and a free-text q; subclasses add `sort` with their own columns. */
+export class PageQueryDto implements PageQuery {
+  @ApiPropertyOptional({ minimum: 1, default: 1 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  page: number = 1;
+
+  @ApiPropertyOptional({ minimum: 1, maximum: MAX_PAGE_SIZE, default: 20 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(MAX_PAGE_SIZE)
+  pageSize: number = 20;
+
+  @ApiPropertyOptional({ enum: ['asc', 'desc'], default: 'asc' })
+  @IsOptional()
+  @IsIn(['asc', 'desc'])
+  order: 'asc' | 'desc' = 'asc';
+
+  @ApiPropertyOptional({ description: 'Free-text search' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(200)
+  @Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value))
+  q?: string;
+}
+
+export function toPage<T>(items: T[], total: number, query: PageQueryDto): Page<T> {
+  return { items, total, page: query.page, pageSize: query.pageSize };
+}
+
+/** Escapes % and _ for a SQL LIKE with ESCAPE '\'. */
+export function likePattern(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}

@@ -1,0 +1,4 @@
+import { InitialSchema1764633600000 } from './1764633600000-initial-schema';
+
+/** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
+export const MIGRATIONS = [InitialSchema1764633600000];

@@ -1,0 +1,10 @@
+import { Module } from '@nestjs/common';
+import { TokensModule } from '../auth/tokens.module';
+import { MailModule } from '../mail/mail.module';
+import { FirstRunService } from './first-run.service';
+
+@Module({
+  imports: [TokensModule, MailModule],
+  providers: [FirstRunService],
+})
+export class DemoModule {}

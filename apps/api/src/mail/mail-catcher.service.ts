@@ -1,0 +1,97 @@
+import { Injectable, Logger, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { simpleParser } from 'mailparser';
+import { type AddressInfo } from 'node:net';
+import { SMTPServer } from 'smtp-server';
+import { Repository } from 'typeorm';
+import { AppConfig } from '../config/app-config';
+import { MailMessageEntity } from './mail-message.entity';
+
+const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;
+
+/**
+ * The local mail catcher: an SMTP server on the loopback interface that stores every message it
+ * receives, so that someone trying Rotaplex locally can open invitation and approval links from
+ * the mailbox page. Started only when no SMTP_HOST is configured; nothing leaves the machine.
+ */
+@Injectable()
+export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
+  private readonly logger = new Logger(MailCatcherService.name);
+  private server: SMTPServer | null = null;
+  private boundPort: number | null = null;
+
+  constructor(
+    private readonly config: AppConfig,
+    @InjectRepository(MailMessageEntity) private readonly messages: Repository<MailMessageEntity>,
+  ) {}
+
+  get enabled(): boolean {
+    return this.config.smtp === null;
+  }
+
+  /** The port the catcher listens on (after start). */
+  get port(): number {
+    if (this.boundPort === null) throw new Error('The mail catcher is not running');
+    return this.boundPort;
+  }
+
+  async onModuleInit(): Promise<void> {
+    if (!this.enabled) return;
+    const server = new SMTPServer({
+      authOptional: true,
+      disabledCommands: ['AUTH', 'STARTTLS'],
+      size: MAX_MESSAGE_BYTES,
+      logger: false,
+      banner: 'Rotaplex local mail catcher',
+      onData: (stream, session, callback) => {
+        const to = session.envelope.rcptTo.map((r) => r.address);
+        simpleParser(stream)
+          .then((mail) => {
+            const from =
+              mail.from?.text ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : '') ?? '';
+            return this.messages.save(
+              this.messages.create({
+                messageId: mail.messageId ?? null,
+                from: from.slice(0, 500),
+                to,
+                subject: (mail.subject ?? '(no subject)').slice(0, 1000),
+                text: mail.text ?? '',
+                html: typeof mail.html === 'string' ? mail.html : null,
+                receivedAt: new Date(),
+              }),
+            );
+          })
+          // The SMTP reply is sent only after the message is stored, so a sender that got its
+          // "250 OK" can read the message from the mailbox straight away.
+          .then(
+            () => callback(),
+            (err: Error) => callback(err),
+          );
+      },
+    });
+    server.on('error', (err) => this.logger.error(`Mail catcher error: ${err.message}`));
+    await new Promise<void>((resolve, reject) => {
+      const onError = (err: Error) =>
+        reject(
+          new Error(
+            `The local mail catcher could not listen on 127.0.0.1:${this.config.mailCatcherPort} (${err.message}). ` +
+              'Set MAIL_CATCHER_PORT to a free port (0 = any) or SMTP_HOST to use a real mail server.',
+          ),
+        );
+      server.server.once('error', onError);
+      server.listen(this.config.mailCatcherPort, '127.0.0.1', () => {
+        server.server.off('error', onError);
+        resolve();
+      });
+    });
+    this.server = server;
+    this.boundPort = (server.server.address() as AddressInfo).port;
+    this.logger.log(`Local mail catcher listening on 127.0.0.1:${this.boundPort}`);
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    const server = this.server;
+    this.server = null;
+    if (server) await new Promise<void>((resolve) => server.close(() => resolve()));
+  }
+}

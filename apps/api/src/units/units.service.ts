@@ -1,0 +1,96 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { type UnitDto } from '@rotaplex/contracts';
+import { DataSource, In, Repository } from 'typeorm';
+import { type AuthUser } from '../common/auth-user';
+import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
+import { type CreateUnitDto, type UpdateUnitDto } from './dto/unit.dto';
+import { UnitEntity } from './unit.entity';
+
+@Injectable()
+export class UnitsService {
+  constructor(
+    @InjectRepository(UnitEntity) private readonly units: Repository<UnitEntity>,
+    private readonly dataSource: DataSource,
+  ) {}
+
+  /** Units the caller may see: all for admins, their own for managers and staff. */
+  async list(user: AuthUser): Promise<UnitDto[]> {
+    const visible = visibleUnitIds(user);
+    const rows = await this.units.find({
+      where: { organisationId: user.organisationId, ...(visible ? { id: In(visible) } : {}) },
+      order: { name: 'ASC' },
+    });
+    return rows.map(toUnitDto);
+  }
+
+  async get(user: AuthUser, id: string): Promise<UnitDto> {
+    return toUnitDto(await this.load(user, id));
+  }
+
+  async create(user: AuthUser, body: CreateUnitDto): Promise<UnitDto> {
+    await this.assertNameFree(user.organisationId, body.name);
+    const unit = this.units.create({
+      organisationId: user.organisationId,
+      name: body.name,
+      timeZone: body.timeZone,
+    });
+    return toUnitDto(await this.units.save(unit));
+  }
+
+  async update(user: AuthUser, id: string, body: UpdateUnitDto): Promise<UnitDto> {
+    const unit = await this.load(user, id);
+    if (body.name !== undefined && body.name !== unit.name) {
+      await this.assertNameFree(user.organisationId, body.name);
+      unit.name = body.name;
+    }
+    if (body.timeZone !== undefined) unit.timeZone = body.timeZone;
+    return toUnitDto(await this.units.save(unit));
+  }
+
+  /** Deletes an empty unit; a unit that still has people is refused with 409. */
+  async remove(user: AuthUser, id: string): Promise<void> {
+    await this.dataSource.transaction(async (em) => {
+      const unit = await em.findOneBy(UnitEntity, { id, organisationId: user.organisationId });
+      if (!unit) throw new NotFoundException('Unit not found');
+      const [{ n }] = await em.query(`SELECT COUNT(*) AS n FROM user_units WHERE unitId = ?`, [id]);
+      if (Number(n) > 0) {
+        throw new ConflictException(
+          `Unit "${unit.name}" still has ${n} ${Number(n) === 1 ? 'person' : 'people'}: move them to another unit before deleting it`,
+        );
+      }
+      await em.delete(UnitEntity, { id });
+    });
+  }
+
+  /** Checks that every id is a unit of the organisation (400 naming unitIds otherwise); returns the entities. */
+  async findAllOrFail(organisationId: string, ids: string[]): Promise<UnitEntity[]> {
+    const unique = [...new Set(ids)];
+    if (!unique.length) return [];
+    const rows = await this.units.findBy({ organisationId, id: In(unique) });
+    if (rows.length !== unique.length) {
+      const known = new Set(rows.map((r) => r.id));
+      throw new BadRequestException(
+        `unitIds contains an unknown unit: ${unique.filter((i) => !known.has(i)).join(', ')}`,
+      );
+    }
+    return rows;
+  }
+
+  private async load(user: AuthUser, id: string): Promise<UnitEntity> {
+    const unit = await this.units.findOneBy({ id, organisationId: user.organisationId });
+    if (!unit) throw new NotFoundException('Unit not found');
+    assertUnitAccess(user, unit.id);
+    return unit;
+  }
+
+  private async assertNameFree(organisationId: string, name: string): Promise<void> {
+    if (await this.units.existsBy({ organisationId, name })) {
+      throw new ConflictException(`A unit named "${name}" already exists`);
+    }
+  }
+}
+
+export function toUnitDto(u: UnitEntity): UnitDto {
+  return { id: u.id, name: u.name, timeZone: u.timeZone, createdAt: u.createdAt.toISOString() };
+}

@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { TokensModule } from '../auth/tokens.module';
+import { MailModule } from '../mail/mail.module';
+import { UnitsModule } from '../units/units.module';
+import { UserEntity } from './user.entity';
+import { UsersController } from './users.controller';
+import { UsersService } from './users.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([UserEntity]), TokensModule, UnitsModule, MailModule],
+  controllers: [UsersController],
+  providers: [UsersService],
+  exports: [UsersService],
+})
+export class UsersModule {}

@@ -1,0 +1,34 @@
+import { type MailMessageDto, type MailMessageSummaryDto, type Page } from '@rotaplex/contracts';
+import { api, bearer, type TestApp } from './test-app';
+
+/** Reads the newest message to `to` through the admin mailbox API (the catcher received it over SMTP). */
+export async function latestMailTo(
+  t: TestApp,
+  adminToken: string,
+  to: string,
+): Promise<MailMessageDto | null> {
+  const list = await t
+    .http()
+    .get(api('/mailbox'))
+    .query({ q: to, pageSize: 100 })
+    .set(bearer(adminToken))
+    .expect(200);
+  const page = list.body as Page<MailMessageSummaryDto>;
+  const summary = page.items.find((m) => m.to.includes(to));
+  if (!summary) return null;
+  const res = await t
+    .http()
+    .get(api(`/mailbox/${summary.id}`))
+    .set(bearer(adminToken))
+    .expect(200);
+  return res.body as MailMessageDto;
+}
+
+/** The token query parameter of the first link to `path` in a text body. */
+export function linkToken(text: string, path: string): { url: string; token: string } {
+  const match = new RegExp(`(https?://\\S+${path.replace(/[/]/g, '\\/')}\\?token=([A-Za-z0-9_%\\-]+))`).exec(
+    text,
+  );
+  if (!match) throw new Error(`no ${path} link in: ${text}`);
+  return { url: match[1], token: decodeURIComponent(match[2]) };
+}
