@@ -1,0 +1,74 @@
+/**
+ * Body of one solver worker thread: keeps a warm HiGHS session and runs one task at a time.
+ * Started by SolverPool, from compiled JavaScript in production or through tsx from the
+ * TypeScript sources in tests and development.
+ */
+import { parentPort, workerData } from 'node:worker_threads';
+import type { SolveProgress } from '../result';
+import { HighsSession, isWasmFailure } from '../solve/highs-session';
+import { runMip } from '../solve/run-mip';
+import { solveRoster } from '../solve/solve';
+import type { TaskMessage, WorkerErrorInfo, WorkerInit, WorkerMessage, WorkerResult } from './protocol';
+
+if (!parentPort) throw new Error('solve-worker must run in a worker thread');
+const port = parentPort;
+const init = (workerData ?? {}) as WorkerInit;
+const send = (message: WorkerMessage): void => port.postMessage(message);
+
+function errorInfo(err: unknown): WorkerErrorInfo {
+  const wasmFailure = isWasmFailure(err);
+  const message = err instanceof Error ? err.message : String(err);
+  return {
+    name: err instanceof Error ? err.name : 'Error',
+    message:
+      wasmFailure && !message.startsWith('The solver failed inside WebAssembly')
+        ? `The solver failed inside WebAssembly (${message}); its instance was replaced.`
+        : message,
+    wasmFailure,
+  };
+}
+
+async function main(): Promise<void> {
+  let session: HighsSession;
+  try {
+    session = await HighsSession.create({
+      wasmModule: init.wasmModule,
+      memoryLimitBytes: init.memoryLimitBytes,
+    });
+  } catch (err) {
+    send({ type: 'startFailed', error: errorInfo(err) });
+    return;
+  }
+  let queue = Promise.resolve();
+  port.on('message', (message: TaskMessage) => {
+    // One task at a time: the pool never sends a second one before the first is answered.
+    queue = queue.then(() => runTask(session, message));
+  });
+  send({ type: 'ready' });
+}
+
+async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMessage): Promise<void> {
+  const cancelFlag = new Int32Array(cancelBuffer);
+  const onProgress = (progress: SolveProgress): void => send({ type: 'progress', id, progress });
+  try {
+    await session.ensureHealthy();
+    let result: WorkerResult;
+    if (task.kind === 'roster') {
+      result = await solveRoster(task.problem, { ...task.options, session, cancelFlag, onProgress });
+    } else {
+      result = runMip(session, task.model, { ...task.options, cancelFlag, onProgress });
+    }
+    send({ type: 'done', id, result, memoryBytes: session.memoryBytes });
+  } catch (err) {
+    if (isWasmFailure(err)) session.markBroken();
+    send({ type: 'failed', id, error: errorInfo(err), memoryBytes: session.memoryBytes });
+  }
+  // Replace a damaged or bloated instance now, while idle, rather than at the start of the next solve.
+  try {
+    await session.ensureHealthy();
+  } catch {
+    // The next task will try again and report the error.
+  }
+}
+
+void main();

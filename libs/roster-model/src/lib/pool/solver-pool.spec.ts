@@ -1,0 +1,123 @@
+/**
+ * The solver pool with real worker threads and the real HiGHS build.
+ */
+import type { SolveProgress } from '../result';
+import { busyUnit, smallWard } from '../solve/fixtures.test-helpers';
+import { SolverError, SolverPool } from './solver-pool';
+
+// The production-planning example of the highs package README (node_modules/highs/README.md,
+// "Quick start"): chairs earn 30 and tables 50; carpentry c + 2t ≤ 40, finishing 2c + t ≤ 50.
+// Published optimum: 20 chairs and 10 tables, profit 1100.
+const README_EXAMPLE = `Maximize
+ profit: 30 chairs + 50 tables
+Subject To
+ carpentry: chairs + 2 tables <= 40
+ finishing: 2 chairs + tables <= 50
+Bounds
+ chairs >= 0
+ tables >= 0
+Generals
+ chairs tables
+End`;
+
+describe('SolverPool', () => {
+  let pool: SolverPool;
+  beforeAll(() => {
+    pool = new SolverPool({ size: 2 });
+  });
+  afterAll(async () => {
+    await pool.close();
+  });
+
+  async function expectPoolStillSolves(): Promise<void> {
+    const after = await pool.solveMip({ format: 'lp', data: README_EXAMPLE });
+    expect(after.status).toBe('optimal');
+    expect(after.objective).toBe(1100);
+    expect(Array.from(after.values ?? [])).toEqual([20, 10]);
+  }
+
+  it('solves in a worker: the highs README example reaches its published optimum 1100', async () => {
+    await expectPoolStillSolves();
+  });
+
+  it('reports a WebAssembly abort as a clear error and the next solve in the same pool succeeds', async () => {
+    // LP text with a broken constraint aborts inside WebAssembly (SOLVER-NOTES.md: parse errors abort).
+    const broken = { format: 'lp' as const, data: 'Minimize\n obj: x\nSubject To\n c: x >= 1 +\nEnd' };
+    const failure = pool.solveMip(broken);
+    await expect(failure).rejects.toBeInstanceOf(SolverError);
+    await expect(failure).rejects.toMatchObject({
+      kind: 'wasm',
+      message: expect.stringMatching(/WebAssembly/),
+    });
+    await expectPoolStillSolves();
+  });
+
+  it('reports a worker that dies mid-solve as an error and starts a new worker', async () => {
+    let signalled!: () => void;
+    const started = new Promise<void>((resolve) => (signalled = resolve));
+    const handle = pool.start(
+      { kind: 'roster', problem: busyUnit(), options: { timeLimitSeconds: 60, explain: false } },
+      { onProgress: () => signalled() },
+    );
+    await started;
+    // A crash from outside the solve (as an out-of-memory exit would be): terminate the worker
+    // behind the pool's back. The pool must fail this solve, not hang, and stay usable.
+    const slots = (pool as unknown as { slots: { job: unknown; worker: { terminate(): Promise<number> } }[] })
+      .slots;
+    const busy = slots.find((s) => s.job !== null);
+    expect(busy).toBeDefined();
+    await busy!.worker.terminate();
+    await expect(handle.result).rejects.toMatchObject({
+      kind: 'crashed',
+      message: expect.stringMatching(/stopped unexpectedly/),
+    });
+    await expectPoolStillSolves();
+  });
+
+  it('kills a running solve at once on request and stays usable', async () => {
+    const killer = new AbortController();
+    const solve = pool.solveRoster(busyUnit(), {
+      timeLimitSeconds: 60,
+      explain: false,
+      killSignal: killer.signal,
+      onProgress: () => killer.abort(),
+    });
+    await expect(solve).rejects.toMatchObject({ kind: 'killed' });
+    await expectPoolStillSolves();
+  });
+
+  it('cancels through shared memory, keeps the incumbent, and never blocks the caller', async () => {
+    const controller = new AbortController();
+    let ticks = 0;
+    const timer = setInterval(() => (ticks += 1), 20);
+    const seen: SolveProgress[] = [];
+    try {
+      const result = await pool.solveRoster(busyUnit(), {
+        timeLimitSeconds: 60,
+        signal: controller.signal,
+        onProgress: (p) => {
+          seen.push(p);
+          if (p.objective !== null) setTimeout(() => controller.abort(), 300);
+        },
+      });
+      expect(result.status).toBe('interrupted');
+      expect(result.roster).not.toBeNull();
+      expect(result.check?.violations).toEqual([]);
+      const firstObjective = seen.find((p) => p.objective !== null)?.objective as number;
+      expect(result.objective as number).toBeLessThanOrEqual(firstObjective + 1e-6);
+    } finally {
+      clearInterval(timer);
+    }
+    // The main thread kept running its timers while HiGHS worked in the worker.
+    expect(ticks).toBeGreaterThan(5);
+  });
+
+  it('runs two independent seeds and keeps the better roster with the better bound', async () => {
+    const result = await pool.solveRoster(smallWard(), { timeLimitSeconds: 60, portfolio: 2 });
+    // Hand-worked in solve.spec.ts: the small ward's optimum is 0.
+    expect(result.status).toBe('optimal');
+    expect(result.objective).toBe(0);
+    expect(result.quality).toBe('Proven best possible roster.');
+    expect(result.check?.violations).toEqual([]);
+  });
+});

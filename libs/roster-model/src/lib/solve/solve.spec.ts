@@ -1,0 +1,161 @@
+/**
+ * solveRoster on the real HiGHS build, with the real checker. Problems are tiny or time-limited so
+ * each test runs in a few seconds. Expected outcomes are worked out by hand beside each check.
+ */
+import * as checker from '../check/checker';
+import type { SolveProgress } from '../result';
+import { busyUnit, smallWard } from './fixtures.test-helpers';
+import { SolverCheckError, assertCheckerAgrees, solveRoster } from './solve';
+
+describe('solveRoster', () => {
+  afterEach(() => jest.restoreAllMocks());
+
+  it('solves a small ward to a proven optimum that the independent checker confirms', async () => {
+    // Hand-worked: every day needs an rn on each of E, L, N plus a second person on E: 4 shifts a
+    // day, 28 in the week, for 6 people who may each work up to 5 days (30 shift slots), with 11 h
+    // rest making N→E/L and L→E on consecutive days impossible. A roster with no cover shortfall
+    // exists (e.g. two rn rotating nights), and with targets equal to minimums and no requests
+    // every penalty can be 0. So the optimum is 0 and the bound proves it.
+    const result = await solveRoster(smallWard(), { timeLimitSeconds: 60 });
+    expect(result.status).toBe('optimal');
+    expect(result.objective).toBe(0);
+    expect(result.bound).toBeCloseTo(0, 6);
+    expect(result.check?.violations).toEqual([]);
+    expect(result.quality).toBe('Proven best possible roster.');
+    expect(result.unmetNeeds).toEqual([]);
+    // The roster really covers every need: count rn on each shift of each day.
+    const problem = smallWard();
+    for (const need of problem.coverNeeds) {
+      const count = problem.people.filter(
+        (p) =>
+          (need.skillId === null || p.skills.includes(need.skillId)) &&
+          result.roster?.[p.id][need.day] === need.shiftTypeId,
+      ).length;
+      expect(count).toBeGreaterThanOrEqual(need.min);
+    }
+  });
+
+  it('emits throttled progress and respects the time limit on a problem it cannot finish', async () => {
+    const events: SolveProgress[] = [];
+    const limit = 6;
+    const result = await solveRoster(busyUnit(), {
+      timeLimitSeconds: limit,
+      onProgress: (p) => events.push(p),
+    });
+    expect(result.status).toBe('timeLimit');
+    // Not a speed test: the limit covers the whole call, but model building and the heuristic
+    // cannot be interrupted (on a loaded machine they may use it all up), and HiGHS checks its clock
+    // between steps. So: HiGHS stops within a second of the limit, or of the end of the setup.
+    // Without the limit this problem runs for minutes.
+    expect(result.seconds).toBeLessThan(Math.max(limit, result.setupSeconds) + 1);
+    if (result.roster !== null) {
+      expect(result.check?.violations).toEqual([]);
+      expect(result.gap).not.toBeNull();
+      expect(result.quality).toMatch(
+        /^No roster can be more than \d+(\.\d)?% better than this one \(stopped at the time limit\)\.$/,
+      );
+    } else {
+      // On a heavily loaded machine the heuristic and HiGHS may not reach a roster in time.
+      expect(result.quality).toBe('Stopped at the time limit before a roster was found.');
+    }
+    // Progress: several events, time moving forward, at most about 4 a second (the last one is forced).
+    expect(events.length).toBeGreaterThanOrEqual(2);
+    for (let i = 1; i < events.length; i++) {
+      expect(events[i].elapsedSeconds).toBeGreaterThanOrEqual(events[i - 1].elapsedSeconds);
+      if (i < events.length - 1)
+        expect(events[i].elapsedSeconds - events[i - 1].elapsedSeconds).toBeGreaterThan(0.2);
+    }
+    const last = events[events.length - 1];
+    if (result.objective !== null) expect(last.objective).toBeCloseTo(result.objective, 6);
+    expect(last.bound).toBe(result.bound);
+  });
+
+  it('stops on cancel and keeps the best roster found so far', async () => {
+    const controller = new AbortController();
+    let seenObjective: number | null = null;
+    const result = await solveRoster(busyUnit(), {
+      timeLimitSeconds: 60,
+      signal: controller.signal,
+      onProgress: (p) => {
+        if (p.objective !== null && seenObjective === null) {
+          seenObjective = p.objective;
+          controller.abort();
+        }
+      },
+    });
+    expect(seenObjective).not.toBeNull();
+    expect(result.status).toBe('interrupted');
+    expect(result.seconds).toBeLessThan(30);
+    expect(result.roster).not.toBeNull();
+    expect(result.check?.violations).toEqual([]);
+    // The incumbent kept is the one seen, or a better one found before the interrupt took effect.
+    expect(result.objective as number).toBeLessThanOrEqual((seenObjective as unknown as number) + 1e-6);
+    expect(result.quality).toMatch(/\(stopped early\)/);
+  });
+
+  it('reports "no roster" correctly when stopped before any was found', async () => {
+    // No warm start and a limit shorter than presolve: HiGHS ends with an infinite objective.
+    const result = await solveRoster(busyUnit(), { timeLimitSeconds: 0.01, warmStart: null });
+    expect(result.status).toBe('timeLimit');
+    expect(result.roster).toBeNull();
+    expect(result.objective).toBeNull();
+    expect(result.check).toBeNull();
+    expect(result.quality).toBe('Stopped at the time limit before a roster was found.');
+  });
+
+  it('keeps a valid warm start when stopped before HiGHS took it', async () => {
+    // A roster that meets every hard rule (the small ward's optimum), given as the start, with a limit
+    // shorter than HiGHS's own setup: HiGHS reports no solution, the start must still be returned.
+    const problem = smallWard();
+    const first = await solveRoster(problem, { timeLimitSeconds: 60, explain: false });
+    const result = await solveRoster(problem, {
+      timeLimitSeconds: 0.01,
+      explain: false,
+      warmStart: first.roster!,
+    });
+    expect(result.warmStartObjective).toBe(first.objective);
+    expect(result.roster).not.toBeNull();
+    expect(result.check?.violations).toEqual([]);
+    expect(result.objective).toBe(first.objective);
+  });
+
+  it('fails loudly when the checker disagrees with the solver', async () => {
+    // Simulate a model bug: the checker is handed the solver's roster with one person's day
+    // changed, so its objective (and possibly its rule verdict) differs from the solver's.
+    const real = checker.checkRoster;
+    jest.spyOn(checker, 'checkRoster').mockImplementation((problem, roster, index) => {
+      const tampered = {
+        ...roster,
+        ada: roster.ada.map((s, d) => (d === 0 ? (s === null ? 'E' : null) : s)),
+      };
+      return real(problem, tampered, index);
+    });
+    await expect(solveRoster(smallWard(), { timeLimitSeconds: 60 })).rejects.toThrow(SolverCheckError);
+  });
+
+  it('assertCheckerAgrees accepts the checker’s verdict on a solver roster and rejects a planted violation', async () => {
+    const problem = smallWard();
+    const result = await solveRoster(problem, { timeLimitSeconds: 60, explain: false });
+    const roster = result.roster!;
+    const check = checker.checkRoster(problem, roster);
+    expect(() => assertCheckerAgrees(check, result.objective!)).not.toThrow();
+    // Objective off by one unit: rejected.
+    expect(() => assertCheckerAgrees(check, result.objective! + 1)).toThrow(/objective/);
+    // Planted violation: ada works 7 days in a row (contract allows 5).
+    const planted = { ...roster, ada: ['E', 'E', 'E', 'E', 'E', 'E', 'E'] };
+    const bad = checker.checkRoster(problem, planted);
+    expect(() => assertCheckerAgrees(bad, bad.objective)).toThrow(/hard rule/);
+  });
+
+  it('starts from a given roster (repair-style warm start) and reports its objective', async () => {
+    const problem = smallWard();
+    const first = await solveRoster(problem, { timeLimitSeconds: 60, explain: false });
+    const again = await solveRoster(problem, {
+      timeLimitSeconds: 60,
+      explain: false,
+      warmStart: first.roster!,
+    });
+    expect(again.warmStartObjective).toBe(first.objective);
+    expect(again.objective).toBe(first.objective);
+  });
+});
