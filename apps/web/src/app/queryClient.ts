@@ -1,0 +1,17 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiRequestError } from '@/api/errors';
+
+/** Client errors (4xx) are answers, not glitches: retrying them only delays the message. */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (error instanceof ApiRequestError && error.status < 500) return false;
+  return failureCount < 2;
+}
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: true },
+      mutations: { retry: false },
+    },
+  });
+}

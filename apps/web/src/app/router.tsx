@@ -1,0 +1,137 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { session } from '@/api/session';
+import { RequirePermission } from '@/features/auth/components/RequirePermission';
+import { RequireSession } from '@/features/auth/components/RequireSession';
+import {
+  mailboxListQuery,
+  mailboxMessageQuery,
+  DEFAULT_MAILBOX_PAGE,
+} from '@/features/mailbox/api/mailbox.queries';
+import { organisationQuery } from '@/features/organisation/api/organisation.queries';
+import { unitsQuery } from '@/features/units/api/units.queries';
+import { usersListQuery } from '@/features/users/api/users.queries';
+import { readUsersListParams } from '@/features/users/usersListParams';
+import { AppShell } from '@/features/navigation/components/AppShell';
+import { ErrorPage } from '@/pages/ErrorPage';
+import { LoadingState } from '@/ui/LoadingState';
+import { PATHS, ROUTE_PATTERNS } from './paths';
+
+/** Turns `() => import('./XPage')` into a lazy route whose chunk loads on first visit. */
+function page<K extends string>(load: () => Promise<Record<K, ComponentType>>, name: K): RouteObject['lazy'] {
+  return async () => ({ Component: (await load())[name] });
+}
+
+/** Starts fetching a page's data alongside its code, when someone is signed in to receive it. */
+function prefetch(run: () => Promise<unknown>): () => null {
+  return () => {
+    if (session.getState().status === 'signedIn') void run().catch(() => undefined);
+    return null;
+  };
+}
+
+export function createRouter(queryClient: QueryClient) {
+  const routes: RouteObject[] = [
+    {
+      errorElement: <ErrorPage />,
+      hydrateFallbackElement: <LoadingState fullPage label="Opening Rotaplex…" />,
+      children: [
+        { path: PATHS.signIn, lazy: page(() => import('@/pages/SignInPage'), 'SignInPage') },
+        {
+          path: PATHS.acceptInvitation,
+          lazy: page(() => import('@/pages/AcceptInvitationPage'), 'AcceptInvitationPage'),
+        },
+        {
+          path: PATHS.forgotPassword,
+          lazy: page(() => import('@/pages/ForgotPasswordPage'), 'ForgotPasswordPage'),
+        },
+        {
+          path: PATHS.resetPassword,
+          lazy: page(() => import('@/pages/ResetPasswordPage'), 'ResetPasswordPage'),
+        },
+        {
+          element: <RequireSession />,
+          children: [
+            {
+              element: <AppShell />,
+              children: [
+                {
+                  errorElement: <ErrorPage />,
+                  children: [
+                    {
+                      index: true,
+                      loader: prefetch(() => queryClient.prefetchQuery(unitsQuery())),
+                      lazy: page(() => import('@/pages/HomePage'), 'HomePage'),
+                    },
+                    { path: PATHS.profile, lazy: page(() => import('@/pages/ProfilePage'), 'ProfilePage') },
+                    {
+                      element: <RequirePermission permission="users:read" />,
+                      children: [
+                        {
+                          path: PATHS.users,
+                          loader: ({ request }) =>
+                            prefetch(() =>
+                              Promise.all([
+                                queryClient.prefetchQuery(
+                                  usersListQuery(readUsersListParams(new URL(request.url).searchParams)),
+                                ),
+                                queryClient.prefetchQuery(unitsQuery()),
+                              ]),
+                            )(),
+                          lazy: page(() => import('@/pages/UsersPage'), 'UsersPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="units:write" />,
+                      children: [
+                        {
+                          path: PATHS.units,
+                          loader: prefetch(() => queryClient.prefetchQuery(unitsQuery())),
+                          lazy: page(() => import('@/pages/UnitsPage'), 'UnitsPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="organisation:manage" />,
+                      children: [
+                        {
+                          path: PATHS.organisation,
+                          loader: prefetch(() => queryClient.prefetchQuery(organisationQuery())),
+                          lazy: page(() => import('@/pages/OrganisationPage'), 'OrganisationPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="mailbox:read" />,
+                      children: [
+                        {
+                          path: PATHS.mailbox,
+                          loader: prefetch(() =>
+                            queryClient.prefetchQuery(mailboxListQuery(DEFAULT_MAILBOX_PAGE)),
+                          ),
+                          lazy: page(() => import('@/pages/MailboxPage'), 'MailboxPage'),
+                        },
+                        {
+                          path: ROUTE_PATTERNS.mailboxMessage,
+                          loader: ({ params }) =>
+                            prefetch(() =>
+                              queryClient.prefetchQuery(mailboxMessageQuery(params.messageId ?? '')),
+                            )(),
+                          lazy: page(() => import('@/pages/MailMessagePage'), 'MailMessagePage'),
+                        },
+                      ],
+                    },
+                    { path: '*', lazy: page(() => import('@/pages/NotFoundPage'), 'NotFoundPage') },
+                  ],
+                },
+              ],
+            },
+          ],
+        },
+      ],
+    },
+  ];
+  return createBrowserRouter(routes);
+}
