@@ -16,6 +16,12 @@ import { MailModule } from './mail/mail.module';
 import { OrganisationModule } from './organisation/organisation.module';
 import { UnitsModule } from './units/units.module';
 import { UsersModule } from './users/users.module';
+import { SkillsModule } from './skills/skills.module';
+import { ShiftTypesModule } from './shift-types/shift-types.module';
+import { ContractsModule } from './contracts/contracts.module';
+import { StaffModule } from './staff/staff.module';
+import { CoverNeedsModule } from './cover-needs/cover-needs.module';
+import { RosterPeriodsModule } from './roster-periods/roster-periods.module';
 
 @Module({})
 export class AppModule {
@@ -39,6 +45,12 @@ export class AppModule {
         UnitsModule,
         UsersModule,
         AuthModule,
+        SkillsModule,
+        ShiftTypesModule,
+        ContractsModule,
+        StaffModule,
+        CoverNeedsModule,
+        RosterPeriodsModule,
         DemoModule,
       ],
       providers: [

@@ -2,3 +2,4 @@ export * from './lib/roles';
 export * from './lib/routes';
 export * from './lib/dto';
 export * from './lib/users-query';
+export * from './lib/planning';

@@ -4,6 +4,12 @@ import { MailMessageEntity } from '../mail/mail-message.entity';
 import { OrganisationEntity } from '../organisation/organisation.entity';
 import { UnitEntity } from '../units/unit.entity';
 import { UserEntity } from '../users/user.entity';
+import { SkillEntity } from '../skills/skill.entity';
+import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
+import { ContractEntity } from '../contracts/contract.entity';
+import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
+import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 
 /** Every entity of the schema; the migrations in ./migrations must produce exactly these tables. */
 export const ENTITIES = [
@@ -13,4 +19,11 @@ export const ENTITIES = [
   RefreshTokenEntity,
   OneTimeTokenEntity,
   MailMessageEntity,
+  SkillEntity,
+  ShiftTypeEntity,
+  ContractEntity,
+  StaffMemberEntity,
+  CoverPatternRowEntity,
+  CoverOverrideEntity,
+  RosterPeriodEntity,
 ];

@@ -27,11 +27,19 @@ describe('database migrations', () => {
         )
       ).map((r: { name: string }) => r.name);
       expect(tables).toEqual([
+        'contracts',
+        'cover_overrides',
+        'cover_pattern_rows',
         'mail_messages',
         'migrations',
         'one_time_tokens',
         'organisations',
         'refresh_tokens',
+        'roster_periods',
+        'shift_types',
+        'skills',
+        'staff_member_skills',
+        'staff_members',
         'units',
         'user_units',
         'users',

@@ -10,6 +10,7 @@ import { OrganisationEntity } from '../organisation/organisation.entity';
 import { UnitEntity } from '../units/unit.entity';
 import { UserEntity } from '../users/user.entity';
 import { DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_UNITS, DEMO_USERS } from './demo-data';
+import { seedDemoPlanning } from './demo-planning';
 
 /**
  * On the first start (no organisation yet): with SEED_DEMO, the invented demo organisation and its
@@ -43,8 +44,9 @@ export class FirstRunService implements OnApplicationBootstrap {
         ward: await em.save(em.create(UnitEntity, { organisationId: org.id, ...DEMO_UNITS.ward })),
         contact: await em.save(em.create(UnitEntity, { organisationId: org.id, ...DEMO_UNITS.contact })),
       };
+      const usersByEmail = new Map<string, UserEntity>();
       for (const u of DEMO_USERS) {
-        await em.save(
+        const saved = await em.save(
           em.create(UserEntity, {
             organisationId: org.id,
             email: u.email,
@@ -55,7 +57,9 @@ export class FirstRunService implements OnApplicationBootstrap {
             units: u.unit ? [units[u.unit]] : [],
           }),
         );
+        usersByEmail.set(u.email, saved);
       }
+      await seedDemoPlanning(em, org.id, units, usersByEmail, new Date());
     });
     this.logger.log(
       `Demo data seeded: ${DEMO_USERS.length} people. Sign in as admin@example.com, manager@example.com or staff@example.com with the password "${DEMO_PASSWORD}".`,

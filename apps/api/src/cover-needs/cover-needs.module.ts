@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { UnitsModule } from '../units/units.module';
+import { CoverOverrideEntity, CoverPatternRowEntity } from './cover-need.entity';
+import { CoverNeedsController } from './cover-needs.controller';
+import { CoverNeedsService } from './cover-needs.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([CoverPatternRowEntity, CoverOverrideEntity]), UnitsModule],
+  controllers: [CoverNeedsController],
+  providers: [CoverNeedsService],
+})
+export class CoverNeedsModule {}

@@ -1,0 +1,258 @@
+import { type ContractRules } from '@rotaplex/contracts';
+import { type EntityManager } from 'typeorm';
+import { ContractEntity } from '../contracts/contract.entity';
+import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
+import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { addDays } from '../roster-periods/roster-periods.service';
+import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
+import { SkillEntity } from '../skills/skill.entity';
+import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { type UnitEntity } from '../units/unit.entity';
+import { type UserEntity } from '../users/user.entity';
+import { DEMO_USERS, type DemoUnitKey } from './demo-data';
+
+/**
+ * Invented planning data for the demo organisation: skills, shift types, two contracts, a staff
+ * member for every demo staff user, weekly cover patterns, one date override and a four-week draft
+ * roster period per unit. All numbers are invented for the demo.
+ */
+export const DEMO_SKILLS = [
+  { code: 'RN', name: 'Registered nurse' },
+  { code: 'HCA', name: 'Healthcare assistant' },
+  { code: 'EN', name: 'English' },
+  { code: 'GA', name: 'Irish' },
+  { code: 'FR', name: 'French' },
+  { code: 'PL', name: 'Polish' },
+  { code: 'ES', name: 'Spanish' },
+  { code: 'DE', name: 'German' },
+  { code: 'PT', name: 'Portuguese' },
+  { code: 'IT', name: 'Italian' },
+  { code: 'AR', name: 'Arabic' },
+] as const;
+
+const LANGUAGE_SKILL: Record<string, string> = {
+  English: 'EN',
+  Irish: 'GA',
+  French: 'FR',
+  Polish: 'PL',
+  Spanish: 'ES',
+  German: 'DE',
+  Portuguese: 'PT',
+  Italian: 'IT',
+  Arabic: 'AR',
+};
+
+export const DEMO_SHIFT_TYPES: Record<
+  DemoUnitKey,
+  Pick<ShiftTypeEntity, 'code' | 'name' | 'start' | 'end' | 'paidMinutes' | 'colour' | 'night'>[]
+> = {
+  ward: [
+    { code: 'E', name: 'Early', start: '07:00', end: '15:00', paidMinutes: 450, colour: 'teal', night: null },
+    { code: 'L', name: 'Late', start: '14:30', end: '22:30', paidMinutes: 450, colour: 'amber', night: null },
+    { code: 'N', name: 'Night', start: '22:00', end: '07:30', paidMinutes: 540, colour: 'plum', night: true },
+  ],
+  contact: [
+    { code: 'D', name: 'Day', start: '08:00', end: '16:30', paidMinutes: 480, colour: 'sky', night: null },
+    {
+      code: 'EV',
+      name: 'Evening',
+      start: '13:30',
+      end: '22:00',
+      paidMinutes: 480,
+      colour: 'coral',
+      night: null,
+    },
+  ],
+};
+
+const NONE: ContractRules = {
+  maxShiftsPerType: null,
+  minPaidMinutes: null,
+  maxPaidMinutes: null,
+  targetPaidMinutes: null,
+  maxConsecutiveWorkDays: null,
+  minConsecutiveWorkDays: null,
+  minConsecutiveDaysOff: null,
+  maxWeekends: null,
+  maxConsecutiveNights: null,
+  minRestMinutes: null,
+};
+
+/** Organisation-wide contracts, per week (weekends per 4 weeks). */
+export const DEMO_CONTRACTS: { name: string; rules: ContractRules }[] = [
+  {
+    name: 'Full-time 37.5 h',
+    rules: {
+      ...NONE,
+      targetPaidMinutes: 2250,
+      minPaidMinutes: 1800,
+      maxPaidMinutes: 2880,
+      maxConsecutiveWorkDays: 6,
+      minConsecutiveDaysOff: 2,
+      maxWeekends: 2,
+      maxConsecutiveNights: 4,
+      minRestMinutes: 660,
+    },
+  },
+  {
+    name: 'Part-time 22.5 h',
+    rules: {
+      ...NONE,
+      targetPaidMinutes: 1350,
+      minPaidMinutes: 900,
+      maxPaidMinutes: 1800,
+      maxConsecutiveWorkDays: 4,
+      maxWeekends: 2,
+      maxConsecutiveNights: 3,
+      minRestMinutes: 660,
+    },
+  },
+];
+
+/** Demo people on the part-time contract. */
+const PART_TIME = new Set(['Beth Lindqvist', 'Lucy Fenwick', 'Ana Ferreira', 'Marco Bellini']);
+
+/** Skill codes of a demo person, read from the note that describes them. */
+export function demoSkillsOf(unit: DemoUnitKey, note: string): string[] {
+  if (unit === 'ward') return /nurse/i.test(note) ? ['RN'] : ['HCA'];
+  const languages = /\(([^)]*)\)/
+    .exec(note)?.[1]
+    .split(',')
+    .map((s) => s.trim()) ?? ['English'];
+  return [...new Set(['EN', ...languages.map((l) => LANGUAGE_SKILL[l]).filter(Boolean)])];
+}
+
+/** The Monday on or after `today` + 21 days ("YYYY-MM-DD" in, "YYYY-MM-DD" out). */
+export function demoPeriodStart(today: string): string {
+  const earliest = addDays(today, 21);
+  const weekday = new Date(`${earliest}T00:00:00Z`).getUTCDay(); // 0 = Sunday, 1 = Monday
+  return addDays(earliest, (8 - weekday) % 7);
+}
+
+/** Today's date in a time zone, "YYYY-MM-DD". */
+export function localDate(now: Date, timeZone: string): string {
+  return new Intl.DateTimeFormat('en-CA', {
+    timeZone,
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+  }).format(now);
+}
+
+type Need = { shift: string; skill: string | null; min: number; target: number };
+const WEEKDAYS = [1, 2, 3, 4, 5];
+const EVERY_DAY = [0, 1, 2, 3, 4, 5, 6];
+
+/** Weekly cover pattern per unit: the same needs on the listed weekdays (0 = Sunday). */
+const DEMO_PATTERN: Record<DemoUnitKey, { weekdays: number[]; needs: Need[] }[]> = {
+  ward: [
+    {
+      weekdays: EVERY_DAY,
+      needs: [
+        { shift: 'E', skill: 'RN', min: 3, target: 3 },
+        { shift: 'E', skill: 'HCA', min: 1, target: 2 },
+        { shift: 'L', skill: 'RN', min: 2, target: 3 },
+        { shift: 'L', skill: 'HCA', min: 1, target: 1 },
+        { shift: 'N', skill: 'RN', min: 2, target: 2 },
+        { shift: 'N', skill: 'HCA', min: 1, target: 1 },
+      ],
+    },
+  ],
+  contact: [
+    {
+      weekdays: WEEKDAYS,
+      needs: [
+        { shift: 'D', skill: null, min: 4, target: 5 },
+        { shift: 'D', skill: 'FR', min: 1, target: 1 },
+        { shift: 'D', skill: 'PL', min: 1, target: 1 },
+        { shift: 'D', skill: 'GA', min: 0, target: 1 },
+        { shift: 'EV', skill: null, min: 2, target: 3 },
+      ],
+    },
+    {
+      weekdays: [6],
+      needs: [
+        { shift: 'D', skill: null, min: 2, target: 3 },
+        { shift: 'EV', skill: null, min: 1, target: 2 },
+      ],
+    },
+  ],
+};
+
+/** Seeds the planning data inside the demo seed's transaction. */
+export async function seedDemoPlanning(
+  em: EntityManager,
+  organisationId: string,
+  units: Record<DemoUnitKey, UnitEntity>,
+  usersByEmail: Map<string, UserEntity>,
+  now: Date,
+): Promise<void> {
+  const skills = new Map<string, SkillEntity>();
+  for (const s of DEMO_SKILLS)
+    skills.set(s.code, await em.save(em.create(SkillEntity, { organisationId, ...s })));
+
+  const contracts = new Map<string, ContractEntity>();
+  for (const c of DEMO_CONTRACTS) {
+    contracts.set(
+      c.name,
+      await em.save(em.create(ContractEntity, { organisationId, unitId: null, name: c.name, ...c.rules })),
+    );
+  }
+
+  for (const key of Object.keys(units) as DemoUnitKey[]) {
+    const unit = units[key];
+    const shifts = new Map<string, ShiftTypeEntity>();
+    for (const st of DEMO_SHIFT_TYPES[key]) {
+      shifts.set(st.code, await em.save(em.create(ShiftTypeEntity, { unitId: unit.id, ...st })));
+    }
+    for (const block of DEMO_PATTERN[key]) {
+      for (const weekday of block.weekdays) {
+        for (const n of block.needs) {
+          await em.save(
+            em.create(CoverPatternRowEntity, {
+              unitId: unit.id,
+              weekday,
+              shiftTypeId: shifts.get(n.shift)!.id,
+              skillId: n.skill ? skills.get(n.skill)!.id : null,
+              min: n.min,
+              target: n.target,
+            }),
+          );
+        }
+      }
+    }
+
+    for (const u of DEMO_USERS.filter((d) => d.unit === key && d.role === 'staff')) {
+      const user = usersByEmail.get(u.email)!;
+      await em.save(
+        em.create(StaffMemberEntity, {
+          unitId: unit.id,
+          userId: user.id,
+          name: u.displayName,
+          email: u.email,
+          contractId: contracts.get(PART_TIME.has(u.displayName) ? 'Part-time 22.5 h' : 'Full-time 37.5 h')!
+            .id,
+          hourlyCost: key === 'ward' ? (/nurse/i.test(u.note) ? 24.5 : 15.8) : 16.2,
+          active: true,
+          skills: demoSkillsOf(key, u.note).map((code) => skills.get(code)!),
+        }),
+      );
+    }
+
+    const startDate = demoPeriodStart(localDate(now, unit.timeZone));
+    await em.save(em.create(RosterPeriodEntity, { unitId: unit.id, startDate, days: 28, status: 'draft' }));
+    // An event on the ward's second Wednesday: one more registered nurse on the early shift.
+    if (key === 'ward') {
+      await em.save(
+        em.create(CoverOverrideEntity, {
+          unitId: unit.id,
+          date: addDays(startDate, 9),
+          shiftTypeId: shifts.get('E')!.id,
+          skillId: skills.get('RN')!.id,
+          min: 4,
+          target: 4,
+        }),
+      );
+    }
+  }
+}

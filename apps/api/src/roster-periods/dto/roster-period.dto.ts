@@ -1,0 +1,73 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  type CreateRosterPeriodRequest,
+  ROSTER_PERIOD_MAX_DAYS,
+  ROSTER_PERIOD_MIN_DAYS,
+  ROSTER_PERIOD_STATUSES,
+  type RosterPeriodDto,
+  type RosterPeriodListQuery,
+  type RosterPeriodStatus,
+  type UpdateRosterPeriodRequest,
+} from '@rotaplex/contracts';
+import { IsIn, IsInt, IsOptional, IsUUID, Matches, Max, Min } from 'class-validator';
+
+const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+
+export class CreateRosterPeriodDto implements CreateRosterPeriodRequest {
+  @ApiProperty({ format: 'uuid' })
+  @IsUUID('all', { message: 'unitId must be a unit id' })
+  unitId!: string;
+
+  @ApiProperty({ example: '2027-01-04', description: 'First day, YYYY-MM-DD' })
+  @Matches(DATE, { message: 'startDate must be a date YYYY-MM-DD' })
+  startDate!: string;
+
+  @ApiProperty({ minimum: ROSTER_PERIOD_MIN_DAYS, maximum: ROSTER_PERIOD_MAX_DAYS, example: 28 })
+  @IsInt()
+  @Min(ROSTER_PERIOD_MIN_DAYS)
+  @Max(ROSTER_PERIOD_MAX_DAYS)
+  days!: number;
+}
+
+export class UpdateRosterPeriodDto implements UpdateRosterPeriodRequest {
+  @ApiPropertyOptional({ example: '2027-01-04' })
+  @IsOptional()
+  @Matches(DATE, { message: 'startDate must be a date YYYY-MM-DD' })
+  startDate?: string;
+
+  @ApiPropertyOptional({ minimum: ROSTER_PERIOD_MIN_DAYS, maximum: ROSTER_PERIOD_MAX_DAYS })
+  @IsOptional()
+  @IsInt()
+  @Min(ROSTER_PERIOD_MIN_DAYS)
+  @Max(ROSTER_PERIOD_MAX_DAYS)
+  days?: number;
+
+  @ApiPropertyOptional({ description: 'Expected current version; 409 when the period changed meanwhile' })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  version?: number;
+}
+
+export class RosterPeriodQueryDto implements RosterPeriodListQuery {
+  @ApiPropertyOptional({ format: 'uuid' })
+  @IsOptional()
+  @IsUUID('all', { message: 'unitId must be a unit id' })
+  unitId?: string;
+
+  @ApiPropertyOptional({ enum: ROSTER_PERIOD_STATUSES })
+  @IsOptional()
+  @IsIn(ROSTER_PERIOD_STATUSES, { message: `status must be one of ${ROSTER_PERIOD_STATUSES.join(', ')}` })
+  status?: RosterPeriodStatus;
+}
+
+export class RosterPeriodResponse implements RosterPeriodDto {
+  @ApiProperty({ format: 'uuid' }) id!: string;
+  @ApiProperty({ format: 'uuid' }) unitId!: string;
+  @ApiProperty() startDate!: string;
+  @ApiProperty() days!: number;
+  @ApiProperty({ enum: ROSTER_PERIOD_STATUSES }) status!: RosterPeriodStatus;
+  @ApiProperty({ format: 'date-time' }) createdAt!: string;
+  @ApiProperty({ format: 'date-time', nullable: true, type: String }) publishedAt!: string | null;
+  @ApiProperty() version!: number;
+}

@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { UnitsModule } from '../units/units.module';
+import { RosterPeriodEntity } from './roster-period.entity';
+import { RosterPeriodsController } from './roster-periods.controller';
+import { RosterPeriodsService } from './roster-periods.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([RosterPeriodEntity]), UnitsModule],
+  controllers: [RosterPeriodsController],
+  providers: [RosterPeriodsService],
+  exports: [RosterPeriodsService],
+})
+export class RosterPeriodsModule {}

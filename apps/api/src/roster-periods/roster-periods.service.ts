@@ -1,0 +1,166 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { type RosterPeriodDto } from '@rotaplex/contracts';
+import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
+import { type AuthUser } from '../common/auth-user';
+import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
+import { isRealDate } from '../cover-needs/cover-needs.service';
+import { UnitEntity } from '../units/unit.entity';
+import { UnitsService } from '../units/units.service';
+import {
+  type CreateRosterPeriodDto,
+  type RosterPeriodQueryDto,
+  type UpdateRosterPeriodDto,
+} from './dto/roster-period.dto';
+import { RosterPeriodEntity } from './roster-period.entity';
+
+/** Staff see only published and archived periods; drafts are for planners. */
+const STAFF_STATUSES = ['published', 'archived'] as const;
+
+@Injectable()
+export class RosterPeriodsService {
+  constructor(
+    @InjectRepository(RosterPeriodEntity) private readonly periods: Repository<RosterPeriodEntity>,
+    private readonly units: UnitsService,
+    private readonly dataSource: DataSource,
+  ) {}
+
+  async list(user: AuthUser, query: RosterPeriodQueryDto): Promise<RosterPeriodDto[]> {
+    if (query.unitId) await this.units.get(user, query.unitId);
+    const qb = this.periods
+      .createQueryBuilder('p')
+      .innerJoin(UnitEntity, 'unit', 'unit.id = p.unitId')
+      .where('unit.organisationId = :org', { org: user.organisationId });
+    const visible = visibleUnitIds(user);
+    if (visible !== null) {
+      if (!visible.length) return [];
+      qb.andWhere('p.unitId IN (:...visible)', { visible });
+    }
+    if (query.unitId) qb.andWhere('p.unitId = :unitId', { unitId: query.unitId });
+    if (query.status) qb.andWhere('p.status = :status', { status: query.status });
+    if (user.role === 'staff') qb.andWhere('p.status IN (:...staff)', { staff: STAFF_STATUSES });
+    const rows = await qb.orderBy('p.startDate', 'DESC').addOrderBy('p.id', 'ASC').getMany();
+    return rows.map(toRosterPeriodDto);
+  }
+
+  async get(user: AuthUser, id: string): Promise<RosterPeriodDto> {
+    return toRosterPeriodDto(await this.load(user, id));
+  }
+
+  async create(user: AuthUser, body: CreateRosterPeriodDto): Promise<RosterPeriodDto> {
+    await this.units.get(user, body.unitId);
+    assertRealDate(body.startDate);
+    const saved = await this.dataSource.transaction(async (em) => {
+      await assertNoOverlap(em, body.unitId, body.startDate, body.days);
+      return em.save(
+        em.create(RosterPeriodEntity, {
+          unitId: body.unitId,
+          startDate: body.startDate,
+          days: body.days,
+          status: 'draft',
+          publishedAt: null,
+        }),
+      );
+    });
+    return toRosterPeriodDto(saved);
+  }
+
+  /** Changes dates of a draft only; `version`, when given, must match (optimistic locking). */
+  async update(user: AuthUser, id: string, body: UpdateRosterPeriodDto): Promise<RosterPeriodDto> {
+    await this.load(user, id);
+    if (body.startDate !== undefined) assertRealDate(body.startDate);
+    const saved = await this.dataSource.transaction(async (em) => {
+      const period = await em.findOneByOrFail(RosterPeriodEntity, { id });
+      if (period.status !== 'draft') {
+        throw new ConflictException(`Only a draft period can be changed; this one is ${period.status}`);
+      }
+      if (body.version !== undefined && body.version !== period.version) {
+        throw new ConflictException(
+          `The period was changed meanwhile (version ${period.version}, not ${body.version}): reload it`,
+        );
+      }
+      const startDate = body.startDate ?? period.startDate;
+      const days = body.days ?? period.days;
+      await assertNoOverlap(em, period.unitId, startDate, days, id);
+      period.startDate = startDate;
+      period.days = days;
+      return em.save(period);
+    });
+    return toRosterPeriodDto(saved);
+  }
+
+  async archive(user: AuthUser, id: string): Promise<RosterPeriodDto> {
+    const period = await this.load(user, id);
+    if (period.status === 'archived') throw new ConflictException('The period is already archived');
+    period.status = 'archived';
+    return toRosterPeriodDto(await this.periods.save(period));
+  }
+
+  /** Deletes a draft; published and archived periods stay on record (409). */
+  async remove(user: AuthUser, id: string): Promise<void> {
+    const period = await this.load(user, id);
+    if (period.status !== 'draft') {
+      throw new ConflictException(`Only a draft period can be deleted; this one is ${period.status}`);
+    }
+    await this.periods.delete({ id });
+  }
+
+  private async load(user: AuthUser, id: string): Promise<RosterPeriodEntity> {
+    const period = await this.periods
+      .createQueryBuilder('p')
+      .innerJoin(UnitEntity, 'unit', 'unit.id = p.unitId')
+      .where('p.id = :id AND unit.organisationId = :org', { id, org: user.organisationId })
+      .getOne();
+    if (!period) throw new NotFoundException('Roster period not found');
+    assertUnitAccess(user, period.unitId);
+    if (user.role === 'staff' && period.status === 'draft')
+      throw new NotFoundException('Roster period not found');
+    return period;
+  }
+}
+
+function assertRealDate(date: string): void {
+  if (!isRealDate(date)) throw new BadRequestException(['startDate must be a real calendar date']);
+}
+
+/** "YYYY-MM-DD" plus n days. */
+export function addDays(date: string, n: number): string {
+  const d = new Date(`${date}T00:00:00Z`);
+  d.setUTCDate(d.getUTCDate() + n);
+  return d.toISOString().slice(0, 10);
+}
+
+/** Refuses (409) a period that shares a day with another non-archived period of the unit. */
+async function assertNoOverlap(
+  em: EntityManager,
+  unitId: string,
+  startDate: string,
+  days: number,
+  exceptId?: string,
+): Promise<void> {
+  const end = addDays(startDate, days); // exclusive
+  const others = await em.findBy(RosterPeriodEntity, {
+    unitId,
+    status: In(['draft', 'published']),
+    ...(exceptId ? { id: Not(exceptId) } : {}),
+  });
+  const clash = others.find((o) => o.startDate < end && startDate < addDays(o.startDate, o.days));
+  if (clash) {
+    throw new ConflictException(
+      `The period overlaps the ${clash.status} period from ${clash.startDate} to ${addDays(clash.startDate, clash.days - 1)}`,
+    );
+  }
+}
+
+export function toRosterPeriodDto(p: RosterPeriodEntity): RosterPeriodDto {
+  return {
+    id: p.id,
+    unitId: p.unitId,
+    startDate: p.startDate,
+    days: p.days,
+    status: p.status,
+    createdAt: p.createdAt.toISOString(),
+    publishedAt: p.publishedAt ? p.publishedAt.toISOString() : null,
+    version: p.version,
+  };
+}
