@@ -1,0 +1,18 @@
+export * from './lib/problem';
+export * from './lib/result';
+export * from './lib/time';
+export { MipBuilder, type ColumnMeta, type HighsModelArrays, type RowMeta } from './lib/model/builder';
+export { ProblemIndex, ModelContext, type Grid, type RuleModule, type GoalModule } from './lib/model/context';
+export { buildModel, type BuildOptions, type BuiltModel } from './lib/model/build-model';
+export { RULES } from './lib/rules';
+export { GOALS } from './lib/goals';
+export { checkRoster } from './lib/check/checker';
+export { validateProblem, InvalidProblemError } from './lib/check/validate';
+export { construct, improve, type ConstructOptions } from './lib/heuristic/construct';
+export {
+  fixAndOptimise,
+  type FixAndOptimiseOptions,
+  type FixAndOptimiseResult,
+  type SubMipResult,
+  type SubMipSolver,
+} from './lib/heuristic/fix-and-optimise';
