@@ -27,6 +27,12 @@ describe('signing in by role', () => {
     expect(await navLinks(page)).toEqual([
       'Overview',
       'Profile',
+      'Roster periods',
+      'Cover needs',
+      'Staff',
+      'Shift types',
+      'Contracts',
+      'Skills',
       'People',
       'Units',
       'Organisation',
@@ -75,7 +81,17 @@ describe('signing in by role', () => {
   it('shows a manager the people of their own unit only', async () => {
     const { page } = browser;
     await signIn(page, 'manager@example.com');
-    expect(await navLinks(page)).toEqual(['Overview', 'Profile', 'People']);
+    expect(await navLinks(page)).toEqual([
+      'Overview',
+      'Profile',
+      'Roster periods',
+      'Cover needs',
+      'Staff',
+      'Shift types',
+      'Contracts',
+      'Skills',
+      'People',
+    ]);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'People' }).click();
     const table = page.getByRole('table', { name: 'People' });
     await page.getByRole('searchbox', { name: /Search people/ }).fill('example.com');

@@ -13,6 +13,12 @@ export const PATHS = {
   organisation: '/admin/organisation',
   mailbox: '/admin/mailbox',
   mailboxMessage: (id: string) => `/admin/mailbox/${encodeURIComponent(id)}`,
+  shiftTypes: '/planning/shift-types',
+  skills: '/planning/skills',
+  contracts: '/planning/contracts',
+  staff: '/planning/staff',
+  coverNeeds: '/planning/cover-needs',
+  rosterPeriods: '/planning/periods',
 } as const;
 
 /** Route patterns for parameterised paths (the router's side of PATHS). */

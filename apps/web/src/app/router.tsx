@@ -10,6 +10,7 @@ import {
   DEFAULT_MAILBOX_PAGE,
 } from '@/features/mailbox/api/mailbox.queries';
 import { organisationQuery } from '@/features/organisation/api/organisation.queries';
+import { contractPresetsQuery, contractsQuery, skillsQuery } from '@/features/planning/api/planning.queries';
 import { unitsQuery } from '@/features/units/api/units.queries';
 import { usersListQuery } from '@/features/users/api/users.queries';
 import { readUsersListParams } from '@/features/users/usersListParams';
@@ -100,6 +101,58 @@ export function createRouter(queryClient: QueryClient) {
                           path: PATHS.organisation,
                           loader: prefetch(() => queryClient.prefetchQuery(organisationQuery())),
                           lazy: page(() => import('@/pages/OrganisationPage'), 'OrganisationPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="rosters:plan" />,
+                      children: [
+                        {
+                          path: PATHS.rosterPeriods,
+                          loader: prefetch(() => queryClient.prefetchQuery(unitsQuery())),
+                          lazy: page(() => import('@/pages/RosterPeriodsPage'), 'RosterPeriodsPage'),
+                        },
+                        {
+                          path: PATHS.coverNeeds,
+                          loader: prefetch(() =>
+                            Promise.all([
+                              queryClient.prefetchQuery(unitsQuery()),
+                              queryClient.prefetchQuery(skillsQuery()),
+                            ]),
+                          ),
+                          lazy: page(() => import('@/pages/CoverNeedsPage'), 'CoverNeedsPage'),
+                        },
+                        {
+                          path: PATHS.staff,
+                          loader: prefetch(() =>
+                            Promise.all([
+                              queryClient.prefetchQuery(unitsQuery()),
+                              queryClient.prefetchQuery(skillsQuery()),
+                              queryClient.prefetchQuery(contractsQuery()),
+                            ]),
+                          ),
+                          lazy: page(() => import('@/pages/StaffPage'), 'StaffPage'),
+                        },
+                        {
+                          path: PATHS.shiftTypes,
+                          loader: prefetch(() => queryClient.prefetchQuery(unitsQuery())),
+                          lazy: page(() => import('@/pages/ShiftTypesPage'), 'ShiftTypesPage'),
+                        },
+                        {
+                          path: PATHS.contracts,
+                          loader: prefetch(() =>
+                            Promise.all([
+                              queryClient.prefetchQuery(contractsQuery()),
+                              queryClient.prefetchQuery(contractPresetsQuery()),
+                              queryClient.prefetchQuery(unitsQuery()),
+                            ]),
+                          ),
+                          lazy: page(() => import('@/pages/ContractsPage'), 'ContractsPage'),
+                        },
+                        {
+                          path: PATHS.skills,
+                          loader: prefetch(() => queryClient.prefetchQuery(skillsQuery())),
+                          lazy: page(() => import('@/pages/SkillsPage'), 'SkillsPage'),
                         },
                       ],
                     },

@@ -1,8 +1,20 @@
 import type { Permission } from '@rotaplex/contracts';
 import { PATHS } from '@/app/paths';
 
-export type NavKey = 'home' | 'users' | 'units' | 'organisation' | 'mailbox' | 'profile';
-export type NavSection = 'workspace' | 'administration';
+export type NavKey =
+  | 'home'
+  | 'users'
+  | 'units'
+  | 'organisation'
+  | 'mailbox'
+  | 'profile'
+  | 'rosterPeriods'
+  | 'coverNeeds'
+  | 'staff'
+  | 'shiftTypes'
+  | 'contracts'
+  | 'skills';
+export type NavSection = 'workspace' | 'planning' | 'administration';
 
 export interface NavItem {
   key: NavKey;
@@ -17,6 +29,7 @@ export interface NavItem {
 
 export const NAV_SECTIONS: Record<NavSection, string> = {
   workspace: 'Workspace',
+  planning: 'Planning',
   administration: 'Administration',
 };
 
@@ -67,6 +80,54 @@ export const NAV_ITEMS: readonly NavItem[] = [
     path: PATHS.profile,
     section: 'workspace',
     description: 'Your details and your password.',
+  },
+  {
+    key: 'rosterPeriods',
+    label: 'Roster periods',
+    path: PATHS.rosterPeriods,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description: 'The weeks each roster covers: create, change while draft, archive.',
+  },
+  {
+    key: 'coverNeeds',
+    label: 'Cover needs',
+    path: PATHS.coverNeeds,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description: 'How many people each shift needs, by skill, day of the week and date.',
+  },
+  {
+    key: 'staff',
+    label: 'Staff',
+    path: PATHS.staff,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description: 'The people on the roster: skills, contract and cost; CSV upload and export.',
+  },
+  {
+    key: 'shiftTypes',
+    label: 'Shift types',
+    path: PATHS.shiftTypes,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description: "Each unit's shifts: times, paid minutes and colour.",
+  },
+  {
+    key: 'contracts',
+    label: 'Contracts',
+    path: PATHS.contracts,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description: 'Work rules: hours, rest, runs of days and nights, weekends; start from a preset.',
+  },
+  {
+    key: 'skills',
+    label: 'Skills',
+    path: PATHS.skills,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description: 'Qualifications and languages that cover needs ask for.',
   },
 ];
 

@@ -2,6 +2,12 @@ import type { ReactElement } from 'react';
 import { Caption1Strong, makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import {
   BuildingRegular,
+  CalendarLtrRegular,
+  ClockRegular,
+  DocumentBulletListRegular,
+  PeopleRegular,
+  RibbonRegular,
+  TableRegular,
   HomeRegular,
   MailInboxRegular,
   PeopleTeamRegular,
@@ -19,6 +25,12 @@ const ICONS: Record<NavKey, ReactElement> = {
   organisation: <BuildingRegular />,
   mailbox: <MailInboxRegular />,
   profile: <PersonCircleRegular />,
+  rosterPeriods: <CalendarLtrRegular />,
+  coverNeeds: <TableRegular />,
+  staff: <PeopleRegular />,
+  shiftTypes: <ClockRegular />,
+  contracts: <DocumentBulletListRegular />,
+  skills: <RibbonRegular />,
 };
 
 const useStyles = makeStyles({
