@@ -22,6 +22,8 @@ import { ContractsModule } from './contracts/contracts.module';
 import { StaffModule } from './staff/staff.module';
 import { CoverNeedsModule } from './cover-needs/cover-needs.module';
 import { RosterPeriodsModule } from './roster-periods/roster-periods.module';
+import { SolveRunsModule } from './solve-runs/solve-runs.module';
+import { AssignmentsModule } from './assignments/assignments.module';
 
 @Module({})
 export class AppModule {
@@ -51,6 +53,8 @@ export class AppModule {
         StaffModule,
         CoverNeedsModule,
         RosterPeriodsModule,
+        SolveRunsModule,
+        AssignmentsModule,
         DemoModule,
       ],
       providers: [

@@ -3,3 +3,4 @@ export * from './lib/routes';
 export * from './lib/dto';
 export * from './lib/users-query';
 export * from './lib/planning';
+export * from './lib/solving';

@@ -16,3 +16,6 @@ export {
   type SubMipResult,
   type SubMipSolver,
 } from './lib/heuristic/fix-and-optimise';
+export * from './lib/solve';
+export * from './lib/pool';
+export * from './lib/explain';

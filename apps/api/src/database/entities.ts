@@ -10,6 +10,8 @@ import { ContractEntity } from '../contracts/contract.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { SolveRunEntity } from '../solve-runs/solve-run.entity';
+import { AssignmentEntity } from '../assignments/assignment.entity';
 
 /** Every entity of the schema; the migrations in ./migrations must produce exactly these tables. */
 export const ENTITIES = [
@@ -26,4 +28,6 @@ export const ENTITIES = [
   CoverPatternRowEntity,
   CoverOverrideEntity,
   RosterPeriodEntity,
+  SolveRunEntity,
+  AssignmentEntity,
 ];

@@ -27,6 +27,7 @@ describe('database migrations', () => {
         )
       ).map((r: { name: string }) => r.name);
       expect(tables).toEqual([
+        'assignments',
         'contracts',
         'cover_overrides',
         'cover_pattern_rows',
@@ -38,6 +39,7 @@ describe('database migrations', () => {
         'roster_periods',
         'shift_types',
         'skills',
+        'solve_runs',
         'staff_member_skills',
         'staff_members',
         'units',

@@ -1,0 +1,116 @@
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Req, Res } from '@nestjs/common';
+import {
+  ApiAcceptedResponse,
+  ApiConflictResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiProduces,
+  ApiTags,
+} from '@nestjs/swagger';
+import { type SolveRunDto, type SolveRunEventName, type SolveRunStartedDto } from '@rotaplex/contracts';
+import { type Request, type Response } from 'express';
+import { type AuthUser } from '../common/auth-user';
+import { RequirePermissions } from '../common/decorators/access.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { SolveRunResponse, SolveRunStartedResponse, StartSolveRunDto } from './dto/solve-run.dto';
+import { SolveRunsService } from './solve-runs.service';
+
+const ENDED = ['finished', 'failed', 'cancelled'];
+/** A comment line this often keeps proxies from closing a quiet event stream. */
+const KEEP_ALIVE_MS = 15_000;
+
+/** Solve runs: generate a period's roster with the solver, follow its progress, stop it. */
+@ApiTags('solve runs')
+@Controller()
+export class SolveRunsController {
+  constructor(private readonly runs: SolveRunsService) {}
+
+  @Post('roster-periods/:id/solve-runs')
+  @HttpCode(202)
+  @RequirePermissions('rosters:plan')
+  @ApiAcceptedResponse({ type: SolveRunStartedResponse, description: 'Queued; follow it by its id' })
+  @ApiConflictResponse({ description: 'The period is not a draft, or already has a queued or running run' })
+  start(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() body: StartSolveRunDto,
+  ): Promise<SolveRunStartedDto> {
+    return this.runs.start(user, id, body);
+  }
+
+  @Get('roster-periods/:id/solve-runs')
+  @RequirePermissions('rosters:plan')
+  @ApiOkResponse({ type: [SolveRunResponse] })
+  list(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SolveRunDto[]> {
+    return this.runs.list(user, id);
+  }
+
+  @Get('solve-runs/:id')
+  @RequirePermissions('rosters:plan')
+  @ApiOkResponse({ type: SolveRunResponse })
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SolveRunDto> {
+    return this.runs.get(user, id);
+  }
+
+  @Post('solve-runs/:id/cancel')
+  @HttpCode(200)
+  @RequirePermissions('rosters:plan')
+  @ApiOkResponse({
+    type: SolveRunResponse,
+    description: 'The run once stopped; a running solve keeps its best roster',
+  })
+  @ApiConflictResponse({ description: 'The run has already ended' })
+  cancel(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SolveRunDto> {
+    return this.runs.cancel(user, id);
+  }
+
+  @Get('solve-runs/:id/events')
+  @RequirePermissions('rosters:plan')
+  @ApiOperation({
+    summary: 'Progress as server-sent events',
+    description:
+      'Events: `status` (the run when the stream opens), `progress` (elapsedSeconds, objective, bound, gap) ' +
+      'and `end` (the run once ended); the stream closes after `end`. Send the access token in the ' +
+      'Authorization header: read the stream with fetch() (EventSource cannot send headers).',
+  })
+  @ApiProduces('text/event-stream')
+  async events(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Req() req: Request,
+    @Res() res: Response,
+  ): Promise<void> {
+    let open = true;
+    const send = (event: SolveRunEventName, data: unknown) => {
+      if (!open) return;
+      res.write(`event: ${event}\ndata: ${JSON.stringify(data)}\n\n`);
+      if (event === 'end') close();
+    };
+    // Listen before reading the run, so an end between the two is not missed.
+    const unsubscribe = this.runs.subscribe(id, (e) => send(e.event, e.data));
+    const timers: NodeJS.Timeout[] = [];
+    const close = () => {
+      if (!open) return;
+      open = false;
+      unsubscribe();
+      timers.forEach((t) => clearInterval(t));
+      res.end();
+    };
+    let run: SolveRunDto;
+    try {
+      run = await this.runs.get(user, id);
+    } catch (err) {
+      unsubscribe();
+      throw err;
+    }
+    res.status(200);
+    res.setHeader('Content-Type', 'text/event-stream; charset=utf-8');
+    res.setHeader('Cache-Control', 'no-cache, no-transform');
+    res.setHeader('X-Accel-Buffering', 'no');
+    res.flushHeaders();
+    req.on('close', close);
+    timers.push(setInterval(() => open && res.write(': keep-alive\n\n'), KEEP_ALIVE_MS));
+    send('status', run);
+    if (ENDED.includes(run.status)) send('end', run);
+  }
+}

@@ -1,0 +1,375 @@
+import {
+  ConflictException,
+  Injectable,
+  Logger,
+  NotFoundException,
+  type OnApplicationBootstrap,
+  type OnModuleDestroy,
+} from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import {
+  ACTIVE_SOLVE_RUN_STATUSES,
+  type SolveProgressDto,
+  type SolveRunDto,
+  type SolveRunEventName,
+  type SolveRunResultDto,
+  type SolveRunStartedDto,
+} from '@rotaplex/contracts';
+import { EventEmitter } from 'node:events';
+import { DataSource, In, Repository } from 'typeorm';
+import { saveSolvedRoster } from '../assignments/assignments.service';
+import { type AuthUser } from '../common/auth-user';
+import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
+import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
+import { type StartSolveRunDto } from './dto/solve-run.dto';
+import { SolveRunEntity } from './solve-run.entity';
+import { type PoolSolveResult, SolverPool } from './solver';
+
+export interface SolveRunEvent {
+  event: SolveRunEventName;
+  data: unknown;
+}
+
+/** Message of runs a previous server process left queued or running. */
+export const RESTARTED_MESSAGE =
+  'The server restarted during the solve, so the run was stopped. Start a new run to generate the roster.';
+const STOPPED_MESSAGE = 'The server stopped during the solve, so the run was stopped. Start a new run.';
+/** Progress is written to the database at most this often (SSE listeners get every update). */
+const PROGRESS_WRITE_MS = 1000;
+
+interface ActiveRun {
+  cancel: AbortController;
+  kill: AbortController;
+  done: Promise<void>;
+}
+
+/**
+ * Solve runs: a queue in front of the roster model's worker pool (the solver never runs on the
+ * event loop), progress to listeners and the database, the roster written in one transaction at
+ * the end, and crash safety (a failed solve fails its run; runs a previous process left behind are
+ * failed at start-up).
+ */
+@Injectable()
+export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy {
+  private readonly logger = new Logger('SolveRuns');
+  private pool: SolverPool | null = null;
+  private readonly waiting: string[] = [];
+  private readonly active = new Map<string, ActiveRun>();
+  private readonly events = new EventEmitter();
+  private stopping = false;
+
+  constructor(
+    @InjectRepository(SolveRunEntity) private readonly runs: Repository<SolveRunEntity>,
+    private readonly dataSource: DataSource,
+    private readonly periods: RosterPeriodsService,
+    private readonly input: RosterInputService,
+  ) {
+    this.events.setMaxListeners(0);
+  }
+
+  /** Runs left queued or running by a previous process can never finish: fail them with a message. */
+  async onApplicationBootstrap(): Promise<void> {
+    const result = await this.runs.update(
+      { status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
+      { status: 'failed', errorMessage: RESTARTED_MESSAGE, finishedAt: new Date() },
+    );
+    if (result.affected)
+      this.logger.warn(`${result.affected} solve run(s) left by a previous process marked failed`);
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    this.stopping = true;
+    const queued = this.waiting.splice(0);
+    for (const id of queued) await this.fail(id, STOPPED_MESSAGE);
+    const running = [...this.active.values()].map((a) => a.done);
+    // The pool's close() can throw while a worker is still starting (roster-model bug reported); the
+    // solves are failed before that point, so shutting down goes on.
+    await this.pool
+      ?.close()
+      .catch((err: unknown) => this.logger.error(`Closing the solver pool: ${String(err)}`));
+    await Promise.allSettled(running);
+  }
+
+  async start(user: AuthUser, periodId: string, body: StartSolveRunDto): Promise<SolveRunStartedDto> {
+    const period = await this.periods.get(user, periodId);
+    if (period.status !== 'draft') {
+      throw new ConflictException(`Only a draft period can be generated; this one is ${period.status}`);
+    }
+    const run = await this.dataSource.transaction(async (em) => {
+      const current = await em.findOneBy(SolveRunEntity, {
+        rosterPeriodId: periodId,
+        status: In([...ACTIVE_SOLVE_RUN_STATUSES]),
+      });
+      if (current) {
+        throw new ConflictException(
+          `A solve run is already ${current.status} for this period (${current.id}); wait for it or cancel it`,
+        );
+      }
+      return em.save(
+        em.create(SolveRunEntity, {
+          rosterPeriodId: periodId,
+          status: 'queued',
+          requestedById: user.id,
+          timeLimitSeconds: body.timeLimitSeconds,
+          // Only the weights given (DTO instances carry undefined class fields).
+          weights: Object.fromEntries(Object.entries(body.weights ?? {}).filter(([, v]) => v !== undefined)),
+          progress: null,
+          result: null,
+          errorMessage: null,
+          startedAt: null,
+          finishedAt: null,
+        }),
+      );
+    });
+    this.waiting.push(run.id);
+    this.pump();
+    return { id: run.id };
+  }
+
+  async list(user: AuthUser, periodId: string): Promise<SolveRunDto[]> {
+    await this.periods.get(user, periodId);
+    const rows = await this.runs.find({
+      where: { rosterPeriodId: periodId },
+      order: { createdAt: 'DESC', id: 'ASC' },
+    });
+    return rows.map(toSolveRunDto);
+  }
+
+  async get(user: AuthUser, id: string): Promise<SolveRunDto> {
+    return toSolveRunDto(await this.load(user, id));
+  }
+
+  /** Stops a run: a queued one at once; a running one keeps the best roster found so far. */
+  async cancel(user: AuthUser, id: string): Promise<SolveRunDto> {
+    const run = await this.load(user, id);
+    if (!(ACTIVE_SOLVE_RUN_STATUSES as readonly string[]).includes(run.status)) {
+      throw new ConflictException(`The run has already ended (${run.status})`);
+    }
+    const index = this.waiting.indexOf(id);
+    if (index >= 0) {
+      this.waiting.splice(index, 1);
+      await this.runs.update(
+        { id, status: 'queued' },
+        { status: 'cancelled', finishedAt: new Date(), errorMessage: null },
+      );
+      await this.emitEnd(id);
+    } else {
+      const active = this.active.get(id);
+      if (active) {
+        active.cancel.abort();
+        await active.done;
+      }
+    }
+    return toSolveRunDto(await this.runs.findOneByOrFail({ id }));
+  }
+
+  /**
+   * Ends a running solve at once by terminating its worker thread (no roster is kept); the run
+   * fails with the solver's message. For operations and for testing crash handling.
+   */
+  async stopAtOnce(id: string): Promise<void> {
+    const active = this.active.get(id);
+    if (!active) return;
+    active.kill.abort();
+    await active.done;
+  }
+
+  /** Listen to a run's events; returns the function that stops listening. */
+  subscribe(id: string, listener: (event: SolveRunEvent) => void): () => void {
+    this.events.on(id, listener);
+    return () => this.events.off(id, listener);
+  }
+
+  /** Loads a run the caller may see (through its period's unit). */
+  private async load(user: AuthUser, id: string): Promise<SolveRunEntity> {
+    const run = await this.runs.findOneBy({ id });
+    if (!run) throw new NotFoundException('Solve run not found');
+    await this.periods.get(user, run.rosterPeriodId);
+    return run;
+  }
+
+  private solverPool(): SolverPool {
+    if (!this.pool) this.pool = new SolverPool();
+    return this.pool;
+  }
+
+  /** Starts waiting runs while the pool has a free worker. */
+  private pump(): void {
+    if (this.stopping) return;
+    const capacity = this.solverPool().size;
+    while (this.active.size < capacity && this.waiting.length > 0) {
+      const id = this.waiting.shift() as string;
+      const entry: ActiveRun = {
+        cancel: new AbortController(),
+        kill: new AbortController(),
+        done: Promise.resolve(),
+      };
+      this.active.set(id, entry);
+      entry.done = this.execute(id, entry).finally(() => {
+        this.active.delete(id);
+        this.pump();
+      });
+    }
+  }
+
+  private async execute(id: string, entry: ActiveRun): Promise<void> {
+    let progressWrite: Promise<unknown> = Promise.resolve();
+    try {
+      const run = await this.runs.findOneBy({ id });
+      if (!run || run.status !== 'queued') return;
+      const input = await this.input.load(run.rosterPeriodId, run.weights);
+      const startedAt = new Date();
+      await this.runs.update({ id }, { status: 'running', startedAt });
+      this.emit(id, 'status', toSolveRunDto({ ...run, status: 'running', startedAt }));
+      let lastWrite = 0;
+      const result = await this.solverPool().solveRoster(input.problem, {
+        timeLimitSeconds: run.timeLimitSeconds,
+        signal: entry.cancel.signal,
+        killSignal: entry.kill.signal,
+        onProgress: (p) => {
+          const progress: SolveProgressDto = {
+            elapsedSeconds: p.elapsedSeconds,
+            objective: p.objective,
+            bound: p.bound,
+            gap: p.gap,
+          };
+          this.emit(id, 'progress', progress);
+          const now = Date.now();
+          if (now - lastWrite >= PROGRESS_WRITE_MS) {
+            lastWrite = now;
+            progressWrite = progressWrite
+              .then(() => this.runs.update({ id, status: 'running' }, { progress }))
+              .catch(() => undefined);
+          }
+        },
+      });
+      await progressWrite;
+      await this.finish(id, input, result, entry.cancel.signal.aborted);
+    } catch (err) {
+      await progressWrite;
+      const message = err instanceof Error ? err.message : String(err);
+      this.logger.warn(`Solve run ${id} failed: ${message}`);
+      await this.fail(id, this.stopping ? STOPPED_MESSAGE : `The solve failed: ${message}`);
+    } finally {
+      await this.emitEnd(id);
+    }
+  }
+
+  /** Saves the roster (replacing unpinned cells) and the run's outcome in one transaction. */
+  private async finish(
+    id: string,
+    input: RosterInput,
+    result: PoolSolveResult,
+    cancelled: boolean,
+  ): Promise<void> {
+    const summary = summaryOf(input, result);
+    const progress: SolveProgressDto = {
+      elapsedSeconds: result.seconds,
+      objective: result.objective,
+      bound: result.bound,
+      gap: result.gap,
+    };
+    const finishedAt = new Date();
+    await this.dataSource.transaction(async (em) => {
+      const base = { progress, result: summary, finishedAt };
+      if (!result.roster) {
+        await em.update(
+          SolveRunEntity,
+          { id },
+          cancelled
+            ? { ...base, status: 'cancelled', errorMessage: null }
+            : { ...base, status: 'failed', errorMessage: `No roster was found: ${result.quality}` },
+        );
+        return;
+      }
+      const period = await em.findOneBy(RosterPeriodEntity, { id: input.period.id });
+      if (!period || period.status !== 'draft') {
+        await em.update(
+          SolveRunEntity,
+          { id },
+          {
+            ...base,
+            status: 'failed',
+            errorMessage: `The period was ${period ? period.status : 'deleted'} during the solve, so the roster was not saved.`,
+          },
+        );
+        return;
+      }
+      await saveSolvedRoster(em, input, result.roster);
+      await em.update(
+        SolveRunEntity,
+        { id },
+        { ...base, status: cancelled ? 'cancelled' : 'finished', errorMessage: null },
+      );
+    });
+  }
+
+  private async fail(id: string, message: string): Promise<void> {
+    try {
+      await this.runs.update(
+        { id, status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
+        { status: 'failed', errorMessage: message, finishedAt: new Date() },
+      );
+    } catch (err) {
+      // The database is gone (shutting down): the next start marks the run failed.
+      this.logger.error(`Could not mark solve run ${id} failed: ${String(err)}`);
+    }
+  }
+
+  private emit(id: string, event: SolveRunEventName, data: unknown): void {
+    this.events.emit(id, { event, data } satisfies SolveRunEvent);
+  }
+
+  private async emitEnd(id: string): Promise<void> {
+    if (this.events.listenerCount(id) === 0) return;
+    const run = await this.runs.findOneBy({ id }).catch(() => null);
+    if (run) this.emit(id, 'end', toSolveRunDto(run));
+  }
+}
+
+/** The outcome of a solve for the run's record, in the period's dates. */
+function summaryOf(input: RosterInput, result: PoolSolveResult): SolveRunResultDto {
+  const date = (d: number) => input.dates[d] ?? String(d);
+  return {
+    solverStatus: result.status,
+    objective: result.objective,
+    bound: result.bound,
+    gap: result.gap,
+    quality: result.quality,
+    explanations: {
+      unmetNeeds: result.unmetNeeds.map((u) => ({
+        date: date(u.day),
+        shiftTypeId: u.shiftTypeId,
+        skillId: u.skillId,
+        short: u.short,
+        reasons: u.reasons,
+      })),
+      requestsNotHonoured: result.requestsNotHonoured.map((r) => ({
+        staffMemberId: r.personId,
+        date: date(r.day),
+        kind: r.kind,
+        reasons: r.reasons,
+      })),
+      conflicts: result.conflicts,
+    },
+    terms: result.check ? { ...result.check.terms } : null,
+  };
+}
+
+export function toSolveRunDto(r: SolveRunEntity): SolveRunDto {
+  return {
+    id: r.id,
+    rosterPeriodId: r.rosterPeriodId,
+    status: r.status,
+    requestedById: r.requestedById,
+    timeLimitSeconds: r.timeLimitSeconds,
+    weights: r.weights,
+    progress: r.progress,
+    result: r.result,
+    errorMessage: r.errorMessage,
+    createdAt: r.createdAt.toISOString(),
+    startedAt: r.startedAt ? r.startedAt.toISOString() : null,
+    finishedAt: r.finishedAt ? r.finishedAt.toISOString() : null,
+  };
+}
