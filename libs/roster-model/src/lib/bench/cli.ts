@@ -1,0 +1,142 @@
+/**
+ * Benchmark command line:
+ *   npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]
+ *                    [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]
+ * Instances are numbers 1-24 (InstanceN.txt in $ROTAPLEX_BENCHMARKS_DIR, default
+ * ../shared/benchmarks/curtois-qu beside the repository), ranges such as 1-12, or paths to files
+ * in the same format. Each instance is solved in turn by the product's solve path; a table is
+ * printed and `<file name without .txt>.json` is written per instance into DIR. `--model textbook`
+ * solves the plain SOURCES.md §4 formulation instead (a baseline; see textbook-model.ts).
+ */
+import type { SolveProgress } from '../result';
+import type { SolveRosterOptions } from '../solve/solve';
+import { formatTable, runInstance, tableRow, writeBenchJson, type BenchRun } from './runner';
+
+interface CliOptions {
+  instances: string[];
+  timeLimitSeconds: number;
+  outDir: string | null;
+  mipRelGap?: number;
+  randomSeed?: number;
+  warmStart: boolean;
+  model: 'product' | 'textbook';
+  strategy?: SolveRosterOptions['strategy'];
+}
+
+const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
+
+const USAGE =
+  'Usage: npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]\n' +
+  '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]\n' +
+  '  instances: numbers 1-24, ranges like 1-12, or paths to instance files';
+
+export function parseArgs(argv: string[]): CliOptions {
+  const options: CliOptions = {
+    instances: [],
+    timeLimitSeconds: 60,
+    outDir: null,
+    warmStart: true,
+    model: 'product',
+  };
+  const value = (i: number, flag: string): string => {
+    const v = argv[i + 1];
+    if (v === undefined || v.startsWith('--')) throw new Error(`${flag} needs a value.\n${USAGE}`);
+    return v;
+  };
+  const positive = (v: string, flag: string): number => {
+    const n = Number(v);
+    if (!Number.isFinite(n) || n <= 0) throw new Error(`${flag} must be a positive number, got "${v}".`);
+    return n;
+  };
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i];
+    if (arg === '--time-limit') options.timeLimitSeconds = positive(value(i++, arg), arg);
+    else if (arg === '--out') options.outDir = value(i++, arg);
+    else if (arg === '--gap') options.mipRelGap = Number(value(i++, arg));
+    else if (arg === '--seed') options.randomSeed = Number(value(i++, arg));
+    else if (arg === '--no-warm-start') options.warmStart = false;
+    else if (arg === '--strategy') {
+      const st = value(i++, arg);
+      if (!STRATEGIES.includes(st))
+        throw new Error(`--strategy is one of ${STRATEGIES.join(', ')}, got "${st}".`);
+      options.strategy = st as SolveRosterOptions['strategy'];
+    } else if (arg === '--model') {
+      const m = value(i++, arg);
+      if (m !== 'product' && m !== 'textbook') throw new Error(`--model is product or textbook, got "${m}".`);
+      options.model = m;
+    } else if (arg === '--help' || arg === '-h') throw new Error(USAGE);
+    else if (arg.startsWith('--')) throw new Error(`Unknown option ${arg}.\n${USAGE}`);
+    else {
+      const range = /^(\d+)-(\d+)$/.exec(arg);
+      if (range) {
+        for (let n = Number(range[1]); n <= Number(range[2]); n++) options.instances.push(String(n));
+      } else options.instances.push(arg);
+    }
+  }
+  if (options.instances.length === 0) throw new Error(`No instance given.\n${USAGE}`);
+  return options;
+}
+
+/** Prints a progress line to stderr at most every 10 seconds (long runs show they are alive). */
+function progressPrinter(ref: string): (p: SolveProgress) => void {
+  let last = 0;
+  return (p) => {
+    if (p.elapsedSeconds - last < 10) return;
+    last = p.elapsedSeconds;
+    const gap = p.gap === null ? '–' : `${(p.gap * 100).toFixed(2)}%`;
+    process.stderr.write(
+      `${ref}: ${p.elapsedSeconds.toFixed(0)} s, best ${p.objective ?? '–'}, bound ${p.bound?.toFixed(1) ?? '–'}, gap ${gap}\n`,
+    );
+  };
+}
+
+export async function main(argv: string[]): Promise<number> {
+  let options: CliOptions;
+  try {
+    options = parseArgs(argv);
+  } catch (err) {
+    console.error((err as Error).message);
+    return 2;
+  }
+  const rows: string[][] = [];
+  let failures = 0;
+  for (const ref of options.instances) {
+    process.stderr.write(`${ref}: solving (limit ${options.timeLimitSeconds} s)…\n`);
+    let run: BenchRun;
+    try {
+      run = await runInstance(ref, {
+        timeLimitSeconds: options.timeLimitSeconds,
+        mipRelGap: options.mipRelGap,
+        randomSeed: options.randomSeed,
+        warmStart: options.warmStart,
+        model: options.model,
+        strategy: options.strategy,
+        onProgress: progressPrinter(ref),
+      });
+    } catch (err) {
+      failures++;
+      console.error(`${ref}: ${(err as Error).message}`);
+      rows.push([String(ref), '', '', '', '', '', '', '', '', '', '', 'error']);
+      continue;
+    }
+    const row = tableRow(run);
+    if (row[row.length - 1].includes('MISMATCH')) failures++;
+    rows.push(row);
+    if (options.outDir) {
+      const file = writeBenchJson(run, options.outDir);
+      process.stderr.write(`${ref}: ${run.status}, objective ${run.objective ?? '–'}; wrote ${file}\n`);
+    }
+  }
+  console.log(formatTable(rows));
+  return failures > 0 ? 1 : 0;
+}
+
+if (require.main === module) {
+  main(process.argv.slice(2)).then(
+    (code) => process.exit(code),
+    (err: unknown) => {
+      console.error(err);
+      process.exit(1);
+    },
+  );
+}
