@@ -74,6 +74,7 @@ export class SolveRunsController {
       'Authorization header: read the stream with fetch() (EventSource cannot send headers).',
   })
   @ApiProduces('text/event-stream')
+  @ApiOkResponse({ description: 'A text/event-stream of status, progress and end events' })
   async events(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseUUIDPipe) id: string,
