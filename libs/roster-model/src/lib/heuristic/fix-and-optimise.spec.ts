@@ -38,6 +38,8 @@ describe('fixAndOptimise', () => {
     expect(checkRoster(p, start).violations).toEqual([]);
     const r = await fixAndOptimise(built, start, subSolver, {
       timeLimitSeconds: 60,
+      // The one round may take longer than the default 3 s sub-MIP limit on a loaded machine.
+      subTimeLimitSeconds: 60,
       freeColumns: Infinity,
       targetObjective: optimum,
     });
@@ -71,6 +73,8 @@ describe('fixAndOptimise', () => {
     expect(checkRoster(p, bad).violations.length).toBeGreaterThan(0);
     const r = await fixAndOptimise(built, bad, subSolver, {
       timeLimitSeconds: 60,
+      // The one round may take longer than the default 3 s sub-MIP limit on a loaded machine.
+      subTimeLimitSeconds: 60,
       freeColumns: Infinity,
       targetObjective: optimum,
     });

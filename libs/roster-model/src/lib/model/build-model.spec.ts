@@ -88,6 +88,17 @@ describe('buildModel', () => {
     expect(e.decode(r.values)).toEqual({ a: ['E'] });
   });
 
+  it('elastic mode prices minutes rules per longest shift, not per minute', () => {
+    // Two days, minimum 960 paid minutes, one early (480) worked: 480 minutes short. The longest
+    // shift of the fixtures is the night (540 minutes), so the shortfall costs 1,000 · 480 / 540.
+    const p = problem({ days: 2, people: [person('a', { minPaidMinutes: 960 })] });
+    const m = buildModel(p, { elastic: 1000 });
+    const short = roster({ a: 'E.' });
+    const values = m.encode(short);
+    expect(brokenRows(m.arrays, values)).toEqual([]);
+    expect(m.objectiveOf(values)).toBeCloseTo(checkRoster(p, short).objective + (1000 * 480) / 540, 6);
+  });
+
   it('maps each x column to its person, day and shift type', () => {
     const p = problem({
       days: 2,

@@ -54,7 +54,8 @@ export interface BuildOptions {
   /**
    * Elastic mode: every hard-rule row gets a slack column costing this much per unit of violation
    * (days, shifts, minutes … in the row's own unit), so any roster is a solution of the model and
-   * the solver trades violations against the objective. For repairing rosters that break rules
+   * the solver trades violations against the objective (minutes rules: this much per longest shift's
+   * minutes). For repairing rosters that break rules
    * (fix-and-optimise from an imperfect start) and for finding the least violation. Off by default.
    */
   elastic?: number;
@@ -89,6 +90,10 @@ export function buildModel(problem: RosterProblem, options: BuildOptions = {}): 
   const elastic: [number, number, number][] = [];
   if (options.elastic !== undefined && options.elastic > 0) {
     const rowCount = builder.numRows;
+    // Minutes rules are priced per longest shift, not per minute: otherwise one shift short of the
+    // minimum hours (480 units) outweighs dozens of day-count violations and fix-and-optimise trades
+    // it for them (seen on benchmark instance 8: 5 violations became 31).
+    const longestShift = Math.max(1, ...problem.shiftTypes.map((s) => s.paidMinutes));
     for (let i = 0; i < rowCount; i++) {
       const meta = builder.rowMeta[i];
       if (!HARD.has(meta.rule)) continue;
@@ -100,13 +105,17 @@ export function buildModel(problem: RosterProblem, options: BuildOptions = {}): 
         personId: meta.personId,
         day: meta.day,
       };
+      const price =
+        meta.rule === 'minPaidMinutes' || meta.rule === 'maxPaidMinutes'
+          ? options.elastic / longestShift
+          : options.elastic;
       if (Number.isFinite(ub)) {
-        const c = builder.addColumn(`elU_${i}`, 0, Infinity, options.elastic, false, colMeta);
+        const c = builder.addColumn(`elU_${i}`, 0, Infinity, price, false, colMeta);
         builder.addToRow(i, c, -1);
         elastic.push([c, i, -1]);
       }
       if (Number.isFinite(lb)) {
-        const c = builder.addColumn(`elL_${i}`, 0, Infinity, options.elastic, false, colMeta);
+        const c = builder.addColumn(`elL_${i}`, 0, Infinity, price, false, colMeta);
         builder.addToRow(i, c, 1);
         elastic.push([c, i, 1]);
       }

@@ -120,4 +120,16 @@ describe('SolverPool', () => {
     expect(result.quality).toBe('Proven best possible roster.');
     expect(result.check?.violations).toEqual([]);
   });
+  it('runs a portfolio with a different strategy on each worker', async () => {
+    const result = await pool.solveRoster(smallWard(), {
+      timeLimitSeconds: 60,
+      explain: false,
+      portfolio: 2,
+      portfolioStrategies: ['mip', 'fixAndOptimise'],
+    });
+    // Hand-worked in solve.spec.ts: the small ward's optimum is 0; either strategy proves it.
+    expect(result.status).toBe('optimal');
+    expect(result.objective).toBe(0);
+    expect(result.check?.violations).toEqual([]);
+  });
 });

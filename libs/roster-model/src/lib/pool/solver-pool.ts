@@ -67,6 +67,12 @@ export interface PoolRosterOptions
   extends Omit<SolveRosterOptions, 'onProgress' | 'signal' | 'cancelFlag' | 'session'>, TaskControls {
   /** Independent solves on this many workers with seeds randomSeed, randomSeed+1, …; the best is kept. */
   portfolio?: number;
+  /**
+   * Strategy of each portfolio member in turn (member i uses entry i mod length), e.g.
+   * ['mip', 'mipThenFixAndOptimise'] so one core proves the bound while the other improves rosters.
+   * Default: every member uses `strategy`.
+   */
+  portfolioStrategies?: NonNullable<SolveRosterOptions['strategy']>[];
 }
 
 /** A running task: its result, and switches to stop it gently or at once. */
@@ -186,7 +192,7 @@ export class SolverPool {
 
   /** Solve a roster problem in a worker (or several, with `portfolio`). */
   async solveRoster(problem: RosterProblem, options: PoolRosterOptions = {}): Promise<RosterSolveResult> {
-    const { onProgress, signal, killSignal, portfolio = 1, ...rest } = options;
+    const { onProgress, signal, killSignal, portfolio = 1, portfolioStrategies, ...rest } = options;
     const count = Math.max(1, Math.floor(portfolio));
     const baseSeed = rest.randomSeed ?? 0;
     const latest: (SolveProgress | null)[] = new Array<SolveProgress | null>(count).fill(null);
@@ -202,7 +208,17 @@ export class SolverPool {
     };
     const handles = Array.from({ length: count }, (_, i) =>
       this.start(
-        { kind: 'roster', problem, options: { ...rest, randomSeed: baseSeed + i } },
+        {
+          kind: 'roster',
+          problem,
+          options: {
+            ...rest,
+            randomSeed: baseSeed + i,
+            ...(portfolioStrategies?.length
+              ? { strategy: portfolioStrategies[i % portfolioStrategies.length] }
+              : {}),
+          },
+        },
         { onProgress: (p) => emitMerged(i, p), signal, killSignal },
       ),
     );

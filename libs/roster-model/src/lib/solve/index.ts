@@ -8,6 +8,9 @@ export { solveMip, relativeGap, solverArrays, type MipRunOptions, type MipRunRes
 export {
   solveRoster,
   assertCheckerAgrees,
+  AUTO_LARGE_MODEL_X,
+  AUTO_FIX_AND_OPTIMISE_SHARE,
+  AUTO_LARGE_HIGHS_OPTIONS,
   SolverCheckError,
   type RosterSolveResult,
   type SolveRosterOptions,

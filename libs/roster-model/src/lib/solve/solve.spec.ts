@@ -158,4 +158,40 @@ describe('solveRoster', () => {
     expect(again.warmStartObjective).toBe(first.objective);
     expect(again.objective).toBe(first.objective);
   });
+  it('fix-and-optimise first, then the full MIP, still reaches and proves the small ward optimum', async () => {
+    // Same hand-worked optimum 0 as the first test: the final full MIP starts from the
+    // fix-and-optimise roster and proves it.
+    const result = await solveRoster(smallWard(), {
+      timeLimitSeconds: 60,
+      explain: false,
+      strategy: 'fixAndOptimise',
+    });
+    expect(result.status).toBe('optimal');
+    expect(result.objective).toBe(0);
+    expect(result.check?.violations).toEqual([]);
+  });
+
+  it.each(['fixAndOptimise', 'mipThenFixAndOptimise'] as const)(
+    'strategy %s returns a checked roster no worse than its warm start on a problem it cannot finish',
+    async (strategy) => {
+      const result = await solveRoster(busyUnit(), { timeLimitSeconds: 8, explain: false, strategy });
+      if (result.roster === null) {
+        // On a heavily loaded machine the heuristic and HiGHS may not reach a roster in time.
+        expect(result.quality).toBe('Stopped at the time limit before a roster was found.');
+        return;
+      }
+      expect(result.check?.violations).toEqual([]);
+      if (result.warmStartObjective !== null)
+        expect(result.objective as number).toBeLessThanOrEqual(result.warmStartObjective);
+      // Improvements of both phases are reported in time order.
+      for (let i = 1; i < result.improvements.length; i++)
+        expect(result.improvements[i].seconds).toBeGreaterThanOrEqual(result.improvements[i - 1].seconds);
+      // The reported roster is the best improvement found (or the warm start).
+      const best = Math.min(
+        ...result.improvements.map((i) => i.objective),
+        result.warmStartObjective ?? Infinity,
+      );
+      expect(result.objective as number).toBeLessThanOrEqual(best + 1e-6);
+    },
+  );
 });
