@@ -40,6 +40,8 @@ describe('solveRoster', () => {
     const limit = 6;
     const result = await solveRoster(busyUnit(), {
       timeLimitSeconds: limit,
+      // The plain MIP path: its progress carries HiGHS's bound once the root LP is solved.
+      strategy: 'mip',
       onProgress: (p) => events.push(p),
     });
     expect(result.status).toBe('timeLimit');
@@ -50,10 +52,17 @@ describe('solveRoster', () => {
     expect(result.seconds).toBeLessThan(Math.max(limit, result.setupSeconds) + 1);
     if (result.roster !== null) {
       expect(result.check?.violations).toEqual([]);
-      expect(result.gap).not.toBeNull();
-      expect(result.quality).toMatch(
-        /^No roster can be more than \d+(\.\d)?% better than this one \(stopped at the time limit\)\.$/,
-      );
+      if (result.gap !== null) {
+        expect(result.quality).toMatch(
+          /^No roster can be more than \d+(\.\d)?% better than this one \(stopped at the time limit\)\.$/,
+        );
+      } else {
+        // A loaded machine may stop HiGHS before its root LP gives a bound.
+        expect(result.bound).toBeNull();
+        expect(result.quality).toBe(
+          'A roster was found (stopped at the time limit), but the solver has not yet proved how close it is to the best possible.',
+        );
+      }
     } else {
       // On a heavily loaded machine the heuristic and HiGHS may not reach a roster in time.
       expect(result.quality).toBe('Stopped at the time limit before a roster was found.');
