@@ -17,6 +17,7 @@ import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
+import { SkillEntity } from '../skills/skill.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitEntity } from '../units/unit.entity';
 
@@ -86,6 +87,17 @@ export class RosterInputService {
       dates,
     );
 
+    // Skill codes for the explanations' words ("people with skill RN"), not database ids.
+    const skillIds = [
+      ...new Set([
+        ...staff.flatMap((s) => s.skills.map((k) => k.id)),
+        ...coverNeeds.flatMap((n) => (n.skillId === null ? [] : [n.skillId])),
+      ]),
+    ];
+    const skillNames = Object.fromEntries(
+      (skillIds.length ? await m.findBy(SkillEntity, { id: In(skillIds) }) : []).map((k) => [k.id, k.code]),
+    );
+
     const personIds = new Set(staff.map((s) => s.id));
     const pins: Pin[] = (await m.findBy(AssignmentEntity, { rosterPeriodId: period.id, pinned: true }))
       .filter((a) => personIds.has(a.staffMemberId) && dayOf.has(a.date))
@@ -111,6 +123,7 @@ export class RosterInputService {
       forbiddenSuccessions: [],
       pins,
       weights,
+      skillNames,
     };
     return { period, unit, problem, dates, staff, shiftTypes };
   }

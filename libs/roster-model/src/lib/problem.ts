@@ -184,4 +184,6 @@ export interface RosterProblem {
   weekendDays?: number[];
   /** Repair mode: the published roster to stay close to (weighted by weights.changes). */
   published?: Roster;
+  /** Display names of skills for explanations (e.g. { "3f2a…": "RN" }); the id is shown when absent. */
+  skillNames?: Record<SkillId, string>;
 }

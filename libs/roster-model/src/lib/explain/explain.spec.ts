@@ -36,6 +36,21 @@ describe('explanations', () => {
     }
   });
 
+  it('names skills by their display name when the problem gives one', async () => {
+    // Same case as above, with the skill's display name given: the words use "RN", not the id.
+    const problem = smallWard({
+      absences: RNS.map((personId) => ({ personId, day: 2, kind: 'leave' as const })),
+    });
+    const result = await solveRoster({ ...problem, skillNames: { rn: 'RN' } }, { timeLimitSeconds: 60 });
+    expect(result.unmetNeeds).toHaveLength(3);
+    for (const u of result.unmetNeeds) {
+      expect(u.skillId).toBe('rn');
+      expect(u.reasons).toContain(
+        '4 of the 4 people with skill RN are on leave (Ada Byrne, Ben Okafor, Cy Lindqvist and 1 more).',
+      );
+    }
+  });
+
   describe('a one-nurse unit', () => {
     // Ada is the only rn. Needs: rn on Night of day 1 (Tue), rn on Early of day 2 (Wed) and of day 3
     // (Thu). Night ends 07:30 and Early starts 07:00, so Night Tue then Early Wed gives no rest at

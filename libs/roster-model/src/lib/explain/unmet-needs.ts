@@ -64,7 +64,10 @@ export function explainUnmetNeeds(
       continue;
     }
 
-    const pool = need.skillId === null ? 'people' : `people with skill ${need.skillId}`;
+    const pool =
+      need.skillId === null
+        ? 'people'
+        : `people with skill ${problem.skillNames?.[need.skillId] ?? need.skillId}`;
     if (eligible.length === 0) {
       reasons.push(
         need.skillId === null ? 'There is nobody in the team.' : `Nobody has skill ${need.skillId}.`,
