@@ -19,9 +19,11 @@ export const PATHS = {
   staff: '/planning/staff',
   coverNeeds: '/planning/cover-needs',
   rosterPeriods: '/planning/periods',
+  planningBoard: (periodId: string) => `/planning/periods/${encodeURIComponent(periodId)}/board`,
 } as const;
 
 /** Route patterns for parameterised paths (the router's side of PATHS). */
 export const ROUTE_PATTERNS = {
   mailboxMessage: '/admin/mailbox/:messageId',
+  planningBoard: '/planning/periods/:periodId/board',
 } as const;

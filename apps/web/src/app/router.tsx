@@ -113,6 +113,10 @@ export function createRouter(queryClient: QueryClient) {
                           lazy: page(() => import('@/pages/RosterPeriodsPage'), 'RosterPeriodsPage'),
                         },
                         {
+                          path: ROUTE_PATTERNS.planningBoard,
+                          lazy: page(() => import('@/pages/PlanningBoardPage'), 'PlanningBoardPage'),
+                        },
+                        {
                           path: PATHS.coverNeeds,
                           loader: prefetch(() =>
                             Promise.all([

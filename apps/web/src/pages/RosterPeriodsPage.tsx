@@ -31,6 +31,8 @@ import { UnitPicker } from '@/features/planning/components/UnitPicker';
 import { UnitScope } from '@/features/planning/components/UnitScope';
 import { useSelectedUnit } from '@/features/planning/hooks/useSelectedUnit';
 import { lastDay, suggestedStart } from '@/features/planning/utils/periodDates';
+import { PATHS } from '@/app/paths';
+import { AppLink } from '@/ui/AppLink';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
@@ -119,7 +121,9 @@ export function RosterPeriodsPage() {
                 <TableBody>
                   {list.map((p) => (
                     <TableRow key={p.id}>
-                      <TableCell className={styles.nowrap}>{fmt(p.startDate)}</TableCell>
+                      <TableCell className={styles.nowrap}>
+                        <AppLink to={PATHS.planningBoard(p.id)}>{fmt(p.startDate)}</AppLink>
+                      </TableCell>
                       <TableCell className={styles.nowrap}>{fmt(lastDay(p))}</TableCell>
                       <TableCell>{p.days}</TableCell>
                       <TableCell>

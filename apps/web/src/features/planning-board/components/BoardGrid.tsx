@@ -1,0 +1,254 @@
+import type { KeyboardEvent } from 'react';
+import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
+import { PinFilled, WarningFilled } from '@fluentui/react-icons';
+import type { AssignmentGridDto, ShiftTypeDto } from '@rotaplex/contracts';
+import { ShiftChip } from '@/features/planning/components/ShiftChip';
+import {
+  coverState,
+  hoursText,
+  type CoverLine,
+  type CoverState,
+  type HoursLine,
+} from '../utils/boardSummary';
+import { dayOfMonth, formatDay, formatWeekday } from '../utils/days';
+
+const useStyles = makeStyles({
+  scroller: { overflowX: 'auto', maxWidth: '100%' },
+  table: {
+    borderCollapse: 'collapse',
+    fontSize: tokens.fontSizeBase200,
+    '& th, & td': {
+      borderBottom: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
+      padding: tokens.spacingHorizontalXXS,
+      textAlign: 'center',
+    },
+  },
+  name: {
+    textAlign: 'left',
+    whiteSpace: 'nowrap',
+    position: 'sticky',
+    left: 0,
+    backgroundColor: tokens.colorNeutralBackground1,
+    fontWeight: tokens.fontWeightRegular,
+  },
+  weekend: { backgroundColor: tokens.colorNeutralBackground3 },
+  dayHead: { minWidth: '2.75rem', fontWeight: tokens.fontWeightSemibold },
+  muted: { color: tokens.colorNeutralForeground3, fontWeight: tokens.fontWeightRegular },
+  cell: {
+    display: 'inline-flex',
+    alignItems: 'center',
+    justifyContent: 'center',
+    gap: tokens.spacingHorizontalXXS,
+    minWidth: '2.75rem',
+    minHeight: '1.75rem',
+    padding: 0,
+    border: `${tokens.strokeWidthThin} solid transparent`,
+    borderRadius: tokens.borderRadiusMedium,
+    backgroundColor: 'transparent',
+    color: tokens.colorNeutralForeground1,
+    cursor: 'pointer',
+    ':hover': { border: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke1Hover}` },
+    ':focus-visible': { outline: `${tokens.strokeWidthThick} solid ${tokens.colorStrokeFocus2}` },
+    ':disabled': { cursor: 'default' },
+  },
+  flagged: { border: `${tokens.strokeWidthThin} solid ${tokens.colorPaletteRedBorder2}` },
+  warnIcon: { color: tokens.colorPaletteRedForeground1 },
+  off: { color: tokens.colorNeutralForeground4 },
+  short: { backgroundColor: tokens.colorPaletteRedBackground2, color: tokens.colorPaletteRedForeground2 },
+  belowTarget: {
+    backgroundColor: tokens.colorPaletteYellowBackground2,
+    color: tokens.colorNeutralForeground1,
+  },
+  met: { color: tokens.colorPaletteGreenForeground1 },
+  over: { backgroundColor: tokens.colorPaletteBlueBackground2, color: tokens.colorPaletteBlueForeground2 },
+  none: { color: tokens.colorNeutralForeground3 },
+  hours: { whiteSpace: 'nowrap', textAlign: 'right' },
+  under: { color: tokens.colorPaletteRedForeground1 },
+  coverHead: { textAlign: 'left', backgroundColor: tokens.colorNeutralBackground2 },
+});
+
+/** Words beside each cover figure, so the state never rests on colour alone. */
+const COVER_WORDS: Record<CoverState, string> = {
+  short: 'short',
+  belowTarget: 'below target',
+  met: 'met',
+  over: 'over',
+  none: '',
+};
+
+export interface BoardGridProps {
+  grid: AssignmentGridDto;
+  shiftTypes: Map<string, ShiftTypeDto>;
+  cover: CoverLine[];
+  hours: Map<string, HoursLine>;
+  /** "staffMemberId|date" of cells with a rule finding. */
+  flagged: Set<string>;
+  readOnly: boolean;
+  onOpenCell: (staffMemberId: string, date: string) => void;
+}
+
+const isWeekend = (date: string) => [0, 6].includes(new Date(`${date}T00:00:00Z`).getUTCDay());
+
+/** Moves focus between the cells of the grid with the arrow keys, Home and End. */
+function moveFocus(event: KeyboardEvent<HTMLTableElement>) {
+  const target = event.target as HTMLElement;
+  const row = Number(target.dataset.row);
+  const col = Number(target.dataset.col);
+  if (Number.isNaN(row) || Number.isNaN(col) || target.dataset.row === undefined) return;
+  const moves: Record<string, [number, number]> = {
+    ArrowUp: [row - 1, col],
+    ArrowDown: [row + 1, col],
+    ArrowLeft: [row, col - 1],
+    ArrowRight: [row, col + 1],
+    Home: [row, 0],
+    End: [row, 10_000],
+  };
+  const next = moves[event.key];
+  if (!next) return;
+  event.preventDefault();
+  const table = event.currentTarget;
+  const [r, c] = next;
+  const candidates = table.querySelectorAll<HTMLElement>(`[data-row="${r}"]`);
+  const cell =
+    table.querySelector<HTMLElement>(`[data-row="${r}"][data-col="${c}"]`) ??
+    (event.key === 'End' ? candidates[candidates.length - 1] : null);
+  cell?.focus();
+}
+
+/** People by days with shift codes in their colours, hours against contract and cover against needs. */
+export function BoardGrid({ grid, shiftTypes, cover, hours, flagged, readOnly, onOpenCell }: BoardGridProps) {
+  const styles = useStyles();
+  return (
+    <div className={styles.scroller}>
+      <table className={styles.table} aria-label="Planning board" onKeyDown={moveFocus}>
+        <thead>
+          <tr>
+            <th scope="col" className={styles.name}>
+              Person
+            </th>
+            {grid.dates.map((date) => (
+              <th
+                key={date}
+                scope="col"
+                className={mergeClasses(styles.dayHead, isWeekend(date) && styles.weekend)}
+                abbr={formatDay(date)}
+              >
+                <div className={styles.muted}>{formatWeekday(date)}</div>
+                {dayOfMonth(date)}
+              </th>
+            ))}
+            <th scope="col">Hours / contract</th>
+          </tr>
+        </thead>
+        <tbody>
+          {grid.rows.map((row, r) => {
+            const h = hours.get(row.staffMemberId);
+            return (
+              <tr key={row.staffMemberId}>
+                <th scope="row" className={styles.name}>
+                  {row.name}
+                </th>
+                {row.cells.map((cell, c) => {
+                  const date = grid.dates[c];
+                  const shift = cell.shiftTypeId ? shiftTypes.get(cell.shiftTypeId) : undefined;
+                  const hasFinding = flagged.has(`${row.staffMemberId}|${date}`);
+                  const label = [
+                    row.name,
+                    formatDay(date),
+                    shift ? `${shift.code} ${shift.name}` : 'day off',
+                    cell.pinned ? 'pinned' : '',
+                    hasFinding ? 'has a rule finding' : '',
+                  ]
+                    .filter(Boolean)
+                    .join(', ');
+                  return (
+                    <td key={date} className={mergeClasses(isWeekend(date) && styles.weekend)}>
+                      <button
+                        type="button"
+                        className={mergeClasses(styles.cell, hasFinding && styles.flagged)}
+                        aria-label={label}
+                        title={label}
+                        data-row={r}
+                        data-col={c}
+                        tabIndex={r === 0 && c === 0 ? 0 : -1}
+                        disabled={readOnly}
+                        onClick={() => onOpenCell(row.staffMemberId, date)}
+                      >
+                        {shift ? (
+                          <ShiftChip code={shift.code} colour={shift.colour} />
+                        ) : (
+                          <span className={styles.off} aria-hidden>
+                            ·
+                          </span>
+                        )}
+                        {cell.pinned && <PinFilled aria-hidden />}
+                        {hasFinding && <WarningFilled aria-hidden className={styles.warnIcon} />}
+                      </button>
+                    </td>
+                  );
+                })}
+                <td
+                  className={mergeClasses(
+                    styles.hours,
+                    h?.state === 'under' || h?.state === 'over' ? styles.under : undefined,
+                  )}
+                >
+                  {h ? hoursCell(h) : ''}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+        <tbody aria-label="Cover against needs">
+          <tr>
+            <th scope="colgroup" colSpan={grid.dates.length + 2} className={styles.coverHead}>
+              Cover against needs (people on the shift / minimum–target)
+            </th>
+          </tr>
+          {cover.map((line) => (
+            <tr key={`${line.shiftType.id}-${line.skill?.id ?? 'any'}`}>
+              <th scope="row" className={styles.name}>
+                <ShiftChip code={line.shiftType.code} colour={line.shiftType.colour} />{' '}
+                {line.skill ? line.skill.code : 'anyone'}
+              </th>
+              {line.days.map((day, d) => {
+                const state = coverState(day.count, day.need);
+                const words = COVER_WORDS[state];
+                const date = grid.dates[d];
+                return (
+                  <td
+                    key={date}
+                    className={styles[state]}
+                    title={`${formatDay(date)}, ${line.shiftType.name}${line.skill ? ` (${line.skill.name})` : ''}: ${day.count} on${day.need ? ` against ${day.need.min}–${day.need.target}` : ', no need set'}${words ? `, ${words}` : ''}`}
+                  >
+                    {day.count}
+                    {day.need ? `/${day.need.min}–${day.need.target}` : ''}
+                    {state === 'short' || state === 'over' || state === 'belowTarget' ? (
+                      <div>{words}</div>
+                    ) : null}
+                  </td>
+                );
+              })}
+              <td />
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+function hoursCell(h: HoursLine): string {
+  const paid = hoursText(h.paidMinutes);
+  if (h.state === 'noContract') return `${paid} (no contract)`;
+  const range =
+    h.target !== null
+      ? `target ${hoursText(h.target)}`
+      : h.max !== null
+        ? `at most ${hoursText(h.max)}`
+        : h.min !== null
+          ? `at least ${hoursText(h.min)}`
+          : 'no hours rule';
+  const words = h.state === 'under' ? ', under' : h.state === 'over' ? ', over' : '';
+  return `${paid} / ${range}${words}`;
+}

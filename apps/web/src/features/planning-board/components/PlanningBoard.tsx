@@ -1,0 +1,165 @@
+import { useMemo, useState } from 'react';
+import { Badge, makeStyles, tokens } from '@fluentui/react-components';
+import { PinFilled, WarningFilled } from '@fluentui/react-icons';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import type { AssignmentGridDto, RosterPeriodDto } from '@rotaplex/contracts';
+import { contractsQuery, shiftTypesQuery, skillsQuery } from '@/features/planning/api/planning.queries';
+import { usePlanningStyles } from '@/features/planning/components/planningStyles';
+import { ErrorBanner } from '@/ui/ErrorBanner';
+import { TableSkeleton } from '@/ui/LoadingState';
+import {
+  assignmentsQuery,
+  boardKeys,
+  coverNeedsQuery,
+  editCell,
+  setPinned,
+  solveRunsQuery,
+  unitStaffQuery,
+} from '../api/board.queries';
+import { useSolveRun } from '../hooks/useSolveRun';
+import { coverLines, hoursAgainstContract } from '../utils/boardSummary';
+import { BoardGrid } from './BoardGrid';
+import { CellDialog } from './CellDialog';
+import { SolvePanel } from './SolvePanel';
+import { ViolationsPanel } from './ViolationsPanel';
+
+const useStyles = makeStyles({
+  legend: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: tokens.spacingHorizontalL,
+    color: tokens.colorNeutralForeground2,
+  },
+  legendItem: { display: 'inline-flex', alignItems: 'center', gap: tokens.spacingHorizontalXS },
+});
+
+/** The planning board of one roster period: grid, cover, hours, Generate with progress, and findings. */
+export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
+  const styles = useStyles();
+  const planning = usePlanningStyles();
+  const queryClient = useQueryClient();
+  const grid = useQuery(assignmentsQuery(period.id));
+  const runs = useQuery(solveRunsQuery(period.id));
+  const shiftTypes = useQuery(shiftTypesQuery(period.unitId));
+  const skills = useQuery(skillsQuery());
+  const contracts = useQuery(contractsQuery());
+  const staff = useQuery(unitStaffQuery(period.unitId));
+  const needs = useQuery(coverNeedsQuery(period.unitId));
+  const latestRun = runs.data
+    ? [...runs.data].sort((a, b) => b.createdAt.localeCompare(a.createdAt))[0]
+    : undefined;
+  const solve = useSolveRun(period.id, latestRun);
+  const [open, setOpen] = useState<{ staffMemberId: string; date: string } | null>(null);
+  const readOnly = period.status !== 'draft';
+
+  const maps = useMemo(() => {
+    const shiftTypeMap = new Map((shiftTypes.data ?? []).map((s) => [s.id, s]));
+    const skillMap = new Map((skills.data ?? []).map((s) => [s.id, s]));
+    const staffMap = new Map((staff.data?.items ?? []).map((s) => [s.id, s]));
+    const contractMap = new Map((contracts.data ?? []).map((c) => [c.id, c]));
+    const names = new Map((grid.data?.rows ?? []).map((r) => [r.staffMemberId, r.name]));
+    return { shiftTypeMap, skillMap, staffMap, contractMap, names };
+  }, [shiftTypes.data, skills.data, staff.data, contracts.data, grid.data]);
+
+  const cover = useMemo(
+    () =>
+      grid.data && shiftTypes.data && needs.data && skills.data
+        ? coverLines(grid.data, shiftTypes.data, needs.data, skills.data, maps.staffMap)
+        : [],
+    [grid.data, shiftTypes.data, needs.data, skills.data, maps.staffMap],
+  );
+  const hours = useMemo(() => {
+    const out = new Map<string, ReturnType<typeof hoursAgainstContract>>();
+    for (const row of grid.data?.rows ?? []) {
+      const contractId = maps.staffMap.get(row.staffMemberId)?.contractId;
+      const contract = contractId ? maps.contractMap.get(contractId) : undefined;
+      out.set(row.staffMemberId, hoursAgainstContract(row.cells, maps.shiftTypeMap, contract, period.days));
+    }
+    return out;
+  }, [grid.data, maps, period.days]);
+  const flagged = useMemo(
+    () =>
+      new Set(
+        (grid.data?.check.violations ?? []).flatMap((v) => v.dates.map((d) => `${v.staffMemberId}|${d}`)),
+      ),
+    [grid.data],
+  );
+
+  const store = (next: AssignmentGridDto) => queryClient.setQueryData(boardKeys.grid(period.id), next);
+
+  const failed = [grid, shiftTypes, skills, contracts, staff, needs].find((q) => q.isError);
+  const running = solve.run?.status === 'queued' || solve.run?.status === 'running';
+  const openRow = open && grid.data?.rows.find((r) => r.staffMemberId === open.staffMemberId);
+  const openIndex = open && grid.data ? grid.data.dates.indexOf(open.date) : -1;
+
+  return (
+    <div className={planning.stack}>
+      <section className={planning.panel}>
+        <SolvePanel
+          solve={solve}
+          readOnly={readOnly}
+          shiftTypes={maps.shiftTypeMap}
+          skills={maps.skillMap}
+          staffNames={maps.names}
+        />
+      </section>
+      <section className={planning.panel} aria-label="Roster">
+        {failed?.error && <ErrorBanner error={failed.error} onRetry={() => void failed.refetch()} />}
+        {grid.isPending && <TableSkeleton label="Loading the planning board" />}
+        <div className={styles.legend}>
+          {readOnly && (
+            <Badge appearance="tint" color="success">
+              Published: read-only
+            </Badge>
+          )}
+          {running && <span>The solver is working; edits wait until it ends.</span>}
+          <span className={styles.legendItem}>
+            <PinFilled aria-hidden /> Pinned: kept by a new Generate
+          </span>
+          <span className={styles.legendItem}>
+            <WarningFilled aria-hidden /> Has a rule finding
+          </span>
+          <span>· Day off. Arrow keys move between cells; Enter opens one.</span>
+        </div>
+        {grid.data && (
+          <BoardGrid
+            grid={grid.data}
+            shiftTypes={maps.shiftTypeMap}
+            cover={cover}
+            hours={hours}
+            flagged={flagged}
+            readOnly={readOnly || running}
+            onOpenCell={(staffMemberId, date) => setOpen({ staffMemberId, date })}
+          />
+        )}
+      </section>
+      {grid.data && (
+        <section className={planning.panel}>
+          <ViolationsPanel violations={grid.data.check.violations} names={maps.names} />
+        </section>
+      )}
+      {open && openRow && openIndex >= 0 && grid.data && (
+        <CellDialog
+          key={`${open.staffMemberId}|${open.date}`}
+          name={openRow.name}
+          date={open.date}
+          cell={openRow.cells[openIndex]}
+          shiftTypes={shiftTypes.data ?? []}
+          violations={grid.data.check.violations.filter(
+            (v) => v.staffMemberId === open.staffMemberId && v.dates.includes(open.date),
+          )}
+          onSave={async (shiftTypeId) =>
+            store(
+              await editCell(period.id, { staffMemberId: open.staffMemberId, date: open.date, shiftTypeId }),
+            )
+          }
+          onPin={async (pinned) =>
+            store(await setPinned(period.id, { staffMemberId: open.staffMemberId, date: open.date }, pinned))
+          }
+          onClose={() => setOpen(null)}
+        />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,186 @@
+import { useState } from 'react';
+import {
+  Body1,
+  Button,
+  Field,
+  Input,
+  makeStyles,
+  MessageBar,
+  MessageBarBody,
+  MessageBarTitle,
+  ProgressBar,
+  Subtitle2,
+  tokens,
+} from '@fluentui/react-components';
+import { PlayRegular, StopRegular } from '@fluentui/react-icons';
+import {
+  SOLVE_TIME_LIMIT_MAX_SECONDS,
+  SOLVE_TIME_LIMIT_MIN_SECONDS,
+  type ShiftTypeDto,
+  type SkillDto,
+  type SolveRunStatus,
+} from '@rotaplex/contracts';
+import type { SolveRunState } from '../hooks/useSolveRun';
+import { ExplanationsPanel } from './ExplanationsPanel';
+
+const useStyles = makeStyles({
+  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
+  controls: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', gap: tokens.spacingHorizontalM },
+  limit: { width: '9rem' },
+  figures: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalXL,
+    margin: 0,
+    '& dt': { color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
+    '& dd': { margin: 0, fontWeight: tokens.fontWeightSemibold },
+  },
+});
+
+const STATUS_TEXT: Record<SolveRunStatus, string> = {
+  queued: 'Waiting for the solver',
+  running: 'Generating',
+  finished: 'Finished',
+  failed: 'Failed',
+  cancelled: 'Stopped',
+};
+
+const number = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1 });
+const percent = new Intl.NumberFormat('en-GB', { style: 'percent', maximumFractionDigits: 2 });
+
+export interface SolvePanelProps {
+  solve: SolveRunState;
+  readOnly: boolean;
+  shiftTypes: Map<string, ShiftTypeDto>;
+  skills: Map<string, SkillDto>;
+  staffNames: Map<string, string>;
+}
+
+/** Generate with a time limit, the live progress of the run, Stop, and the result once it ends. */
+export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames }: SolvePanelProps) {
+  const styles = useStyles();
+  const [limit, setLimit] = useState('30');
+  const [limitError, setLimitError] = useState<string | null>(null);
+  const { run, progress } = solve;
+  const active = run?.status === 'queued' || run?.status === 'running';
+
+  const generate = () => {
+    const seconds = Number(limit);
+    if (
+      !Number.isInteger(seconds) ||
+      seconds < SOLVE_TIME_LIMIT_MIN_SECONDS ||
+      seconds > SOLVE_TIME_LIMIT_MAX_SECONDS
+    ) {
+      setLimitError(
+        `Enter whole seconds from ${SOLVE_TIME_LIMIT_MIN_SECONDS} to ${SOLVE_TIME_LIMIT_MAX_SECONDS}.`,
+      );
+      return;
+    }
+    setLimitError(null);
+    solve.start(seconds);
+  };
+
+  const elapsed = progress?.elapsedSeconds ?? 0;
+  const limitSeconds = run?.timeLimitSeconds ?? 0;
+
+  return (
+    <section className={styles.root} aria-label="Generate">
+      <Subtitle2 as="h2">Generate</Subtitle2>
+      {readOnly ? (
+        <Body1>This period is published, so it cannot be generated or edited here.</Body1>
+      ) : (
+        <div className={styles.controls}>
+          <Field
+            label="Time limit (seconds)"
+            validationMessage={limitError ?? undefined}
+            validationState={limitError ? 'error' : 'none'}
+          >
+            <Input
+              className={styles.limit}
+              inputMode="numeric"
+              value={limit}
+              onChange={(_, d) => setLimit(d.value)}
+              disabled={active}
+            />
+          </Field>
+          <Button
+            appearance="primary"
+            icon={<PlayRegular />}
+            onClick={generate}
+            disabled={active || solve.starting}
+          >
+            Generate
+          </Button>
+          {active && (
+            <Button icon={<StopRegular />} onClick={solve.stop} disabled={solve.stopping}>
+              {solve.stopping ? 'Stopping…' : 'Stop'}
+            </Button>
+          )}
+        </div>
+      )}
+      {solve.error && (
+        <MessageBar intent="error">
+          <MessageBarBody>{solve.error}</MessageBarBody>
+        </MessageBar>
+      )}
+      {run && (
+        <div role="status" aria-live="polite" aria-label="Solve progress">
+          <Body1>
+            {STATUS_TEXT[run.status]}
+            {limitSeconds > 0 && ` · ${number.format(elapsed)} s of ${limitSeconds} s`}
+          </Body1>
+          {active && (
+            <Field
+              validationMessage={`${Math.round((100 * elapsed) / Math.max(1, limitSeconds))}% of the time limit`}
+              validationState="none"
+            >
+              <ProgressBar
+                aria-label="Time used of the limit"
+                value={Math.min(1, elapsed / Math.max(1, limitSeconds))}
+                max={1}
+              />
+            </Field>
+          )}
+          <dl className={styles.figures}>
+            <div>
+              <dt>Best objective</dt>
+              <dd>{progress?.objective != null ? number.format(progress.objective) : 'none yet'}</dd>
+            </div>
+            <div>
+              <dt>Bound</dt>
+              <dd>{progress?.bound != null ? number.format(progress.bound) : 'unknown'}</dd>
+            </div>
+            <div>
+              <dt>Gap</dt>
+              <dd>{progress?.gap != null ? percent.format(progress.gap) : 'unknown'}</dd>
+            </div>
+          </dl>
+        </div>
+      )}
+      {run?.status === 'failed' && (
+        <MessageBar intent="error">
+          <MessageBarBody>
+            <MessageBarTitle>The run failed</MessageBarTitle>
+            {run.errorMessage ?? 'No reason was given.'}
+          </MessageBarBody>
+        </MessageBar>
+      )}
+      {run?.result && !active && (
+        <>
+          <MessageBar intent={run.result.objective === null ? 'warning' : 'success'}>
+            <MessageBarBody>
+              <MessageBarTitle>Quality</MessageBarTitle>
+              <span data-testid="quality-statement">{run.result.quality}</span>
+            </MessageBarBody>
+          </MessageBar>
+          <ExplanationsPanel
+            explanations={run.result.explanations}
+            shiftTypes={shiftTypes}
+            skills={skills}
+            staffNames={staffNames}
+          />
+        </>
+      )}
+    </section>
+  );
+}
