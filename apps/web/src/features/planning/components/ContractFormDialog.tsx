@@ -1,8 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -14,7 +12,6 @@ import {
   MessageBarBody,
   MessageBarTitle,
   Select,
-  Spinner,
   tokens,
 } from '@fluentui/react-components';
 import {
@@ -39,6 +36,7 @@ import {
   type RuleInputs,
 } from '@/features/planning/utils/contractRules';
 import { WorkingTimeCaution } from './WorkingTimeCaution';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   surface: { maxWidth: '52rem', width: '100%' },
@@ -215,19 +213,11 @@ export function ContractFormDialog({
                 </MessageBar>
               )}
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {contract ? 'Save changes' : 'Create contract'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={contract ? 'Save changes' : 'Create contract'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>

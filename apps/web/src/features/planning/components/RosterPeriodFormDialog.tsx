@@ -1,9 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button,
   Caption1,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -11,7 +9,6 @@ import {
   Field,
   Input,
   makeStyles,
-  Spinner,
   tokens,
 } from '@fluentui/react-components';
 import { ROSTER_PERIOD_MAX_DAYS, ROSTER_PERIOD_MIN_DAYS, type RosterPeriodDto } from '@rotaplex/contracts';
@@ -25,6 +22,7 @@ import {
   updateRosterPeriod,
 } from '@/features/planning/api/planning.queries';
 import { addDays } from '@/features/planning/utils/periodDates';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   content: {
@@ -135,19 +133,11 @@ export function RosterPeriodFormDialog({
                 </Caption1>
               )}
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {period ? 'Save changes' : 'Create period'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={period ? 'Save changes' : 'Create period'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>

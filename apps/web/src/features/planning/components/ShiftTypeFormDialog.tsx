@@ -1,9 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button,
   Caption1,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -14,7 +12,6 @@ import {
   Radio,
   RadioGroup,
   Select,
-  Spinner,
   tokens,
 } from '@fluentui/react-components';
 import { SHIFT_COLOURS, type ShiftColour, type ShiftTypeDto } from '@rotaplex/contracts';
@@ -30,6 +27,7 @@ import {
   summariseShiftTimes,
 } from '@/features/planning/utils/shiftTimes';
 import { ShiftChip } from './ShiftChip';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   content: {
@@ -216,19 +214,11 @@ export function ShiftTypeFormDialog({
                 </Select>
               </Field>
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {shiftType ? 'Save changes' : 'Create shift type'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={shiftType ? 'Save changes' : 'Create shift type'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>

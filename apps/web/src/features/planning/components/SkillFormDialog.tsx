@@ -1,8 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -10,7 +8,6 @@ import {
   Field,
   Input,
   makeStyles,
-  Spinner,
   tokens,
 } from '@fluentui/react-components';
 import { SKILL_CODE_PATTERN, type SkillDto } from '@rotaplex/contracts';
@@ -19,6 +16,7 @@ import { formErrors } from '@/api/errors';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
 import { createSkill, planningKeys, updateSkill } from '@/features/planning/api/planning.queries';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   content: {
@@ -100,19 +98,11 @@ export function SkillFormDialog({ skill, onClose }: SkillFormDialogProps) {
                 <Input value={name} autoComplete="off" onChange={(_, d) => setName(d.value)} />
               </Field>
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {skill ? 'Save changes' : 'Create skill'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={skill ? 'Save changes' : 'Create skill'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>

@@ -1,10 +1,8 @@
 import { useId, useState, type FormEvent } from 'react';
 import {
-  Button,
   Caption1,
   Checkbox,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -14,7 +12,6 @@ import {
   Label,
   makeStyles,
   Select,
-  Spinner,
   Switch,
   tokens,
 } from '@fluentui/react-components';
@@ -29,6 +26,7 @@ import {
   unitUsersQuery,
   updateStaffMember,
 } from '@/features/planning/api/planning.queries';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   content: {
@@ -213,19 +211,11 @@ export function StaffFormDialog({
                 onChange={(_, d) => setActive(d.checked)}
               />
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {member ? 'Save changes' : 'Add person'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={member ? 'Save changes' : 'Add person'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>

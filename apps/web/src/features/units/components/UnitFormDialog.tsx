@@ -1,8 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -10,7 +8,6 @@ import {
   Field,
   Input,
   makeStyles,
-  Spinner,
   tokens,
 } from '@fluentui/react-components';
 import type { UnitDto } from '@rotaplex/contracts';
@@ -21,6 +18,7 @@ import { useNotify } from '@/ui/notify';
 import { createUnit, unitKeys, updateUnit } from '@/features/units/api/units.queries';
 import { isValidTimeZone } from '@/features/units/timeZones';
 import { TimeZonePicker } from './TimeZonePicker';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   content: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
@@ -90,19 +88,11 @@ export function UnitFormDialog({ unit, open, onClose }: UnitFormDialogProps) {
                 error={localError.timeZone ?? errors.fields.timeZone}
               />
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {unit ? 'Save changes' : 'Create unit'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={unit ? 'Save changes' : 'Create unit'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>

@@ -1,8 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button,
   Dialog,
-  DialogActions,
   DialogBody,
   DialogContent,
   DialogSurface,
@@ -11,7 +9,6 @@ import {
   Input,
   makeStyles,
   Select,
-  Spinner,
   tokens,
 } from '@fluentui/react-components';
 import { ROLES, isUnitScoped, type Role, type UnitDto, type UserDto } from '@rotaplex/contracts';
@@ -22,6 +19,7 @@ import { useNotify } from '@/ui/notify';
 import { ROLE_LABELS, ROLE_SUMMARIES } from '@/features/auth/roleText';
 import { UnitCheckboxes } from '@/features/units/components/UnitCheckboxes';
 import { inviteUser, updateUser, userKeys } from '@/features/users/api/users.queries';
+import { FormDialogActions } from '@/ui/FormDialogActions';
 
 const useStyles = makeStyles({
   content: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
@@ -137,19 +135,11 @@ export function UserFormDialog({ user, units, open, onClose }: UserFormDialogPro
                 error={unitsError ?? errors.fields.unitIds}
               />
             </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose} disabled={mutation.isPending}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {user ? 'Save changes' : 'Send invitation'}
-              </Button>
-            </DialogActions>
+            <FormDialogActions
+              pending={mutation.isPending}
+              onCancel={onClose}
+              submitLabel={user ? 'Save changes' : 'Send invitation'}
+            />
           </DialogBody>
         </form>
       </DialogSurface>
