@@ -36,6 +36,14 @@ describe('SolverPool', () => {
     expect(Array.from(after.values ?? [])).toEqual([20, 10]);
   }
 
+  it('closes cleanly while its first worker is still starting', async () => {
+    // A fresh pool spawns its worker on the first solve; closing at once finds a slot with no worker yet.
+    const fresh = new SolverPool({ size: 1 });
+    const solve = fresh.solveRoster(smallWard(), { timeLimitSeconds: 10, explain: false });
+    await expect(fresh.close()).resolves.toBeUndefined();
+    await expect(solve).rejects.toMatchObject({ kind: 'closed' });
+  });
+
   it('solves in a worker: the highs README example reaches its published optimum 1100', async () => {
     await expectPoolStillSolves();
   });

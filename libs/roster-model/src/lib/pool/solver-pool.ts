@@ -248,7 +248,8 @@ export class SolverPool {
         if (slot.job)
           this.settle(slot.job, new SolverError('The solver pool was closed during the solve.', 'closed'));
         slot.state = 'dead';
-        await slot.worker.terminate();
+        // A slot still loading the wasm module has no worker yet; spawn() drops it once it sees `closed`.
+        if (slot.worker) await slot.worker.terminate();
       }),
     );
     this.slots.length = 0;
