@@ -63,8 +63,17 @@ describe('planning board as the demo manager', () => {
       await cell(0, col).focus();
       await page.keyboard.press('Enter');
       const dialog = page.getByRole('dialog');
-      await dialog.getByRole('combobox', { name: 'Shift' }).selectOption({ label: await optionLabel(label) });
-      await dialog.getByRole('button', { name: 'Save shift' }).click();
+      const select = dialog.getByRole('combobox', { name: 'Shift' });
+      const wanted = await optionLabel(label);
+      // The generated roster may already hold the wanted shift here; Save is then (rightly) disabled.
+      const current = await select.evaluate(
+        (el: HTMLSelectElement) => el.selectedOptions[0]?.textContent ?? '',
+      );
+      if (current !== wanted) {
+        await select.selectOption({ label: wanted });
+        await dialog.getByRole('button', { name: 'Save shift' }).click();
+        await dialog.getByRole('button', { name: 'Save shift' }).and(page.locator(':disabled')).waitFor();
+      }
       return dialog;
     };
     const optionLabel = async (label: RegExp) => {
