@@ -3,6 +3,7 @@ import { NestFactory } from '@nestjs/core';
 import { type NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, type OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { API_PREFIX, REFRESH_COOKIE } from '@rotaplex/contracts';
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import { type NextFunction, type Request, type Response } from 'express';
 import helmet from 'helmet';
@@ -57,6 +58,14 @@ export function configureApp(app: NestExpressApplication, config: AppConfig): Op
         },
       },
       strictTransportSecurity: https,
+    }),
+  );
+  // gzip for the web app's scripts and the JSON answers; server-sent event streams stay unbuffered.
+  app.use(
+    compression({
+      filter: (req, res) =>
+        !String(res.getHeader('Content-Type') ?? '').startsWith('text/event-stream') &&
+        compression.filter(req, res),
     }),
   );
   app.use(cookieParser());

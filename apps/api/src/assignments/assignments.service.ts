@@ -8,6 +8,7 @@ import {
 import { checkRoster, type Roster, type Violation } from '@rotaplex/roster-model';
 import { DataSource, type EntityManager } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
+import { GenerationCache, WriteGeneration } from '../database/write-generation';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { AssignmentEntity } from './assignment.entity';
@@ -20,11 +21,17 @@ export class AssignmentsService {
     private readonly dataSource: DataSource,
     private readonly periods: RosterPeriodsService,
     private readonly input: RosterInputService,
-  ) {}
+    writes: WriteGeneration,
+  ) {
+    this.grids = new GenerationCache(writes);
+  }
+
+  /** Board reads repeat while nothing changes (many readers, a solve running): served from a cache. */
+  private readonly grids: GenerationCache<AssignmentGridDto>;
 
   async grid(user: AuthUser, periodId: string): Promise<AssignmentGridDto> {
     await this.periods.get(user, periodId); // 404 / 403 by unit
-    return this.gridOf(periodId);
+    return this.grids.get(periodId, () => this.gridOf(periodId));
   }
 
   /** Saves one cell (a shift or a day off) of a draft and answers with the checker's findings for the edited roster. */

@@ -1,0 +1,85 @@
+import { Injectable } from '@nestjs/common';
+import { DataSource, type EntitySubscriberInterface, type EntityMetadata } from 'typeorm';
+
+/**
+ * Tables whose writes never change what a roster read shows (sessions, mail, solver progress,
+ * logs). Writes to any other table move the generation on.
+ */
+const IGNORED_TABLES = new Set([
+  'refresh_tokens',
+  'one_time_tokens',
+  'mail_messages',
+  'outbox_messages',
+  'solve_runs',
+  'audit_entries',
+]);
+
+/**
+ * A number that moves on whenever data that reads depend on may have changed: on every entity
+ * write TypeORM reports (save, insert, update, remove, query-builder updates and deletes) and again
+ * when the transaction holding such a write commits or rolls back. A cached read is valid while the
+ * generation it was computed under is still current; take the generation BEFORE reading the data,
+ * so a write that lands while the read runs makes the result stale at once. Raw SQL writes are not
+ * seen: the product writes through entities (the few raw queries are counts).
+ */
+@Injectable()
+export class WriteGeneration {
+  private generation = 0;
+  private dirty = false;
+
+  constructor(dataSource: DataSource) {
+    const subscriber: EntitySubscriberInterface = {
+      afterInsert: (e) => this.wrote(e.metadata),
+      afterUpdate: (e) => this.wrote(e.metadata),
+      afterRemove: (e) => this.wrote(e.metadata),
+      afterSoftRemove: (e) => this.wrote(e.metadata),
+      afterRecover: (e) => this.wrote(e.metadata),
+      afterTransactionCommit: () => this.settled(),
+      afterTransactionRollback: () => this.settled(),
+    };
+    dataSource.subscribers.push(subscriber);
+  }
+
+  current(): number {
+    return this.generation;
+  }
+
+  private wrote(metadata: EntityMetadata | undefined): void {
+    if (metadata && IGNORED_TABLES.has(metadata.tableName)) return;
+    this.generation++;
+    this.dirty = true;
+  }
+
+  private settled(): void {
+    // Transactions are serialised (see serialised-transactions.ts), so the flag belongs to the
+    // transaction that just ended.
+    if (!this.dirty) return;
+    this.dirty = false;
+    this.generation++;
+  }
+}
+
+/** Results of an expensive read per key, valid while the write generation has not moved. */
+export class GenerationCache<T> {
+  private readonly entries = new Map<string, { generation: number; value: Promise<T> }>();
+
+  constructor(
+    private readonly writes: WriteGeneration,
+    private readonly maxEntries = 64,
+  ) {}
+
+  get(key: string, compute: () => Promise<T>): Promise<T> {
+    const generation = this.writes.current();
+    const hit = this.entries.get(key);
+    if (hit && hit.generation === generation) return hit.value;
+    const value = compute();
+    this.entries.delete(key);
+    this.entries.set(key, { generation, value });
+    // A failed read is not kept.
+    value.catch(() => {
+      if (this.entries.get(key)?.value === value) this.entries.delete(key);
+    });
+    while (this.entries.size > this.maxEntries) this.entries.delete(this.entries.keys().next().value!);
+    return value;
+  }
+}
