@@ -9,8 +9,6 @@ const fromHere = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 const CHUNK_GROUPS: { name: string; test: RegExp }[] = [
   { name: 'calendar', test: /node_modules[\\/]@fullcalendar[\\/]/ },
   { name: 'charts', test: /node_modules[\\/](recharts|d3-[a-z]+|victory-vendor)[\\/]/ },
-  { name: 'planning-board', test: /[\\/]src[\\/]features[\\/]planning-board[\\/]/ },
-  { name: 'fluent', test: /node_modules[\\/](@fluentui|@griffel|tabster|@floating-ui)[\\/]/ },
   { name: 'react', test: /node_modules[\\/](react|react-dom|react-router|react-router-dom|scheduler)[\\/]/ },
 ];
 
