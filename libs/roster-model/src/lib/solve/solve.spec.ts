@@ -3,6 +3,7 @@
  * each test runs in a few seconds. Expected outcomes are worked out by hand beside each check.
  */
 import * as checker from '../check/checker';
+import * as modelBuilder from '../model/build-model';
 import type { SolveProgress } from '../result';
 import { busyUnit, smallWard } from './fixtures.test-helpers';
 import { SolverCheckError, assertCheckerAgrees, solveRoster } from './solve';
@@ -167,6 +168,27 @@ describe('solveRoster', () => {
     expect(again.warmStartObjective).toBe(first.objective);
     expect(again.objective).toBe(first.objective);
   });
+  it('takes a warm start that breaks hard rules (elastic model) and still proves the small ward optimum', async () => {
+    // Same hand-worked optimum 0 as the first test. The start has everyone on nights all week,
+    // which breaks the weekly limit of working days and leaves earlies uncovered: HiGHS cannot
+    // take it on the strict model, the elastic model can, and the result must still be strict.
+    const problem = smallWard();
+    const allNights = Object.fromEntries(problem.people.map((p) => [p.id, new Array(7).fill('N')]));
+    expect(checker.checkRoster(problem, allNights).violations.length).toBeGreaterThan(0);
+    const builds = jest.spyOn(modelBuilder, 'buildModel');
+    const result = await solveRoster(problem, {
+      timeLimitSeconds: 60,
+      explain: false,
+      strategy: 'mip',
+      warmStart: allNights,
+    });
+    expect(result.status).toBe('optimal');
+    expect(result.objective).toBe(0);
+    expect(result.check?.violations).toEqual([]);
+    expect(checker.checkRoster(problem, result.roster!).violations).toEqual([]);
+    expect(builds.mock.calls.some(([, o]) => (o?.elastic ?? 0) > 0)).toBe(true);
+  });
+
   it('fix-and-optimise first, then the full MIP, still reaches and proves the small ward optimum', async () => {
     // Same hand-worked optimum 0 as the first test: the final full MIP starts from the
     // fix-and-optimise roster and proves it.

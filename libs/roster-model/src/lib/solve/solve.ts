@@ -170,6 +170,39 @@ function startValuesOf(
   return { values: built.encode(start.roster), objective: start.check.objective };
 }
 
+/**
+ * The result of a MIP run on the elastic model as a run on the strict one: its incumbent if that
+ * breaks no hard rule (re-encoded in the strict model), else no incumbent. Proven optimal with a
+ * broken rule means no roster meets every hard rule: reported as infeasible, so the conflicts are
+ * explained on the strict model.
+ */
+function strictRun(
+  elasticRun: MipRunResult,
+  elastic: BuiltModel,
+  penalty: number,
+  built: BuiltModel,
+  problem: RosterProblem,
+): MipRunResult {
+  const run = { ...elasticRun, improvements: elasticRun.improvements.filter((i) => i.objective < penalty) };
+  if (!run.values) return run;
+  const roster = elastic.decode(run.values);
+  const check = checkRoster(problem, roster, built.index);
+  if (check.violations.length === 0) {
+    const values = built.encode(roster);
+    return { ...run, values, objective: built.objectiveOf(values) };
+  }
+  const status = run.status === 'optimal' ? 'infeasible' : run.status;
+  return {
+    ...run,
+    status,
+    modelStatusText: status === 'infeasible' ? 'infeasible' : run.modelStatusText,
+    values: null,
+    objective: null,
+    gap: null,
+    secondsToBest: null,
+  };
+}
+
 /** Price of one unit of hard-rule violation in the elastic model fix-and-optimise repairs a start with. */
 function elasticPenalty(built: BuiltModel): number {
   let largest = 1;
@@ -307,19 +340,37 @@ export async function solveRoster(
     }
   }
 
+  // A start that breaks hard rules cannot seed HiGHS on the strict model. The elastic model (each
+  // hard row with a priced slack) takes it as it is, so HiGHS improves a roster from the first
+  // second instead of searching for one; the elastic model is a relaxation of the strict one, so
+  // its bound is still a valid bound, and an incumbent without slack is a strict roster.
+  const elastic =
+    !start && startRoster && startRoster.check.violations.length > 0 && !isCancelled(options)
+      ? { model: buildModel(problem, { elastic: elasticPenalty(built) }), penalty: elasticPenalty(built) }
+      : null;
   let run: MipRunResult;
   try {
-    run = runMip(session, data, {
+    run = runMip(session, elastic ? solverArrays(elastic.model) : data, {
       timeLimitSeconds: mipLimit,
       mipRelGap: options.mipRelGap,
       randomSeed: options.randomSeed,
       highsOptions,
-      onProgress: options.onProgress,
+      // An elastic incumbent that still pays for a broken rule is not a roster to show.
+      onProgress:
+        elastic && options.onProgress
+          ? (p) =>
+              options.onProgress!(
+                p.objective !== null && p.objective >= elastic.penalty
+                  ? { ...p, objective: null, gap: null }
+                  : p,
+              )
+          : options.onProgress,
       signal: options.signal,
       cancelFlag: options.cancelFlag,
-      startValues: start?.values,
+      startValues: elastic ? elastic.model.encode(startRoster!.roster) : start?.values,
       clockStart,
     });
+    if (elastic) run = strictRun(run, elastic.model, elastic.penalty, built, problem);
     const left = timeLimitSeconds - elapsed();
     if (
       strategy === 'mipThenFixAndOptimise' &&
