@@ -37,7 +37,7 @@ export default defineConfig({
     rolldownOptions: {
       output: {
         // `manualChunks` is deprecated in Vite 8 (Rolldown); `codeSplitting.groups` is its replacement.
-        codeSplitting: { groups: CHUNK_GROUPS },
+        codeSplitting: { includeDependenciesRecursively: false, groups: CHUNK_GROUPS },
       },
     },
   },
