@@ -15,6 +15,11 @@ const PUBLIC_ROUTES = new Set([
   'POST /api/auth/invitations/accept',
   'POST /api/auth/password-reset/request',
   'POST /api/auth/password-reset/confirm',
+  // A personal iCalendar feed: the secret token in the URL is the key (calendar programs cannot sign in).
+  'GET /api/calendar-feeds/:file',
+  // E-mailed swap decision links: the single-use token is the key; GET only shows, POST decides.
+  'GET /api/swap-links',
+  'POST /api/swap-links',
 ]);
 /** Routes added by the OpenAPI module (documents, not data). */
 const DOC_ROUTE = /^\/api\/docs/;
@@ -41,6 +46,17 @@ describe('every route is closed by default', () => {
     expect(routes.map(key)).toEqual(
       expect.arrayContaining(['GET /api/users', 'DELETE /api/units/:id', 'GET /api/mailbox/:id']),
     );
+    // Publishing, repair, audit and the outbox (closed like every other route).
+    expect(routes.map(key)).toEqual(
+      expect.arrayContaining([
+        'GET /api/outbox',
+        'POST /api/outbox/:id/retry',
+        'POST /api/roster-periods/:id/publish',
+        'POST /api/roster-periods/:id/repair',
+        'GET /api/roster-periods/:id/audit',
+        'GET /api/roster-periods/:id/export',
+      ]),
+    );
   });
 
   it('refuses an anonymous caller with 401 on every non-public route', async () => {
@@ -61,11 +77,15 @@ describe('every route is closed by default', () => {
     expect(failures).toEqual([]);
   });
 
-  it('answers a malformed id with 400 on every :id route (signed in as admin)', async () => {
+  it('answers a malformed id with 400 on every :id route (signed in as admin, or staff for staff-only routes)', async () => {
     const { token } = await t.login('admin@example.com');
+    const { token: staffToken } = await t.login('staff@example.com');
     const failures: string[] = [];
     for (const r of routes.filter((x) => x.path.includes(':id'))) {
-      const res = await send(t, r.method, concrete(r.path, 'not-a-uuid')).set(bearer(token)).send({});
+      let res = await send(t, r.method, concrete(r.path, 'not-a-uuid')).set(bearer(token)).send({});
+      // Routes for a person's own requests are not the admin's: try them as a staff member.
+      if (res.status === 403)
+        res = await send(t, r.method, concrete(r.path, 'not-a-uuid')).set(bearer(staffToken)).send({});
       if (res.status !== 400) failures.push(`${key(r)} → ${res.status}`);
     }
     expect(failures).toEqual([]);

@@ -1,6 +1,18 @@
 import { InitialSchema1764633600000 } from './1764633600000-initial-schema';
 import { PlanningData1764720000000 } from './1764720000000-planning-data';
 import { Solving1764806400000 } from './1764806400000-solving';
+import { Publishing1764892800000 } from './1764892800000-publishing';
+import { Requests1764979200000 } from './1764979200000-requests';
+import { CalendarFeed1765065600000 } from './1765065600000-calendar-feed';
+import { Swaps1765152000000 } from './1765152000000-swaps';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
-export const MIGRATIONS = [InitialSchema1764633600000, PlanningData1764720000000, Solving1764806400000];
+export const MIGRATIONS = [
+  InitialSchema1764633600000,
+  PlanningData1764720000000,
+  Solving1764806400000,
+  Publishing1764892800000,
+  Requests1764979200000,
+  CalendarFeed1765065600000,
+  Swaps1765152000000,
+];
