@@ -171,6 +171,9 @@ function violationDto(input: RosterInput, v: Violation): RosterViolationDto {
 }
 
 function assertDraft(input: RosterInput): void {
+  if (input.period.status === 'published') {
+    throw new ConflictException('This period is published: change it through repair or a swap');
+  }
   if (input.period.status !== 'draft') {
     throw new ConflictException(`Only a draft period can be edited; this one is ${input.period.status}`);
   }

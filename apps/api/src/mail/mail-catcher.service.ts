@@ -37,6 +37,22 @@ export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
 
   async onModuleInit(): Promise<void> {
     if (!this.enabled) return;
+    await this.start();
+  }
+
+  /** Whether the catcher is accepting mail now. */
+  get running(): boolean {
+    return this.server !== null;
+  }
+
+  /**
+   * Starts listening (on the configured port the first time, on the same port again after a stop,
+   * so senders keep their settings). Does nothing when already running.
+   */
+  async start(): Promise<void> {
+    if (!this.enabled) throw new Error('The mail catcher is off: SMTP_HOST is configured');
+    if (this.server) return;
+    const listenPort = this.boundPort ?? this.config.mailCatcherPort;
     const server = new SMTPServer({
       authOptional: true,
       disabledCommands: ['AUTH', 'STARTTLS'],
@@ -74,12 +90,12 @@ export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
       const onError = (err: Error) =>
         reject(
           new Error(
-            `The local mail catcher could not listen on 127.0.0.1:${this.config.mailCatcherPort} (${err.message}). ` +
+            `The local mail catcher could not listen on 127.0.0.1:${listenPort} (${err.message}). ` +
               'Set MAIL_CATCHER_PORT to a free port (0 = any) or SMTP_HOST to use a real mail server.',
           ),
         );
       server.server.once('error', onError);
-      server.listen(this.config.mailCatcherPort, '127.0.0.1', () => {
+      server.listen(listenPort, '127.0.0.1', () => {
         server.server.off('error', onError);
         resolve();
       });
@@ -87,6 +103,16 @@ export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
     this.server = server;
     this.boundPort = (server.server.address() as AddressInfo).port;
     this.logger.log(`Local mail catcher listening on 127.0.0.1:${this.boundPort}`);
+  }
+
+  /**
+   * Stops accepting mail (senders then get "connection refused"); the port is kept for start().
+   * Used by tests of the outbox's retries.
+   */
+  async stop(): Promise<void> {
+    const server = this.server;
+    this.server = null;
+    if (server) await new Promise<void>((resolve) => server.close(() => resolve()));
   }
 
   async onApplicationShutdown(): Promise<void> {

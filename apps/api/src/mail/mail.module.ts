@@ -1,14 +1,16 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { OutboxDeliveryService } from '../outbox/outbox-delivery.service';
+import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
 import { MailCatcherService } from './mail-catcher.service';
 import { MailMessageEntity } from './mail-message.entity';
 import { MailService } from './mail.service';
 import { MailboxController } from './mailbox.controller';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([MailMessageEntity])],
+  imports: [TypeOrmModule.forFeature([MailMessageEntity, OutboxMessageEntity])],
   controllers: [MailboxController],
-  providers: [MailCatcherService, MailService],
-  exports: [MailService],
+  providers: [MailCatcherService, MailService, OutboxDeliveryService],
+  exports: [MailService, MailCatcherService, OutboxDeliveryService],
 })
 export class MailModule {}

@@ -1,7 +1,9 @@
-import { Injectable, Logger } from '@nestjs/common';
-import { createTransport, type Transporter } from 'nodemailer';
-import { AppConfig } from '../config/app-config';
-import { MailCatcherService } from './mail-catcher.service';
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, type EntityManager } from 'typeorm';
+import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
+import { OutboxDeliveryService } from '../outbox/outbox-delivery.service';
 
 export interface OutgoingMail {
   to: string;
@@ -12,36 +14,45 @@ export interface OutgoingMail {
   html: string;
 }
 
+const MAX_ADDRESS_LENGTH = 320;
+const MAX_SUBJECT_LENGTH = 1000;
+
 /**
- * The one way the product sends e-mail. Goes to SMTP_HOST when configured, otherwise to the local
- * mail catcher. (A persistent outbox with retries will sit behind this same method.)
+ * The one way the product sends e-mail. `send` only writes the message to the outbox table; the
+ * outbox loop delivers it (SMTP_HOST when configured, otherwise the local mail catcher) with
+ * retries and backoff, so a failed SMTP send loses nothing.
+ *
+ * Give `em` when the message belongs to a change made in a transaction: the message is then queued
+ * in that transaction (it exists only if the change commits) and delivered after the commit.
+ * Without `em` the message is queued at once and a first delivery attempt is made before `send`
+ * returns (a failure is not thrown: the message stays in the outbox and is retried).
  */
 @Injectable()
 export class MailService {
-  private readonly logger = new Logger(MailService.name);
-  private transporter: Transporter | null = null;
-
   constructor(
-    private readonly config: AppConfig,
-    private readonly catcher: MailCatcherService,
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly delivery: OutboxDeliveryService,
   ) {}
 
-  async send(mail: OutgoingMail): Promise<void> {
-    const info = await this.transport().sendMail({ from: this.config.mailFrom, ...mail });
-    this.logger.log(`Sent "${mail.subject}" to ${mail.to} (${String(info.messageId)})`);
-  }
-
-  private transport(): Transporter {
-    if (this.transporter) return this.transporter;
-    const smtp = this.config.smtp;
-    this.transporter = smtp
-      ? createTransport({
-          host: smtp.host,
-          port: smtp.port,
-          secure: smtp.secure,
-          auth: smtp.user && smtp.pass ? { user: smtp.user, pass: smtp.pass } : undefined,
-        })
-      : createTransport({ host: '127.0.0.1', port: this.catcher.port, secure: false, ignoreTLS: true });
-    return this.transporter;
+  async send(mail: OutgoingMail, em?: EntityManager): Promise<void> {
+    const to = mail.to.trim();
+    if (!to || to.length > MAX_ADDRESS_LENGTH || !/^[^\s@]+@[^\s@]+$/.test(to)) {
+      throw new BadRequestException(`to: "${mail.to}" is not an e-mail address`);
+    }
+    const id = randomUUID();
+    await (em ?? this.dataSource.manager).insert(OutboxMessageEntity, {
+      id,
+      to,
+      subject: mail.subject.slice(0, MAX_SUBJECT_LENGTH),
+      text: mail.text,
+      html: mail.html,
+      status: 'pending',
+      attempts: 0,
+      nextAttemptAt: new Date(),
+      lastError: null,
+      sentAt: null,
+    });
+    if (em) this.delivery.wake();
+    else await this.delivery.deliverNow(id);
   }
 }

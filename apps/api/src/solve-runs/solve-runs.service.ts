@@ -16,7 +16,8 @@ import {
   type SolveRunStartedDto,
 } from '@rotaplex/contracts';
 import { EventEmitter } from 'node:events';
-import { DataSource, In, Repository } from 'typeorm';
+import { type Roster } from '@rotaplex/roster-model';
+import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { saveSolvedRoster } from '../assignments/assignments.service';
 import { type AuthUser } from '../common/auth-user';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
@@ -38,6 +39,19 @@ const STOPPED_MESSAGE = 'The server stopped during the solve, so the run was sto
 /** Progress is written to the database at most this often (SSE listeners get every update). */
 const PROGRESS_WRITE_MS = 1000;
 
+/**
+ * A run that does something other than generating a draft (e.g. repairing a published roster):
+ * it adjusts the model's input before the solve and saves the roster itself at the end, in the
+ * transaction that records the run's outcome (throwing there fails the run and saves nothing).
+ * Kept in memory only: a queued or running run does not survive a restart anyway.
+ */
+export interface SolveRunMode {
+  /** Period statuses the mode starts on (generate: draft). */
+  periodStatuses: readonly string[];
+  prepare(input: RosterInput): Promise<void>;
+  save(em: EntityManager, input: RosterInput, roster: Roster, run: SolveRunEntity): Promise<void>;
+}
+
 interface ActiveRun {
   cancel: AbortController;
   kill: AbortController;
@@ -57,6 +71,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
   private readonly waiting: string[] = [];
   private readonly active = new Map<string, ActiveRun>();
   private readonly events = new EventEmitter();
+  private readonly modes = new Map<string, SolveRunMode>();
   private stopping = false;
 
   constructor(
@@ -91,10 +106,20 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     await Promise.allSettled(running);
   }
 
-  async start(user: AuthUser, periodId: string, body: StartSolveRunDto): Promise<SolveRunStartedDto> {
+  async start(
+    user: AuthUser,
+    periodId: string,
+    body: StartSolveRunDto,
+    mode?: SolveRunMode,
+  ): Promise<SolveRunStartedDto> {
     const period = await this.periods.get(user, periodId);
-    if (period.status !== 'draft') {
+    if (!mode && period.status !== 'draft') {
       throw new ConflictException(`Only a draft period can be generated; this one is ${period.status}`);
+    }
+    if (mode && !mode.periodStatuses.includes(period.status)) {
+      throw new ConflictException(
+        `Only a ${mode.periodStatuses.join(' or ')} period can be solved this way; this one is ${period.status}`,
+      );
     }
     const run = await this.dataSource.transaction(async (em) => {
       const current = await em.findOneBy(SolveRunEntity, {
@@ -122,6 +147,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
         }),
       );
     });
+    if (mode) this.modes.set(run.id, mode);
     this.waiting.push(run.id);
     this.pump();
     return { id: run.id };
@@ -149,6 +175,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     const index = this.waiting.indexOf(id);
     if (index >= 0) {
       this.waiting.splice(index, 1);
+      this.modes.delete(id);
       await this.runs.update(
         { id, status: 'queued' },
         { status: 'cancelled', finishedAt: new Date(), errorMessage: null },
@@ -208,6 +235,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       this.active.set(id, entry);
       entry.done = this.execute(id, entry).finally(() => {
         this.active.delete(id);
+        this.modes.delete(id);
         this.pump();
       });
     }
@@ -219,6 +247,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       const run = await this.runs.findOneBy({ id });
       if (!run || run.status !== 'queued') return;
       const input = await this.input.load(run.rosterPeriodId, run.weights);
+      await this.modes.get(id)?.prepare(input);
       const startedAt = new Date();
       await this.runs.update({ id }, { status: 'running', startedAt });
       this.emit(id, 'status', toSolveRunDto({ ...run, status: 'running', startedAt }));
@@ -280,6 +309,17 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
           cancelled
             ? { ...base, status: 'cancelled', errorMessage: null }
             : { ...base, status: 'failed', errorMessage: `No roster was found: ${result.quality}` },
+        );
+        return;
+      }
+      const mode = this.modes.get(id);
+      if (mode) {
+        const run = await em.findOneByOrFail(SolveRunEntity, { id });
+        await mode.save(em, input, result.roster, run);
+        await em.update(
+          SolveRunEntity,
+          { id },
+          { ...base, status: cancelled ? 'cancelled' : 'finished', errorMessage: null },
         );
         return;
       }

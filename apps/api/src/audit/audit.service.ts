@@ -1,0 +1,49 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { AUDIT_KINDS, type AuditKind } from '@rotaplex/contracts';
+import { randomUUID } from 'node:crypto';
+import { type EntityManager } from 'typeorm';
+import { UserEntity } from '../users/user.entity';
+import { AuditEntryEntity } from './audit-entry.entity';
+
+export interface AuditRecord {
+  rosterPeriodId: string;
+  /** The user who made the change; null for the system. */
+  actorUserId: string | null;
+  kind: AuditKind;
+  summary: string;
+  before: unknown;
+  after: unknown;
+}
+
+const MAX_SUMMARY_LENGTH = 1000;
+
+/** Writes the audit trail of published rosters. Always in the transaction of the change it records. */
+@Injectable()
+export class AuditService {
+  async record(em: EntityManager, entry: AuditRecord): Promise<void> {
+    if (!(AUDIT_KINDS as readonly string[]).includes(entry.kind)) {
+      throw new BadRequestException(`kind must be one of ${AUDIT_KINDS.join(', ')}`);
+    }
+    let actorName = 'Rotaplex (system)';
+    if (entry.actorUserId !== null) {
+      const user = await em.findOne(UserEntity, {
+        where: { id: entry.actorUserId },
+        select: { id: true, displayName: true },
+      });
+      if (!user) throw new BadRequestException(`actorUserId: no user ${entry.actorUserId}`);
+      actorName = user.displayName.slice(0, 200);
+    }
+    const row = em.create(AuditEntryEntity, {
+      id: randomUUID(),
+      rosterPeriodId: entry.rosterPeriodId,
+      actorUserId: entry.actorUserId,
+      actorName,
+      kind: entry.kind,
+      at: new Date(),
+      summary: entry.summary.slice(0, MAX_SUMMARY_LENGTH),
+      before: entry.before ?? null,
+      after: entry.after ?? null,
+    });
+    await em.save(row);
+  }
+}

@@ -1,0 +1,216 @@
+import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { createTransport, type Transporter } from 'nodemailer';
+import { Repository } from 'typeorm';
+import { AppConfig } from '../config/app-config';
+import { MailCatcherService } from '../mail/mail-catcher.service';
+import { OutboxMessageEntity } from './outbox-message.entity';
+import { backoffDelayMs, type OutboxSettings, outboxSettings } from './outbox-settings';
+
+/** Longest sleep of the loop when nothing is due (it also wakes on every new message). */
+const IDLE_POLL_MS = 30_000;
+const MAX_ERROR_LENGTH = 2000;
+
+/** "YYYY-MM-DD HH:MM:SS.SSS" in UTC, the form TypeORM stores datetime columns in on SQLite. */
+export function sqliteUtc(date: Date): string {
+  return date.toISOString().replace('T', ' ').replace('Z', '');
+}
+
+/**
+ * Delivers the outbox: one loop that sends every due pending message over SMTP (the configured
+ * server, or the local mail catcher), one message at a time. A message is claimed (pending to
+ * sending, checked by the affected row count) before it is sent, so no message is sent twice by
+ * this process; a failure schedules the next attempt with exponential backoff, and after the last
+ * allowed attempt the message is marked failed. Pending messages left by a previous process are
+ * sent after start.
+ */
+@Injectable()
+export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDestroy {
+  private readonly logger = new Logger(OutboxDeliveryService.name);
+  readonly settings: OutboxSettings = outboxSettings();
+  private transporter: Transporter | null = null;
+  private running = false;
+  private loopDone: Promise<void> | null = null;
+  private wakeLoop: (() => void) | null = null;
+  private wakeRequested = false;
+  private readonly inFlight = new Set<Promise<unknown>>();
+
+  constructor(
+    private readonly config: AppConfig,
+    private readonly catcher: MailCatcherService,
+    @InjectRepository(OutboxMessageEntity) private readonly messages: Repository<OutboxMessageEntity>,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    // A message still "sending" was claimed by a process that stopped before recording the outcome:
+    // whether the server got it is unknown, so it is sent again (at least once across a crash).
+    const left = await this.messages.update(
+      { status: 'sending' },
+      { status: 'pending', nextAttemptAt: new Date() },
+    );
+    if (left.affected)
+      this.logger.warn(`${left.affected} message(s) interrupted by a stop will be sent again`);
+    this.running = true;
+    this.loopDone = this.loop();
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    this.running = false;
+    this.wake();
+    await this.loopDone;
+    await Promise.allSettled([...this.inFlight]);
+    this.transporter?.close();
+    this.transporter = null;
+  }
+
+  /** Asks the loop to look for due messages now (new message, or a retry by an admin). */
+  wake(): void {
+    this.wakeRequested = true;
+    this.wakeLoop?.();
+  }
+
+  /**
+   * Tries to send one pending message straight away (used when a message is queued outside a
+   * transaction, so the caller's e-mail usually leaves before its response). Never throws: a
+   * failure is recorded on the message and retried by the loop.
+   */
+  async deliverNow(id: string): Promise<void> {
+    if (!this.running) return;
+    const work = this.deliverOne(id).catch((err: Error) =>
+      this.logger.error(`Outbox delivery of ${id} failed: ${err.message}`),
+    );
+    this.track(work);
+    await work;
+    this.wake(); // let the loop schedule a retry if this attempt failed
+  }
+
+  /** Sends every message that is due now and waits for it and for deliveries already under way (tests use it). */
+  async deliverDue(): Promise<number> {
+    let sent = 0;
+    for (;;) {
+      const due = await this.messages
+        .createQueryBuilder('m')
+        .select(['m.id'])
+        .where(`m.status = 'pending' AND m.nextAttemptAt <= :now`, { now: sqliteUtc(new Date()) })
+        .orderBy('m.nextAttemptAt', 'ASC')
+        .addOrderBy('m.createdAt', 'ASC')
+        .take(20)
+        .getMany();
+      if (due.length === 0) {
+        // Deliveries started elsewhere (the loop, an immediate send) finish before this returns.
+        await Promise.allSettled([...this.inFlight]);
+        return sent;
+      }
+      for (const { id } of due) {
+        const work = this.deliverOne(id);
+        this.track(work);
+        if (await work) sent++;
+      }
+    }
+  }
+
+  private track(work: Promise<unknown>): void {
+    this.inFlight.add(work);
+    void work.finally(() => this.inFlight.delete(work));
+  }
+
+  private async loop(): Promise<void> {
+    while (this.running) {
+      this.wakeRequested = false;
+      try {
+        await this.deliverDue();
+      } catch (err) {
+        if (this.running) this.logger.error(`Outbox loop: ${(err as Error).message}`);
+      }
+      if (!this.running) break;
+      let waitMs = IDLE_POLL_MS;
+      try {
+        const next = await this.messages
+          .createQueryBuilder('m')
+          .select('MIN(m.nextAttemptAt)', 'next')
+          .where(`m.status = 'pending'`)
+          .getRawOne<{ next: string | null }>();
+        if (next?.next) {
+          const at = new Date(`${next.next.replace(' ', 'T')}Z`).getTime();
+          waitMs = Math.min(Math.max(at - Date.now(), 0), IDLE_POLL_MS);
+        }
+      } catch (err) {
+        if (this.running) this.logger.error(`Outbox loop: ${(err as Error).message}`);
+      }
+      if (this.wakeRequested || !this.running) continue;
+      await new Promise<void>((resolve) => {
+        const timer = setTimeout(resolve, waitMs);
+        timer.unref();
+        this.wakeLoop = () => {
+          clearTimeout(timer);
+          resolve();
+        };
+      });
+      this.wakeLoop = null;
+    }
+  }
+
+  /** Claims, sends and records one message; false when another delivery had it or it failed. */
+  private async deliverOne(id: string): Promise<boolean> {
+    const claim = await this.messages
+      .createQueryBuilder()
+      .update(OutboxMessageEntity)
+      .set({ status: 'sending', attempts: () => '"attempts" + 1' })
+      .where(`id = :id AND status = 'pending'`, { id })
+      .execute();
+    if (claim.affected !== 1) return false;
+    const m = await this.messages.findOneByOrFail({ id });
+    try {
+      await this.transport().sendMail({
+        from: this.config.mailFrom,
+        to: m.to,
+        subject: m.subject,
+        text: m.text,
+        html: m.html,
+        // Stable per outbox row, so a receiver can spot a copy sent again after a crash.
+        messageId: `<${m.id}@outbox.rotaplex>`,
+      });
+    } catch (err) {
+      const message = ((err as Error).message || String(err)).slice(0, MAX_ERROR_LENGTH);
+      const giveUp = m.attempts >= this.settings.maxAttempts;
+      const delay = backoffDelayMs(m.attempts, this.settings);
+      await this.messages.update(
+        { id },
+        giveUp
+          ? { status: 'failed', nextAttemptAt: null, lastError: message }
+          : { status: 'pending', nextAttemptAt: new Date(Date.now() + delay), lastError: message },
+      );
+      this.logger.warn(
+        giveUp
+          ? `"${m.subject}" to ${m.to} failed after ${m.attempts} attempt(s): ${message}`
+          : `"${m.subject}" to ${m.to} failed (attempt ${m.attempts}), retry in ${delay} ms: ${message}`,
+      );
+      return false;
+    }
+    await this.messages.update({ id }, { status: 'sent', sentAt: new Date(), nextAttemptAt: null });
+    this.logger.log(`Sent "${m.subject}" to ${m.to}`);
+    return true;
+  }
+
+  private transport(): Transporter {
+    if (this.transporter) return this.transporter;
+    const smtp = this.config.smtp;
+    const timeouts = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 };
+    this.transporter = smtp
+      ? createTransport({
+          host: smtp.host,
+          port: smtp.port,
+          secure: smtp.secure,
+          auth: smtp.user && smtp.pass ? { user: smtp.user, pass: smtp.pass } : undefined,
+          ...timeouts,
+        })
+      : createTransport({
+          host: '127.0.0.1',
+          port: this.catcher.port,
+          secure: false,
+          ignoreTLS: true,
+          ...timeouts,
+        });
+    return this.transporter;
+  }
+}

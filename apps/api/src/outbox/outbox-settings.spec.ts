@@ -1,0 +1,20 @@
+import { backoffDelayMs, outboxSettings } from './outbox-settings';
+
+describe('outbox settings and backoff', () => {
+  it('doubles the delay after each failure and caps it (binary exponential backoff, common practice; RFC 5321 §4.5.4.1 asks for growing retry intervals)', () => {
+    const s = { maxAttempts: 8, baseDelayMs: 5000, maxDelayMs: 60_000 };
+    expect([1, 2, 3, 4, 5, 6].map((n) => backoffDelayMs(n, s))).toEqual([
+      5000, 10_000, 20_000, 40_000, 60_000, 60_000,
+    ]);
+  });
+
+  it('reads the environment and names a bad variable', () => {
+    expect(outboxSettings({})).toEqual({ maxAttempts: 8, baseDelayMs: 5000, maxDelayMs: 900_000 });
+    expect(outboxSettings({ OUTBOX_MAX_ATTEMPTS: '3', OUTBOX_BASE_DELAY_MS: '50' })).toMatchObject({
+      maxAttempts: 3,
+      baseDelayMs: 50,
+    });
+    expect(() => outboxSettings({ OUTBOX_MAX_ATTEMPTS: 'lots' })).toThrow(/OUTBOX_MAX_ATTEMPTS/);
+    expect(() => outboxSettings({ OUTBOX_BASE_DELAY_MS: '0' })).toThrow(/OUTBOX_BASE_DELAY_MS/);
+  });
+});

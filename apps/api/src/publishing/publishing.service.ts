@@ -1,0 +1,348 @@
+import { ConflictException, Injectable } from '@nestjs/common';
+import {
+  ACTIVE_SOLVE_RUN_STATUSES,
+  type AuditEntryDto,
+  type Page,
+  type PublishResultDto,
+  type RosterCellChangeDto,
+  type SolveRunStartedDto,
+} from '@rotaplex/contracts';
+import { type Roster } from '@rotaplex/roster-model';
+import { randomUUID } from 'node:crypto';
+import { DataSource, type EntityManager, In } from 'typeorm';
+import { AssignmentEntity } from '../assignments/assignment.entity';
+import { rosterOf, saveSolvedRoster } from '../assignments/assignments.service';
+import { AuditEntryEntity } from '../audit/audit-entry.entity';
+import { AuditService } from '../audit/audit.service';
+import { type AuthUser } from '../common/auth-user';
+import { type PageQueryDto, toPage } from '../common/pagination';
+import { AppConfig } from '../config/app-config';
+import { MailService } from '../mail/mail.service';
+import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
+import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
+import { SolveRunEntity } from '../solve-runs/solve-run.entity';
+import { type SolveRunMode, SolveRunsService } from '../solve-runs/solve-runs.service';
+import { toCsv } from '../staff/csv';
+import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
+import { formatShiftTimes, type MailShift, rosterMail } from './roster-mail';
+
+/** Publishing a draft roster, repairing a published one, and the period's audit trail and export. */
+@Injectable()
+export class PublishingService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly config: AppConfig,
+    private readonly periods: RosterPeriodsService,
+    private readonly input: RosterInputService,
+    private readonly mail: MailService,
+    private readonly audit: AuditService,
+    private readonly solveRuns: SolveRunsService,
+  ) {}
+
+  /**
+   * Publishes a draft: status, snapshot, audit entry and one e-mail per person with an e-mail
+   * address (their own shifts only), all in one transaction. 409 when the version is stale, the
+   * period is not a draft or a solve is running.
+   */
+  async publish(user: AuthUser, periodId: string, version: number): Promise<PublishResultDto> {
+    await this.periods.get(user, periodId); // 404 / 403 by unit
+    return this.dataSource.transaction(async (em) => {
+      const period = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
+      if (period.status !== 'draft') {
+        throw new ConflictException(`Only a draft period can be published; this one is ${period.status}`);
+      }
+      if (period.version !== version) {
+        throw new ConflictException(
+          `The period was changed meanwhile (version ${period.version}, not ${version}): reload it and check the roster again`,
+        );
+      }
+      const running = await em.findOneBy(SolveRunEntity, {
+        rosterPeriodId: periodId,
+        status: In([...ACTIVE_SOLVE_RUN_STATUSES]),
+      });
+      if (running) {
+        throw new ConflictException(
+          `A solve run is ${running.status} for this period: wait for it or stop it`,
+        );
+      }
+      const input = await this.input.load(periodId, {}, em);
+      const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+      const cells = publishedCells(input, rows);
+      const publishedAt = new Date();
+      const updated = await em
+        .createQueryBuilder()
+        .update(RosterPeriodEntity)
+        .set({ status: 'published', publishedAt })
+        .where(`id = :id AND version = :version AND status = 'draft'`, { id: periodId, version })
+        .execute();
+      if (updated.affected !== 1) throw new ConflictException('The period was changed meanwhile: reload it');
+      await em.insert(RosterPublicationEntity, {
+        id: randomUUID(),
+        rosterPeriodId: periodId,
+        kind: 'publish',
+        publishedAt,
+        publishedById: user.id,
+        cells,
+      });
+      const people = new Set(cells.map((c) => c.staffMemberId)).size;
+      await this.audit.record(em, {
+        rosterPeriodId: periodId,
+        actorUserId: user.id,
+        kind: 'publish',
+        summary: `Published the roster: ${cells.length} shift(s) for ${people} person(s)`,
+        before: null,
+        after: cells,
+      });
+      const emailed = await this.mailPeople(em, input, rosterOf(input, rows), null, 'published');
+      const saved = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
+      return {
+        rosterPeriodId: periodId,
+        status: 'published',
+        publishedAt: publishedAt.toISOString(),
+        version: saved.version,
+        emailed,
+      };
+    });
+  }
+
+  /**
+   * Starts a repair of a published roster: a solve run in the roster model's repair mode (fewest
+   * changes to the current roster). At its end the roster is replaced, the changed cells audited
+   * and the people whose shifts changed e-mailed, in one transaction.
+   */
+  async repair(user: AuthUser, periodId: string, timeLimitSeconds: number): Promise<SolveRunStartedDto> {
+    let reference: Roster | null = null;
+    const mode: SolveRunMode = {
+      periodStatuses: ['published'],
+      prepare: async (input) => {
+        const rows = await this.dataSource.manager.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+        reference = rosterOf(input, rows);
+        input.problem.published = reference;
+      },
+      save: async (em, input, roster, run) => {
+        const period = await em.findOneBy(RosterPeriodEntity, { id: periodId });
+        if (!period || period.status !== 'published') {
+          throw new Error(
+            `the period was ${period ? period.status : 'deleted'} during the repair; nothing was changed`,
+          );
+        }
+        const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+        const before = rosterOf(input, rows);
+        if (!reference || !sameRoster(before, reference)) {
+          throw new Error(
+            'the roster changed during the repair (a swap or a claim); nothing was changed, start the repair again',
+          );
+        }
+        const changes = diffRosters(input, before, roster);
+        await saveSolvedRoster(em, input, roster);
+        // Raise the period's version: clients holding the old roster must reload.
+        await em
+          .createQueryBuilder()
+          .update(RosterPeriodEntity)
+          .set({ status: 'published' })
+          .where('id = :id', { id: periodId })
+          .execute();
+        const after = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+        await em.insert(RosterPublicationEntity, {
+          id: randomUUID(),
+          rosterPeriodId: periodId,
+          kind: 'repair',
+          publishedAt: new Date(),
+          publishedById: run.requestedById,
+          cells: publishedCells(input, after),
+        });
+        const changedPeople = new Set(changes.map((c) => c.staffMemberId));
+        await this.audit.record(em, {
+          rosterPeriodId: periodId,
+          actorUserId: run.requestedById,
+          kind: 'repair',
+          summary: `Repair changed ${changes.length} cell(s) for ${changedPeople.size} person(s)`,
+          before: changes.map((c) => ({
+            staffMemberId: c.staffMemberId,
+            date: c.date,
+            shiftTypeId: c.before,
+          })),
+          after: changes.map((c) => ({ staffMemberId: c.staffMemberId, date: c.date, shiftTypeId: c.after })),
+        });
+        await this.mailPeople(em, input, roster, changedPeople, 'changed');
+      },
+    };
+    return this.solveRuns.start(user, periodId, { timeLimitSeconds }, mode);
+  }
+
+  async auditTrail(user: AuthUser, periodId: string, query: PageQueryDto): Promise<Page<AuditEntryDto>> {
+    await this.periods.get(user, periodId);
+    const [rows, total] = await this.dataSource.manager.findAndCount(AuditEntryEntity, {
+      where: { rosterPeriodId: periodId },
+      order: { at: query.order === 'desc' ? 'DESC' : 'ASC', id: 'ASC' },
+      skip: (query.page - 1) * query.pageSize,
+      take: query.pageSize,
+    });
+    return toPage(rows.map(toAuditDto), total, query);
+  }
+
+  /**
+   * The period as CSV: one "shift" line per worked cell of the current roster (times in the unit's
+   * zone), then one "audit" line per entry of the trail. Every cell is neutralised against
+   * spreadsheet formula injection.
+   */
+  async exportCsv(user: AuthUser, periodId: string): Promise<{ filename: string; csv: string }> {
+    await this.periods.get(user, periodId);
+    const input = await this.input.load(periodId);
+    const rows = await this.dataSource.manager.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const trail = await this.dataSource.manager.find(AuditEntryEntity, {
+      where: { rosterPeriodId: periodId },
+      order: { at: 'ASC', id: 'ASC' },
+    });
+    const staffById = new Map(input.staff.map((s) => [s.id, s]));
+    const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
+    const dayOf = new Map(input.dates.map((d, i) => [d, i]));
+    const header = [
+      'record',
+      'date',
+      'staff_member',
+      'shift_code',
+      'shift_times',
+      'pinned',
+      'at',
+      'actor',
+      'kind',
+      'summary',
+      'before',
+      'after',
+    ] as const;
+    const out: (string | null)[][] = [];
+    const sorted = [...rows]
+      .filter((r) => r.shiftTypeId !== null)
+      .sort((a, b) => a.date.localeCompare(b.date) || nameOf(a).localeCompare(nameOf(b)));
+    function nameOf(r: AssignmentEntity): string {
+      return staffById.get(r.staffMemberId)?.name ?? r.staffMemberId;
+    }
+    for (const r of sorted) {
+      const st = shiftById.get(r.shiftTypeId as string);
+      const day = dayOf.get(r.date);
+      out.push([
+        'shift',
+        r.date,
+        nameOf(r),
+        st?.code ?? '',
+        st && day !== undefined
+          ? formatShiftTimes(
+              { day, start: st.start, end: st.end },
+              { startDate: input.period.startDate, timeZone: input.unit.timeZone },
+            )
+          : '',
+        r.pinned ? 'yes' : 'no',
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+      ]);
+    }
+    for (const a of trail) {
+      out.push([
+        'audit',
+        null,
+        null,
+        null,
+        null,
+        null,
+        a.at.toISOString(),
+        a.actorName,
+        a.kind,
+        a.summary,
+        a.before === null || a.before === undefined ? null : JSON.stringify(a.before),
+        a.after === null || a.after === undefined ? null : JSON.stringify(a.after),
+      ]);
+    }
+    return {
+      filename: `roster-${input.unit.name.replace(/[^A-Za-z0-9-]+/g, '-')}-${input.period.startDate}.csv`,
+      csv: toCsv(header, out),
+    };
+  }
+
+  /** Queues one e-mail per person (with an address) in `only` (all when null) with their own shifts. */
+  private async mailPeople(
+    em: EntityManager,
+    input: RosterInput,
+    roster: Roster,
+    only: Set<string> | null,
+    kind: 'published' | 'changed',
+  ): Promise<number> {
+    const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
+    const link = `${this.config.publicUrl ?? ''}/`;
+    let sent = 0;
+    for (const person of input.staff) {
+      if (!person.email || (only && !only.has(person.id))) continue;
+      const shifts: MailShift[] = [];
+      (roster[person.id] ?? []).forEach((id, day) => {
+        const st = id ? shiftById.get(id) : undefined;
+        if (st) shifts.push({ day, code: st.code, name: st.name, start: st.start, end: st.end });
+      });
+      const content = rosterMail({
+        displayName: person.name,
+        unitName: input.unit.name,
+        timeZone: input.unit.timeZone,
+        startDate: input.period.startDate,
+        days: input.period.days,
+        shifts,
+        link,
+        kind,
+      });
+      await this.mail.send({ to: person.email, ...content }, em);
+      sent++;
+    }
+    return sent;
+  }
+}
+
+/** The worked cells of a roster's rows (active people of the period only). */
+function publishedCells(input: RosterInput, rows: AssignmentEntity[]): PublishedCell[] {
+  const active = new Set(input.staff.map((s) => s.id));
+  const dates = new Set(input.dates);
+  return rows
+    .filter((r) => r.shiftTypeId !== null && active.has(r.staffMemberId) && dates.has(r.date))
+    .map((r) => ({ staffMemberId: r.staffMemberId, date: r.date, shiftTypeId: r.shiftTypeId as string }))
+    .sort((a, b) => a.date.localeCompare(b.date) || a.staffMemberId.localeCompare(b.staffMemberId));
+}
+
+function sameRoster(a: Roster, b: Roster): boolean {
+  const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
+  for (const k of keys) {
+    const x = a[k] ?? [];
+    const y = b[k] ?? [];
+    const n = Math.max(x.length, y.length);
+    for (let d = 0; d < n; d++) if ((x[d] ?? null) !== (y[d] ?? null)) return false;
+  }
+  return true;
+}
+
+/** Cells whose shift differs between two rosters of the period. */
+export function diffRosters(input: RosterInput, before: Roster, after: Roster): RosterCellChangeDto[] {
+  const out: RosterCellChangeDto[] = [];
+  for (const s of input.staff) {
+    input.dates.forEach((date, d) => {
+      const b = before[s.id]?.[d] ?? null;
+      const a = after[s.id]?.[d] ?? null;
+      if (a !== b) out.push({ staffMemberId: s.id, date, before: b, after: a });
+    });
+  }
+  return out;
+}
+
+export function toAuditDto(a: AuditEntryEntity): AuditEntryDto {
+  return {
+    id: a.id,
+    rosterPeriodId: a.rosterPeriodId,
+    actorUserId: a.actorUserId,
+    actorName: a.actorName,
+    kind: a.kind,
+    at: a.at.toISOString(),
+    summary: a.summary,
+    before: a.before ?? null,
+    after: a.after ?? null,
+  };
+}

@@ -1,0 +1,140 @@
+import { useState } from 'react';
+import {
+  Badge,
+  Button,
+  makeStyles,
+  Table,
+  TableBody,
+  TableCell,
+  TableHeader,
+  TableHeaderCell,
+  TableRow,
+  tokens,
+} from '@fluentui/react-components';
+import { ArrowDownloadRegular, HistoryRegular } from '@fluentui/react-icons';
+import { useQuery } from '@tanstack/react-query';
+import { useParams } from 'react-router-dom';
+import type { AuditEntryDto, AuditKind } from '@rotaplex/contracts';
+import { errorText } from '@/api/errors';
+import { PATHS } from '@/app/paths';
+import { rosterPeriodQuery } from '@/features/planning-board/api/board.queries';
+import { auditQuery, DEFAULT_AUDIT_PAGE, downloadExport } from '@/features/publishing/api/publishing.queries';
+import { AppLink } from '@/ui/AppLink';
+import { EmptyState } from '@/ui/EmptyState';
+import { ErrorBanner } from '@/ui/ErrorBanner';
+import { TableSkeleton } from '@/ui/LoadingState';
+import { PageHeader } from '@/ui/PageHeader';
+import { Pagination } from '@/ui/Pagination';
+
+const useStyles = makeStyles({
+  panel: {
+    backgroundColor: tokens.colorNeutralBackground1,
+    borderRadius: tokens.borderRadiusLarge,
+    boxShadow: tokens.shadow2,
+    padding: tokens.spacingHorizontalL,
+    overflowX: 'auto',
+  },
+  when: { whiteSpace: 'nowrap', color: tokens.colorNeutralForeground3 },
+  details: { fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground3 },
+});
+
+const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'medium' });
+
+const KIND_LABELS: Record<AuditKind, string> = {
+  publish: 'Published',
+  repair: 'Repair',
+  swap: 'Swap',
+  'open-shift-claim': 'Open shift claimed',
+  'manual-edit': 'Edit',
+};
+
+/** How many cells an entry's before/after lists (when they are lists of cells). */
+function cellCount(entry: AuditEntryDto): string {
+  const list = Array.isArray(entry.after) ? entry.after : Array.isArray(entry.before) ? entry.before : null;
+  return list ? `${list.length} cell${list.length === 1 ? '' : 's'}` : '';
+}
+
+/** Every change to a period's published roster: who, when, what. */
+export function AuditPage() {
+  const styles = useStyles();
+  const { periodId = '' } = useParams();
+  const [page, setPage] = useState(DEFAULT_AUDIT_PAGE.page);
+  const params = { ...DEFAULT_AUDIT_PAGE, page };
+  const period = useQuery(rosterPeriodQuery(periodId));
+  const trail = useQuery(auditQuery(periodId, params));
+  const [exportError, setExportError] = useState<string | null>(null);
+
+  return (
+    <>
+      <PageHeader
+        title="Audit trail"
+        description={
+          <>
+            Every change to this period once published: publishing, repairs, swaps, claimed open shifts and
+            edits, newest first.{' '}
+            <AppLink to={PATHS.planningBoard(periodId)} inline>
+              Back to the planning board
+            </AppLink>
+          </>
+        }
+        actions={
+          <Button
+            icon={<ArrowDownloadRegular />}
+            onClick={() => {
+              setExportError(null);
+              downloadExport(periodId).catch((e: unknown) => setExportError(errorText(e)));
+            }}
+          >
+            Export CSV
+          </Button>
+        }
+      />
+      <section className={styles.panel} aria-label="Audit entries">
+        {exportError && <ErrorBanner error={new Error(`The export failed: ${exportError}`)} />}
+        {period.isError && <ErrorBanner error={period.error} onRetry={() => void period.refetch()} />}
+        {trail.isError && <ErrorBanner error={trail.error} onRetry={() => void trail.refetch()} />}
+        {trail.isPending && <TableSkeleton label="Loading the audit trail" />}
+        {trail.data && trail.data.items.length === 0 && (
+          <EmptyState icon={<HistoryRegular />} title="Nothing recorded yet">
+            Entries appear here once the roster is published.
+          </EmptyState>
+        )}
+        {trail.data && trail.data.items.length > 0 && (
+          <>
+            <Table aria-label="Audit entries">
+              <TableHeader>
+                <TableRow>
+                  <TableHeaderCell>When</TableHeaderCell>
+                  <TableHeaderCell>What</TableHeaderCell>
+                  <TableHeaderCell>Who</TableHeaderCell>
+                  <TableHeaderCell>Summary</TableHeaderCell>
+                </TableRow>
+              </TableHeader>
+              <TableBody>
+                {trail.data.items.map((entry) => (
+                  <TableRow key={entry.id}>
+                    <TableCell className={styles.when}>{when.format(new Date(entry.at))}</TableCell>
+                    <TableCell>
+                      <Badge appearance="tint">{KIND_LABELS[entry.kind]}</Badge>
+                    </TableCell>
+                    <TableCell>{entry.actorName}</TableCell>
+                    <TableCell>
+                      {entry.summary} <span className={styles.details}>{cellCount(entry)}</span>
+                    </TableCell>
+                  </TableRow>
+                ))}
+              </TableBody>
+            </Table>
+            <Pagination
+              label="Audit entries"
+              page={page}
+              pageSize={params.pageSize}
+              total={trail.data.total}
+              onPageChange={setPage}
+            />
+          </>
+        )}
+      </section>
+    </>
+  );
+}
