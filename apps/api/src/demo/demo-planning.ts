@@ -10,11 +10,12 @@ import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { type UnitEntity } from '../units/unit.entity';
 import { type UserEntity } from '../users/user.entity';
 import { DEMO_USERS, type DemoUnitKey } from './demo-data';
+import { seedDemoStaffInput } from './demo-requests';
 
 /**
  * Invented planning data for the demo organisation: skills, shift types, two contracts, a staff
  * member for every demo staff user, weekly cover patterns, one date override and a four-week draft
- * roster period per unit. All numbers are invented for the demo.
+ * roster period per unit with staff input (demo-requests.ts). All numbers are invented for the demo.
  */
 export const DEMO_SKILLS = [
   { code: 'RN', name: 'Registered nurse' },
@@ -222,9 +223,10 @@ export async function seedDemoPlanning(
       }
     }
 
+    const staffMembers: StaffMemberEntity[] = [];
     for (const u of DEMO_USERS.filter((d) => d.unit === key && d.role === 'staff')) {
       const user = usersByEmail.get(u.email)!;
-      await em.save(
+      const member = await em.save(
         em.create(StaffMemberEntity, {
           unitId: unit.id,
           userId: user.id,
@@ -237,10 +239,23 @@ export async function seedDemoPlanning(
           skills: demoSkillsOf(key, u.note).map((code) => skills.get(code)!),
         }),
       );
+      staffMembers.push(member);
     }
 
     const startDate = demoPeriodStart(localDate(now, unit.timeZone));
-    await em.save(em.create(RosterPeriodEntity, { unitId: unit.id, startDate, days: 28, status: 'draft' }));
+    const period = await em.save(
+      em.create(RosterPeriodEntity, { unitId: unit.id, startDate, days: 28, status: 'draft' }),
+    );
+    const manager = DEMO_USERS.find((d) => d.unit === key && d.role === 'manager');
+    await seedDemoStaffInput(
+      em,
+      key,
+      period,
+      staffMembers,
+      shifts,
+      manager ? usersByEmail.get(manager.email) : undefined,
+      now,
+    );
     // An event on the ward's second Wednesday: one more registered nurse on the early shift.
     if (key === 'ward') {
       await em.save(

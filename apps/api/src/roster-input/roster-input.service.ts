@@ -1,25 +1,25 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { contractForPeriod, type ContractRules, type SolveWeights } from '@rotaplex/contracts';
 import {
-  type Absence,
   type Contract,
   type CoverNeed,
   type Person,
   type Pin,
   type RosterProblem,
-  type ShiftRequest,
   type ShiftType,
 } from '@rotaplex/roster-model';
-import { DataSource, type EntityManager, In } from 'typeorm';
+import { DataSource, type EntityManager, In, LessThanOrEqual, MoreThanOrEqual } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { ContractEntity } from '../contracts/contract.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
+import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from '../requests/requests.entities';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { SkillEntity } from '../skills/skill.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitEntity } from '../units/unit.entity';
+import { creditLeave, mapRequestsAndAbsences, type RequestsAndAbsences } from './requests-mapping';
 
 /** A period's planning data as the roster model's problem, with the tables to map results back. */
 export interface RosterInput {
@@ -33,14 +33,7 @@ export interface RosterInput {
   shiftTypes: ShiftTypeEntity[];
 }
 
-/**
- * Requests and absences of the period's people. None are stored yet (a later issue adds leave,
- * availability and shift requests); this is the one place that will read them.
- */
-export interface RequestsAndAbsences {
-  requests: ShiftRequest[];
-  absences: Absence[];
-}
+export type { RequestsAndAbsences } from './requests-mapping';
 
 /** Builds the roster model's input from the database (people, contracts, needs, pins) for one period. */
 @Injectable()
@@ -103,7 +96,7 @@ export class RosterInputService {
       .filter((a) => personIds.has(a.staffMemberId) && dayOf.has(a.date))
       .map((a) => ({ personId: a.staffMemberId, day: dayOf.get(a.date)!, shiftTypeId: a.shiftTypeId }));
 
-    const { requests, absences } = await this.requestsAndAbsences(period, dates);
+    const { requests, absences } = await this.requestsAndAbsences(m, period, dates, staff, shiftTypes);
     const problem: RosterProblem = {
       startDate: period.startDate,
       days: period.days,
@@ -116,7 +109,7 @@ export class RosterInputService {
         paidMinutes: s.paidMinutes,
         ...(s.night !== null ? { night: s.night } : {}),
       })),
-      people,
+      people: creditLeave(people, absences, dates),
       coverNeeds,
       requests,
       absences,
@@ -128,12 +121,31 @@ export class RosterInputService {
     return { period, unit, problem, dates, staff, shiftTypes };
   }
 
-  /** The seam for requests and leave: none are stored yet, so a solve sees none. */
+  /**
+   * The one place that reads staff input for the model: weekly availability, the period's date
+   * requests and approved leave that overlaps the period (see mapRequestsAndAbsences).
+   */
   protected async requestsAndAbsences(
-    _period: RosterPeriodEntity,
-    _dates: string[],
+    m: EntityManager,
+    period: RosterPeriodEntity,
+    dates: string[],
+    staff: StaffMemberEntity[],
+    shiftTypes: ShiftTypeEntity[],
   ): Promise<RequestsAndAbsences> {
-    return { requests: [], absences: [] };
+    const personIds = staff.map((s) => s.id);
+    if (!personIds.length || !dates.length) return { requests: [], absences: [] };
+    const availability = await m.findBy(AvailabilityCellEntity, { staffMemberId: In(personIds) });
+    const dateRequests = await m.findBy(DateRequestEntity, {
+      rosterPeriodId: period.id,
+      staffMemberId: In(personIds),
+    });
+    const leave = await m.findBy(LeaveRequestEntity, {
+      staffMemberId: In(personIds),
+      status: 'approved',
+      startDate: LessThanOrEqual(dates[dates.length - 1]),
+      endDate: MoreThanOrEqual(dates[0]),
+    });
+    return mapRequestsAndAbsences({ dates, shiftTypes, personIds, availability, dateRequests, leave });
   }
 }
 

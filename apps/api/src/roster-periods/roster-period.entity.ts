@@ -43,6 +43,10 @@ export class RosterPeriodEntity {
   @Column({ type: 'datetime', nullable: true })
   publishedAt!: Date | null;
 
+  /** Date requests one staff member may make in this period (set by the manager). */
+  @Column({ type: 'integer', default: 5 })
+  requestLimit!: number;
+
   @VersionColumn({ type: 'integer' })
   version!: number;
 }

@@ -1,0 +1,225 @@
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  HttpCode,
+  Param,
+  ParseUUIDPipe,
+  Patch,
+  Post,
+  Put,
+  Query,
+} from '@nestjs/common';
+import {
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiTags,
+} from '@nestjs/swagger';
+import {
+  type AvailabilityDto,
+  type DateRequestDto,
+  type LeaveDto,
+  type MyRequestsDto,
+  type Page,
+  type PeriodRequestsDto,
+  type RequestPeriodDto,
+  type RequestRowDto,
+} from '@rotaplex/contracts';
+import { type AuthUser } from '../common/auth-user';
+import { Authenticated, RequirePermissions } from '../common/decorators/access.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import {
+  CreateDateRequestDto,
+  CreateLeaveDto,
+  DateRequestQueryDto,
+  DecideLeaveDto,
+  LeaveQueryDto,
+  ReplaceAvailabilityDto,
+  RequestListQueryDto,
+  UpdateDateRequestDto,
+  UpdateRequestLimitDto,
+} from './dto/requests.dto';
+import {
+  AvailabilityResponse,
+  DateRequestResponse,
+  LeaveResponse,
+  MyRequestsResponse,
+  PeriodRequestsResponse,
+  RequestPageResponse,
+  RequestPeriodResponse,
+} from './dto/requests-response.dto';
+import { RequestsService } from './requests.service';
+
+/**
+ * Staff input: weekly availability, date requests and leave. Staff change only their own (403 for
+ * anyone else's); managers read their units' and approve or decline leave.
+ */
+@ApiTags('requests')
+@Controller()
+export class RequestsController {
+  constructor(private readonly requests: RequestsService) {}
+
+  @Get('me/requests')
+  @RequirePermissions('requests:own')
+  @ApiOkResponse({
+    type: MyRequestsResponse,
+    description: 'Your staff memberships, periods, date requests and leave',
+  })
+  mine(@CurrentUser() user: AuthUser): Promise<MyRequestsDto> {
+    return this.requests.mine(user);
+  }
+
+  @Get('staff/:staffMemberId/availability')
+  @Authenticated()
+  @ApiOkResponse({
+    type: AvailabilityResponse,
+    description: 'Weekly availability (yours, or of your units for managers)',
+  })
+  availability(
+    @CurrentUser() user: AuthUser,
+    @Param('staffMemberId', ParseUUIDPipe) staffMemberId: string,
+  ): Promise<AvailabilityDto> {
+    return this.requests.getAvailability(user, staffMemberId);
+  }
+
+  @Put('staff/:staffMemberId/availability')
+  @RequirePermissions('requests:own')
+  @ApiOkResponse({ type: AvailabilityResponse, description: 'The weekly availability as saved' })
+  replaceAvailability(
+    @CurrentUser() user: AuthUser,
+    @Param('staffMemberId', ParseUUIDPipe) staffMemberId: string,
+    @Body() body: ReplaceAvailabilityDto,
+  ): Promise<AvailabilityDto> {
+    return this.requests.replaceAvailability(user, staffMemberId, body);
+  }
+
+  @Get('date-requests')
+  @Authenticated()
+  @ApiOkResponse({
+    type: [DateRequestResponse],
+    description: 'Date requests: your own, or those of your units for managers',
+  })
+  listDateRequests(
+    @CurrentUser() user: AuthUser,
+    @Query() query: DateRequestQueryDto,
+  ): Promise<DateRequestDto[]> {
+    return this.requests.listDateRequests(user, query);
+  }
+
+  @Post('date-requests')
+  @RequirePermissions('requests:own')
+  @ApiCreatedResponse({ type: DateRequestResponse })
+  @ApiConflictResponse({
+    description: 'Not a draft period, over the limit, or a request for that date exists',
+  })
+  createDateRequest(
+    @CurrentUser() user: AuthUser,
+    @Body() body: CreateDateRequestDto,
+  ): Promise<DateRequestDto> {
+    return this.requests.createDateRequest(user, body);
+  }
+
+  @Patch('date-requests/:id')
+  @RequirePermissions('requests:own')
+  @ApiOkResponse({ type: DateRequestResponse })
+  updateDateRequest(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() body: UpdateDateRequestDto,
+  ): Promise<DateRequestDto> {
+    return this.requests.updateDateRequest(user, id, body);
+  }
+
+  @Delete('date-requests/:id')
+  @HttpCode(204)
+  @RequirePermissions('requests:own')
+  @ApiNoContentResponse()
+  deleteDateRequest(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+    return this.requests.deleteDateRequest(user, id);
+  }
+
+  @Get('leave')
+  @Authenticated()
+  @ApiOkResponse({ type: [LeaveResponse], description: 'Leave: your own, or of your units for managers' })
+  listLeave(@CurrentUser() user: AuthUser, @Query() query: LeaveQueryDto): Promise<LeaveDto[]> {
+    return this.requests.listLeave(user, query);
+  }
+
+  @Post('leave')
+  @RequirePermissions('requests:own')
+  @ApiCreatedResponse({ type: LeaveResponse, description: 'The leave request (pending)' })
+  @ApiConflictResponse({ description: 'Overlaps your pending or approved leave' })
+  createLeave(@CurrentUser() user: AuthUser, @Body() body: CreateLeaveDto): Promise<LeaveDto> {
+    return this.requests.createLeave(user, body);
+  }
+
+  @Delete('leave/:id')
+  @RequirePermissions('requests:own')
+  @ApiOkResponse({ type: LeaveResponse, description: 'The cancelled leave' })
+  cancelLeave(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<LeaveDto> {
+    return this.requests.cancelLeave(user, id);
+  }
+
+  @Post('leave/:id/approve')
+  @HttpCode(200)
+  @RequirePermissions('requests:approve')
+  @ApiOkResponse({ type: LeaveResponse, description: 'The approved leave' })
+  @ApiConflictResponse({ description: 'Not pending' })
+  approveLeave(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() body: DecideLeaveDto,
+  ): Promise<LeaveDto> {
+    return this.requests.decideLeave(user, id, true, body.note);
+  }
+
+  @Post('leave/:id/decline')
+  @HttpCode(200)
+  @RequirePermissions('requests:approve')
+  @ApiOkResponse({ type: LeaveResponse, description: 'The declined leave' })
+  @ApiConflictResponse({ description: 'Not pending' })
+  declineLeave(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() body: DecideLeaveDto,
+  ): Promise<LeaveDto> {
+    return this.requests.decideLeave(user, id, false, body.note);
+  }
+
+  @Get('requests')
+  @RequirePermissions('requests:approve')
+  @ApiOkResponse({
+    type: RequestPageResponse,
+    description: 'Date requests and leave of your units, one table',
+  })
+  listRequests(
+    @CurrentUser() user: AuthUser,
+    @Query() query: RequestListQueryDto,
+  ): Promise<Page<RequestRowDto>> {
+    return this.requests.listRequests(user, query);
+  }
+
+  @Get('roster-periods/:id/requests')
+  @RequirePermissions('rosters:plan')
+  @ApiOkResponse({ type: PeriodRequestsResponse })
+  periodRequests(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+  ): Promise<PeriodRequestsDto> {
+    return this.requests.periodRequests(user, id);
+  }
+
+  @Put('roster-periods/:id/request-limit')
+  @RequirePermissions('rosters:plan')
+  @ApiOkResponse({ type: RequestPeriodResponse, description: 'The period with its new limit' })
+  setRequestLimit(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() body: UpdateRequestLimitDto,
+  ): Promise<RequestPeriodDto> {
+    return this.requests.setRequestLimit(user, id, body.requestLimit);
+  }
+}
