@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { CalendarFeedEntity, CalendarFeedEventEntity } from './calendar-feed.entity';
+import { CalendarFeedsController } from './calendar-feeds.controller';
+import { CalendarFeedsService } from './calendar-feeds.service';
+import { MyRosterController } from './my-roster.controller';
+import { MyRosterService } from './my-roster.service';
+
+/** My roster (published shifts of me and my units) and the personal iCalendar feed. */
+@Module({
+  imports: [TypeOrmModule.forFeature([CalendarFeedEntity, CalendarFeedEventEntity])],
+  controllers: [MyRosterController, CalendarFeedsController],
+  providers: [MyRosterService, CalendarFeedsService],
+  exports: [CalendarFeedsService],
+})
+export class MyRosterModule {}

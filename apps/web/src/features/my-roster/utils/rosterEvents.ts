@@ -1,0 +1,89 @@
+import type { MyRosterShiftDto, ShiftColour } from '@rotaplex/contracts';
+
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * The wall-clock time of an instant in an IANA zone as "YYYY-MM-DDTHH:mm:ss" (no offset). The
+ * calendar runs in UTC and is fed these, so it shows the unit's local times whatever the browser's zone.
+ */
+export function wallClock(iso: string, timeZone: string): string {
+  let f = formatters.get(timeZone);
+  if (!f) {
+    f = new Intl.DateTimeFormat('en-GB', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      second: '2-digit',
+    });
+    formatters.set(timeZone, f);
+  }
+  const p = Object.fromEntries(
+    f
+      .formatToParts(new Date(iso))
+      .filter((x) => x.type !== 'literal')
+      .map((x) => [x.type, x.value]),
+  );
+  return `${p.year}-${p.month}-${p.day}T${p.hour}:${p.minute}:${p.second}`;
+}
+
+/** Today's date "YYYY-MM-DD" in a zone. */
+export function todayIn(timeZone: string, now: Date = new Date()): string {
+  return wallClock(now.toISOString(), timeZone).slice(0, 10);
+}
+
+export interface RosterEventProps {
+  shift: MyRosterShiftDto;
+}
+
+export interface RosterEvent {
+  id: string;
+  title: string;
+  start: string;
+  end: string;
+  backgroundColor: string;
+  borderColor: string;
+  textColor: string;
+  classNames: string[];
+  extendedProps: RosterEventProps;
+}
+
+export type ColourTokens = Record<ShiftColour, { background: string; foreground: string; border: string }>;
+
+/**
+ * Calendar events of the shifts in one unit's zone: mine first in each slot and marked, colleagues'
+ * with their name. `mineClass` and `otherClass` are the style classes for the two kinds.
+ */
+export function rosterEvents(
+  shifts: readonly MyRosterShiftDto[],
+  timeZone: string,
+  colours: ColourTokens,
+  classes: { mine: string; other: string },
+): RosterEvent[] {
+  return shifts
+    .filter((s) => s.timeZone === timeZone)
+    .map((s, i) => {
+      const c = colours[s.colour];
+      return {
+        id: `${s.date}-${i}`,
+        title: s.mine ? `${s.shiftName} (you)` : `${s.name}: ${s.shiftName}`,
+        start: wallClock(s.start, timeZone),
+        end: wallClock(s.end, timeZone),
+        backgroundColor: c.background,
+        borderColor: c.border,
+        textColor: c.foreground,
+        classNames: [s.mine ? classes.mine : classes.other],
+        extendedProps: { shift: s },
+      };
+    })
+    .sort((a, b) => Number(b.extendedProps.shift.mine) - Number(a.extendedProps.shift.mine));
+}
+
+/** First and last day of a visible range [start, end) given as the calendar's UTC dates. */
+export function rangeDays(start: Date, end: Date): { from: string; to: string } {
+  const last = new Date(end.getTime() - 86_400_000);
+  return { from: start.toISOString().slice(0, 10), to: last.toISOString().slice(0, 10) };
+}
