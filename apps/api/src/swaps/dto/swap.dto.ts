@@ -1,0 +1,81 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  type ProposeSwapDto,
+  SWAP_STATUSES,
+  type SwapDecisionDto,
+  type SwapLinkDecisionDto,
+  type SwapStatus,
+} from '@rotaplex/contracts';
+import { IsIn, IsOptional, IsString, IsUUID, Length, Matches, MaxLength } from 'class-validator';
+
+const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+
+export class ProposeSwapBody implements ProposeSwapDto {
+  @ApiProperty({ enum: ['swap', 'offer'], description: 'swap: exchange shifts; offer: give my shift away' })
+  @IsIn(['swap', 'offer'], { message: 'kind must be swap or offer' })
+  kind!: 'swap' | 'offer';
+
+  @ApiProperty({ format: 'uuid' })
+  @IsUUID('all', { message: 'rosterPeriodId must be a roster period id' })
+  rosterPeriodId!: string;
+
+  @ApiProperty({ example: '2027-01-04', description: 'My working day to give or exchange' })
+  @Matches(DATE, { message: 'myDate must be a date YYYY-MM-DD' })
+  myDate!: string;
+
+  @ApiProperty({ format: 'uuid' })
+  @IsUUID('all', { message: 'colleagueStaffMemberId must be a staff member id' })
+  colleagueStaffMemberId!: string;
+
+  @ApiPropertyOptional({ example: '2027-01-06', description: "Swap only: the colleague's day I take" })
+  @IsOptional()
+  @Matches(DATE, { message: 'theirDate must be a date YYYY-MM-DD' })
+  theirDate?: string;
+
+  @ApiPropertyOptional({ maxLength: 500 })
+  @IsOptional()
+  @IsString()
+  @MaxLength(500, { message: 'note must be at most 500 characters' })
+  note?: string;
+}
+
+export class SwapDecisionBody implements SwapDecisionDto {
+  @ApiProperty({ enum: ['accept', 'decline', 'approve', 'refuse'] })
+  @IsIn(['accept', 'decline', 'approve', 'refuse'], {
+    message: 'decision must be one of accept, decline, approve, refuse',
+  })
+  decision!: SwapDecisionDto['decision'];
+
+  @ApiPropertyOptional({ maxLength: 500 })
+  @IsOptional()
+  @IsString()
+  @MaxLength(500, { message: 'reason must be at most 500 characters' })
+  reason?: string;
+}
+
+export class SwapLinkDecisionBody extends SwapDecisionBody implements SwapLinkDecisionDto {
+  @ApiProperty({ description: 'The token from the e-mailed link' })
+  @IsString()
+  @Length(1, 200, { message: 'token must be the token from the e-mailed link' })
+  token!: string;
+}
+
+export class SwapLinkQuery {
+  @ApiProperty()
+  @IsString()
+  @Length(1, 200, { message: 'token must be the token from the e-mailed link' })
+  token!: string;
+}
+
+export class SwapListQuery {
+  @ApiPropertyOptional({ enum: SWAP_STATUSES })
+  @IsOptional()
+  @IsIn(SWAP_STATUSES, { message: `status must be one of ${SWAP_STATUSES.join(', ')}` })
+  status?: SwapStatus;
+}
+
+export class SwapOptionsQuery {
+  @ApiProperty({ format: 'uuid' })
+  @IsUUID('all', { message: 'rosterPeriodId must be a roster period id' })
+  rosterPeriodId!: string;
+}

@@ -1,0 +1,50 @@
+import { type OutgoingMail } from '../mail/mail.service';
+import { escapeHtml } from '../mail/templates';
+
+/** A shift in words, in the unit's local time: "Early 07:00-15:00 on Mon 4 Jan 2027". */
+export function shiftWords(
+  shift: { name: string; start: string; end: string } | undefined,
+  date: string,
+): string {
+  const day = new Date(`${date}T12:00:00Z`).toLocaleDateString('en-GB', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  });
+  return shift ? `${shift.name} ${shift.start}-${shift.end} on ${day}` : `a day off on ${day}`;
+}
+
+/**
+ * Plain-text and HTML versions of a swap message. Only the names and shifts of the people in the
+ * request appear (no contact details, requests or pay of anyone else).
+ */
+export function swapMail(p: {
+  to: string;
+  name: string;
+  subject: string;
+  lines: string[];
+  timeZone: string;
+  action?: { label: string; url: string };
+}): OutgoingMail {
+  const lines = [`Hello ${p.name},`, ...p.lines, `Times are in the unit's time zone (${p.timeZone}).`];
+  const footer = p.action
+    ? 'The link works once, only for this decision, and expires. You can also decide in Rotaplex under Swaps.'
+    : 'You can see all your swaps in Rotaplex under Swaps.';
+  const text = [...lines, ...(p.action ? [`${p.action.label}: ${p.action.url}`] : []), footer].join('\n\n');
+  const body = lines.map((l) => `<p style="margin:0 0 16px">${escapeHtml(l)}</p>`).join('\n');
+  const button = p.action
+    ? `<p style="margin:24px 0"><a href="${escapeHtml(p.action.url)}" style="background:#0f5c57;color:#ffffff;padding:10px 18px;border-radius:4px;text-decoration:none">${escapeHtml(p.action.label)}</a></p>
+<p style="margin:0 0 16px;font-size:13px">If the button does not work, open this address: <a href="${escapeHtml(p.action.url)}">${escapeHtml(p.action.url)}</a></p>`
+    : '';
+  const html = `<!doctype html>
+<html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(p.subject)}</title></head>
+<body style="font-family:'Open Sans',Arial,sans-serif;color:#1d2b2a;line-height:1.5;padding:24px">
+<h1 style="font-size:20px;margin:0 0 16px">${escapeHtml(p.subject)}</h1>
+${body}
+${button}
+<p style="margin:24px 0 0;font-size:12px;color:#5a6b69">${escapeHtml(footer)}</p>
+</body></html>`;
+  return { to: p.to, subject: p.subject, text: `${text}\n`, html };
+}

@@ -1,0 +1,106 @@
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { ApiConflictResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import {
+  type SwapLinkViewDto,
+  type SwapOptionsDto,
+  type SwapPreviewDto,
+  type SwapRequestDto,
+} from '@rotaplex/contracts';
+import { type AuthUser } from '../common/auth-user';
+import { Authenticated, RequirePermissions } from '../common/decorators/access.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Public } from '../common/decorators/public.decorator';
+import {
+  ProposeSwapBody,
+  SwapDecisionBody,
+  SwapLinkDecisionBody,
+  SwapLinkQuery,
+  SwapListQuery,
+  SwapOptionsQuery,
+} from './dto/swap.dto';
+import { SwapsService } from './swaps.service';
+
+/** Swaps and offers between staff of a published roster, and their approval by a manager. */
+@ApiTags('swaps')
+@Controller('swaps')
+export class SwapsController {
+  constructor(private readonly swaps: SwapsService) {}
+
+  @Get()
+  @Authenticated()
+  @ApiOkResponse({ description: 'Staff: requests they are part of; managers: requests of their units' })
+  list(@CurrentUser() user: AuthUser, @Query() query: SwapListQuery): Promise<SwapRequestDto[]> {
+    return this.swaps.list(user, query.status);
+  }
+
+  @Get('options')
+  @RequirePermissions('requests:own')
+  @ApiOkResponse({ description: 'My shifts in a published period and colleagues to swap with' })
+  options(@CurrentUser() user: AuthUser, @Query() query: SwapOptionsQuery): Promise<SwapOptionsDto> {
+    return this.swaps.options(user, query.rosterPeriodId);
+  }
+
+  @Post('preview')
+  @HttpCode(200)
+  @RequirePermissions('requests:own')
+  @ApiOkResponse({ description: "The checker's findings for both people after the change; nothing is saved" })
+  preview(@CurrentUser() user: AuthUser, @Body() body: ProposeSwapBody): Promise<SwapPreviewDto> {
+    return this.swaps.preview(user, body);
+  }
+
+  @Post()
+  @RequirePermissions('requests:own')
+  @ApiUnprocessableEntityResponse({ description: 'The change breaks a hard rule (findings in the body)' })
+  propose(@CurrentUser() user: AuthUser, @Body() body: ProposeSwapBody): Promise<SwapRequestDto> {
+    return this.swaps.propose(user, body);
+  }
+
+  @Get(':id')
+  @Authenticated()
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SwapRequestDto> {
+    return this.swaps.get(user, id);
+  }
+
+  @Post(':id/decision')
+  @HttpCode(200)
+  @Authenticated()
+  @ApiConflictResponse({ description: 'Already decided, or the roster changed since the proposal' })
+  decide(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() body: SwapDecisionBody,
+  ): Promise<SwapRequestDto> {
+    return this.swaps.decide(user, id, body);
+  }
+
+  @Post(':id/cancel')
+  @HttpCode(200)
+  @Authenticated() // only the proposer may cancel: checked by the service
+  cancel(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SwapRequestDto> {
+    return this.swaps.cancel(user, id);
+  }
+}
+
+/**
+ * E-mailed decision links (no sign-in): GET shows what the link decides and changes nothing, so a
+ * mail scanner fetching it decides nothing; POST makes the decision and uses the link up.
+ */
+@ApiTags('swaps')
+@Controller('swap-links')
+export class SwapLinksController {
+  constructor(private readonly swaps: SwapsService) {}
+
+  @Get()
+  @Public()
+  view(@Query() query: SwapLinkQuery): Promise<SwapLinkViewDto> {
+    return this.swaps.viewLink(query.token);
+  }
+
+  @Post()
+  @Public()
+  @HttpCode(200)
+  decide(@Body() body: SwapLinkDecisionBody): Promise<SwapRequestDto> {
+    const { token, ...decision } = body;
+    return this.swaps.decideByLink(token, decision);
+  }
+}

@@ -1,0 +1,19 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { MailModule } from '../mail/mail.module';
+import { RosterInputModule } from '../roster-input/roster-input.module';
+import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';
+import { SwapLinksController, SwapsController } from './swaps.controller';
+import { SwapsService } from './swaps.service';
+
+@Module({
+  imports: [
+    TypeOrmModule.forFeature([SwapRequestEntity, SwapLinkTokenEntity]),
+    RosterInputModule,
+    MailModule,
+  ],
+  controllers: [SwapsController, SwapLinksController],
+  providers: [SwapsService],
+  exports: [SwapsService],
+})
+export class SwapsModule {}

@@ -1,0 +1,236 @@
+import {
+  type MailMessageDto,
+  type MailMessageSummaryDto,
+  type OpenShiftDto,
+  type Page,
+  PLANNING_ROUTES as P,
+  type RosterPeriodDto,
+  type ShiftTypeDto,
+  type SkillDto,
+  SWAP_DECISION_WEB_PATH,
+  SWAP_ROUTES as S,
+  type SwapRequestDto,
+  type UnitDto,
+} from '@rotaplex/contracts';
+import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { ContractEntity } from '../src/contracts/contract.entity';
+import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
+import { addDays } from '../src/roster-periods/roster-periods.service';
+import { StaffMemberEntity } from '../src/staff/staff-member.entity';
+import { linkToken } from './support/mailbox';
+import { api, bearer, startTestApp, type TestApp } from './support/test-app';
+
+/**
+ * Open shifts: cover still short on a published roster, offered to staff who have the skill and
+ * whom the checker allows, claimed, and approved by a manager (in the app or through the e-mail link).
+ * Refusals use the 11-hour daily rest (EU Working Time Directive 2003/88/EC, Art. 3); the ward's
+ * cover needs and shifts are the demo's (Late 14:30-22:30, Early 07:00-15:00, Night 22:00-07:30).
+ */
+describe('open shifts', () => {
+  let t: TestApp;
+  let admin: string;
+  let manager: string;
+  const tokens: Record<string, string> = {};
+  let period: RosterPeriodDto;
+  let shift: Record<string, ShiftTypeDto>;
+  let skill: Record<string, string>;
+  let staffId: Record<string, string>;
+  const seen = new Set<string>();
+  const EMAIL = {
+    a: 'staff@example.com',
+    b: 'priya.wendover@example.com',
+    c: 'tomasz.kellaway@example.com',
+    d: 'grace.holloway@example.com',
+    contact: 'sofia.marin@example.com',
+  } as const;
+  type Who = keyof typeof EMAIL;
+  const START = '2030-01-07'; // a Monday
+  const day = (n: number) => addDays(START, n);
+
+  beforeAll(async () => {
+    t = await startTestApp({ LOGIN_RATE_LIMIT: '1000' });
+    admin = (await t.login('admin@example.com')).token;
+    manager = (await t.login('manager@example.com')).token;
+    for (const [who, email] of Object.entries(EMAIL)) tokens[who] = (await t.login(email)).token;
+    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
+    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    period = (
+      await t
+        .http()
+        .post(api(P.rosterPeriods))
+        .set(bearer(manager))
+        .send({ unitId: ward.id, startDate: START, days: 7 })
+        .expect(201)
+    ).body as RosterPeriodDto;
+    const types = (
+      await t
+        .http()
+        .get(api(P.shiftTypes(ward.id)))
+        .set(bearer(manager))
+    ).body as ShiftTypeDto[];
+    shift = Object.fromEntries(types.map((s) => [s.code, s]));
+    const skills = (await t.http().get(api(P.skills)).set(bearer(manager))).body as SkillDto[];
+    skill = Object.fromEntries(skills.map((s) => [s.code, s.id]));
+    const em = t.dataSource.manager;
+    const [{ organisationId }] = (await em.query(`SELECT "organisationId" FROM "units" WHERE "id" = ?`, [
+      ward.id,
+    ])) as { organisationId: string }[];
+    const contract = await em.save(
+      em.create(ContractEntity, {
+        organisationId,
+        unitId: null,
+        name: 'Rest only (test)',
+        maxShiftsPerType: null,
+        minPaidMinutes: null,
+        maxPaidMinutes: null,
+        targetPaidMinutes: null,
+        maxConsecutiveWorkDays: null,
+        minConsecutiveWorkDays: null,
+        minConsecutiveDaysOff: null,
+        maxWeekends: null,
+        maxConsecutiveNights: null,
+        minRestMinutes: 660,
+      }),
+    );
+    await em.update(StaffMemberEntity, { unitId: ward.id }, { contractId: contract.id });
+    const staff = await em.findBy(StaffMemberEntity, { unitId: ward.id });
+    staffId = Object.fromEntries(
+      (Object.keys(EMAIL) as Who[]).map((w) => [w, staff.find((s) => s.email === EMAIL[w])?.id ?? '']),
+    );
+    await setCell('a', 0, 'L');
+    await setCell('d', 4, 'N');
+    await em.update(RosterPeriodEntity, { id: period.id }, { status: 'published', publishedAt: new Date() });
+  });
+  afterAll(() => t.close());
+
+  const setCell = async (who: Who, d: number, code: string) => {
+    await t.dataSource.manager.insert(AssignmentEntity, {
+      rosterPeriodId: period.id,
+      staffMemberId: staffId[who],
+      date: day(d),
+      shiftTypeId: shift[code].id,
+      pinned: false,
+    });
+  };
+  const cell = async (who: Who, d: number) =>
+    (
+      await t.dataSource.manager.findOneBy(AssignmentEntity, {
+        rosterPeriodId: period.id,
+        staffMemberId: staffId[who],
+        date: day(d),
+      })
+    )?.shiftTypeId ?? null;
+  const list = async (token: string) =>
+    (
+      await t
+        .http()
+        .get(api(S.openShifts))
+        .query({ rosterPeriodId: period.id })
+        .set(bearer(token))
+        .expect(200)
+    ).body as OpenShiftDto[];
+  const has = (items: OpenShiftDto[], d: number, code: string, skillCode: string) =>
+    items.some((o) => o.date === day(d) && o.shiftCode === code && o.skillCode === skillCode);
+  const claim = (who: Who, d: number, code: string, skillCode: string) =>
+    t
+      .http()
+      .post(api(S.openShiftClaims))
+      .set(bearer(tokens[who]))
+      .send({
+        rosterPeriodId: period.id,
+        date: day(d),
+        shiftTypeId: shift[code].id,
+        skillId: skill[skillCode],
+      });
+  const mailTo = async (to: string, subject: RegExp): Promise<MailMessageDto> => {
+    for (let i = 0; i < 100; i++) {
+      const page = (
+        await t.http().get(api('/mailbox')).query({ q: to, pageSize: 100 }).set(bearer(admin)).expect(200)
+      ).body as Page<MailMessageSummaryDto>;
+      const hit = page.items.find((m) => m.to.includes(to) && subject.test(m.subject) && !seen.has(m.id));
+      if (hit) {
+        seen.add(hit.id);
+        return (
+          await t
+            .http()
+            .get(api(`/mailbox/${hit.id}`))
+            .set(bearer(admin))
+            .expect(200)
+        ).body as MailMessageDto;
+      }
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    throw new Error(`no mail to ${to} matching ${subject}`);
+  };
+
+  it('offers staff only the open shifts they have the skill for and the checker allows', async () => {
+    const mine = await list(tokens.a);
+    expect(mine.length).toBeGreaterThan(0);
+    expect(mine.every((o) => o.skillCode === 'RN')).toBe(true); // Robin is a registered nurse, not an HCA
+    expect(mine.some((o) => o.date === day(0))).toBe(false); // already working that day
+    expect(has(mine, 1, 'E', 'RN')).toBe(false); // 8.5 h after Sunday's Late: under 11 h of rest
+    expect(has(mine, 1, 'L', 'RN')).toBe(true);
+    expect(has(mine, 2, 'E', 'RN')).toBe(false); // the demo's Robin is unavailable for Wednesday earlies
+    expect(has(mine, 3, 'E', 'RN')).toBe(true);
+
+    // The manager sees every open shift of the unit, with how many are still wanted.
+    const all = await list(manager);
+    expect(has(all, 1, 'E', 'HCA')).toBe(true);
+    const night = all.find((o) => o.date === day(4) && o.shiftCode === 'N' && o.skillCode === 'RN')!;
+    expect(night.short).toBe(1); // target 2, Grace is on it
+    // Staff of another unit see none of this unit's open shifts and cannot claim them.
+    expect(await list(tokens.contact)).toEqual([]);
+    await claim('contact', 1, 'L', 'RN').expect(403);
+    await claim('a', 1, 'L', 'RN').set(bearer(manager)).expect(403);
+  });
+
+  it('refuses claims the rules or skills forbid', async () => {
+    const rest = await claim('a', 1, 'E', 'RN').expect(422);
+    expect(rest.body.message).toMatch(/would break a rule/);
+    expect(rest.body.findings.violations[0].rule).toBe('minRest');
+    await claim('a', 1, 'E', 'HCA').expect(422);
+    await claim('a', 0, 'E', 'RN').expect(400);
+    expect(await cell('a', 1)).toBeNull();
+  });
+
+  it('a claim is approved through the manager e-mail link and fills the shift, audited', async () => {
+    const created = (await claim('a', 1, 'L', 'RN').expect(201)).body as SwapRequestDto;
+    expect(created).toMatchObject({ kind: 'claim', status: 'accepted', colleagueStaffMemberId: null });
+    await claim('a', 1, 'L', 'RN').expect(409); // one claim per day at a time
+    const mail = await mailTo('manager@example.com', /Robin Tallis claims an open shift/);
+    const { token } = linkToken(mail.text, SWAP_DECISION_WEB_PATH);
+    await t.http().get(api(S.swapLink)).query({ token }).expect(200);
+    expect(await cell('a', 1)).toBeNull();
+    const approved = await t.http().post(api(S.swapLink)).send({ token, decision: 'approve' }).expect(200);
+    expect(approved.body.status).toBe('approved');
+    expect(await cell('a', 1)).toBe(shift['L'].id);
+    await mailTo(EMAIL.a, /Your roster has changed/);
+    const audit = await t.dataSource.manager.query(
+      `SELECT "kind" FROM "audit_entries" WHERE "rosterPeriodId" = ?`,
+      [period.id],
+    );
+    expect(audit).toEqual([{ kind: 'open-shift-claim' }]);
+    expect(has(await list(tokens.a), 1, 'L', 'RN')).toBe(false);
+  });
+
+  it('two claims for the last place approved at once: one succeeds, one is refused', async () => {
+    const b = (await claim('b', 4, 'N', 'RN').expect(201)).body as SwapRequestDto;
+    const c = (await claim('c', 4, 'N', 'RN').expect(201)).body as SwapRequestDto;
+    const results = await Promise.all([
+      t
+        .http()
+        .post(api(S.swapDecide(b.id)))
+        .set(bearer(manager))
+        .send({ decision: 'approve' }),
+      t
+        .http()
+        .post(api(S.swapDecide(c.id)))
+        .set(bearer(admin))
+        .send({ decision: 'approve' }),
+    ]);
+    expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect(results.find((r) => r.status === 409)!.body.message).toMatch(/filled meanwhile/);
+    const filled = [await cell('b', 4), await cell('c', 4)].filter((x) => x !== null);
+    expect(filled).toEqual([shift['N'].id]);
+  });
+});

@@ -1,0 +1,482 @@
+import {
+  type MailMessageDto,
+  type MailMessageSummaryDto,
+  type Page,
+  PLANNING_ROUTES as P,
+  type RosterPeriodDto,
+  type ShiftTypeDto,
+  type SwapLinkViewDto,
+  type SwapPreviewDto,
+  type SwapRequestDto,
+  SWAP_DECISION_WEB_PATH,
+  SWAP_ROUTES as S,
+  type UnitDto,
+} from '@rotaplex/contracts';
+import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { ContractEntity } from '../src/contracts/contract.entity';
+import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
+import { addDays } from '../src/roster-periods/roster-periods.service';
+import { StaffMemberEntity } from '../src/staff/staff-member.entity';
+import { SwapLinkTokenEntity } from '../src/swaps/swap-request.entity';
+import { linkToken } from './support/mailbox';
+import { api, bearer, startTestApp, type TestApp } from './support/test-app';
+
+/**
+ * Swaps and offers on a published roster, end to end: the real app on a temporary SQLite file, the
+ * real checker, mail through the outbox to the built-in SMTP catcher, links read from the caught mail.
+ *
+ * Rule used for the refusals: 11 consecutive hours of daily rest (EU Working Time Directive
+ * 2003/88/EC, Art. 3). The ward's shifts (demo data): Early 07:00-15:00, Late 14:30-22:30,
+ * Night 22:00-07:30; a Late followed by the next day's Early leaves 8.5 h of rest.
+ */
+describe('swaps', () => {
+  let t: TestApp;
+  let admin: string;
+  let manager: string;
+  let manager2: string;
+  const tokens: Record<string, string> = {};
+  let period: RosterPeriodDto;
+  let shift: Record<string, ShiftTypeDto>;
+  let staffId: Record<string, string>;
+  const seen = new Set<string>();
+
+  const EMAIL = {
+    a: 'staff@example.com',
+    b: 'priya.wendover@example.com',
+    c: 'tomasz.kellaway@example.com',
+    d: 'grace.holloway@example.com',
+    contact: 'sofia.marin@example.com',
+  } as const;
+  type Who = keyof typeof EMAIL;
+  const START = '2030-01-07';
+  const day = (n: number) => addDays(START, n);
+
+  beforeAll(async () => {
+    t = await startTestApp({ LOGIN_RATE_LIMIT: '1000' });
+    admin = (await t.login('admin@example.com')).token;
+    manager = (await t.login('manager@example.com')).token;
+    manager2 = (await t.login('manager2@example.com')).token;
+    for (const [who, email] of Object.entries(EMAIL)) tokens[who] = (await t.login(email)).token;
+
+    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
+    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    period = (
+      await t
+        .http()
+        .post(api(P.rosterPeriods))
+        .set(bearer(manager))
+        .send({ unitId: ward.id, startDate: START, days: 28 })
+        .expect(201)
+    ).body as RosterPeriodDto;
+    const types = (
+      await t
+        .http()
+        .get(api(P.shiftTypes(ward.id)))
+        .set(bearer(manager))
+    ).body as ShiftTypeDto[];
+    shift = Object.fromEntries(types.map((s) => [s.code, s]));
+
+    // Every ward person on one contract with only the 11-hour daily rest (EU WTD Art. 3), so the
+    // sparse test roster breaks no other rule.
+    const em = t.dataSource.manager;
+    const contract = await em.save(
+      em.create(ContractEntity, {
+        organisationId: (
+          (await em.query(`SELECT "organisationId" FROM "units" WHERE "id" = ?`, [ward.id])) as {
+            organisationId: string;
+          }[]
+        )[0].organisationId,
+        unitId: null,
+        name: 'Rest only (test)',
+        maxShiftsPerType: null,
+        minPaidMinutes: null,
+        maxPaidMinutes: null,
+        targetPaidMinutes: null,
+        maxConsecutiveWorkDays: null,
+        minConsecutiveWorkDays: null,
+        minConsecutiveDaysOff: null,
+        maxWeekends: null,
+        maxConsecutiveNights: null,
+        minRestMinutes: 660,
+      }),
+    );
+    await em.update(StaffMemberEntity, { unitId: ward.id }, { contractId: contract.id });
+    const staff = await em.findBy(StaffMemberEntity, { unitId: ward.id });
+    staffId = Object.fromEntries(
+      (Object.keys(EMAIL) as Who[]).map((w) => [w, staff.find((s) => s.email === EMAIL[w])?.id ?? '']),
+    );
+    await em.update(RosterPeriodEntity, { id: period.id }, { status: 'published', publishedAt: new Date() });
+  });
+  afterAll(() => t.close());
+
+  const em = () => t.dataSource.manager;
+  /** Sets a cell of the test period directly (the fixture a published roster would have). */
+  const setCell = async (who: Who, d: number, code: string | null) => {
+    await em().delete(AssignmentEntity, {
+      rosterPeriodId: period.id,
+      staffMemberId: staffId[who],
+      date: day(d),
+    });
+    if (code) {
+      await em().insert(AssignmentEntity, {
+        rosterPeriodId: period.id,
+        staffMemberId: staffId[who],
+        date: day(d),
+        shiftTypeId: shift[code].id,
+        pinned: false,
+      });
+    }
+  };
+  const cell = async (who: Who, d: number) => {
+    const row = await em().findOneBy(AssignmentEntity, {
+      rosterPeriodId: period.id,
+      staffMemberId: staffId[who],
+      date: day(d),
+    });
+    return row?.shiftTypeId ? Object.values(shift).find((s) => s.id === row.shiftTypeId)!.code : null;
+  };
+
+  /** Waits for a new message to `to` whose subject matches, delivered by the outbox to the catcher. */
+  const mailTo = async (to: string, subject: RegExp): Promise<MailMessageDto> => {
+    for (let i = 0; i < 100; i++) {
+      const page = (
+        await t.http().get(api('/mailbox')).query({ q: to, pageSize: 100 }).set(bearer(admin)).expect(200)
+      ).body as Page<MailMessageSummaryDto>;
+      const hit = page.items.find((m) => m.to.includes(to) && subject.test(m.subject) && !seen.has(m.id));
+      if (hit) {
+        seen.add(hit.id);
+        return (
+          await t
+            .http()
+            .get(api(`/mailbox/${hit.id}`))
+            .set(bearer(admin))
+            .expect(200)
+        ).body as MailMessageDto;
+      }
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    throw new Error(`no mail to ${to} matching ${subject}`);
+  };
+  const tokenIn = (mail: MailMessageDto) => linkToken(mail.text, SWAP_DECISION_WEB_PATH).token;
+
+  const propose = (who: Who, body: object) =>
+    t
+      .http()
+      .post(api(S.swaps))
+      .set(bearer(tokens[who]))
+      .send({ rosterPeriodId: period.id, ...body });
+  const decide = (token: string, id: string, decision: string) =>
+    t
+      .http()
+      .post(api(S.swapDecide(id)))
+      .set(bearer(token))
+      .send({ decision });
+  const byLink = (token: string, decision: string) =>
+    t.http().post(api(S.swapLink)).send({ token, decision });
+
+  /** A: Late on day 0; B: Early on day 0; proposes the same-day swap, B accepts in the app. */
+  const acceptedSwap = async (d: number): Promise<SwapRequestDto> => {
+    await setCell('a', d, 'L');
+    await setCell('b', d, 'E');
+    const res = await propose('a', {
+      kind: 'swap',
+      myDate: day(d),
+      colleagueStaffMemberId: staffId.b,
+      theirDate: day(d),
+    });
+    expect([res.status, res.body.message]).toEqual([201, undefined]);
+    const swap = res.body as SwapRequestDto;
+    await mailTo(EMAIL.b, /asks to swap/);
+    expect((await decide(tokens.b, swap.id, 'accept')).status).toBe(200);
+    await mailTo('manager@example.com', /Swap to approve/);
+    return swap;
+  };
+
+  it('previews, proposes, is accepted and approved through the e-mail links, and swaps the cells', async () => {
+    await setCell('a', 0, 'L');
+    await setCell('b', 0, 'E');
+    const body = { kind: 'swap', myDate: day(0), colleagueStaffMemberId: staffId.b, theirDate: day(0) };
+    const preview = await t
+      .http()
+      .post(api(S.swapPreview))
+      .set(bearer(tokens.a))
+      .send({ rosterPeriodId: period.id, ...body })
+      .expect(200);
+    const p = preview.body as SwapPreviewDto;
+    expect(p.blocked).toBe(false);
+    expect(p.violations).toEqual([]);
+    expect(p.changes.map((c) => `${c.staffName}:${c.beforeShiftCode}>${c.afterShiftCode}`)).toEqual([
+      'Robin Tallis:L>E',
+      'Priya Wendover:E>L',
+    ]);
+
+    const created = (await propose('a', body).expect(201)).body as SwapRequestDto;
+    expect(created.status).toBe('proposed');
+    expect(created.actions).toEqual(['cancel']);
+
+    // B's mail: plain text and HTML, a link to the decision page.
+    const mailB = await mailTo(EMAIL.b, /Robin Tallis asks to swap/);
+    expect(mailB.html).toContain('Accept or decline');
+    expect(mailB.text).toContain('Europe/London');
+    const tokenB = tokenIn(mailB);
+
+    // Fetching the link (as a mail scanner would) changes nothing.
+    const view = (await t.http().get(api(S.swapLink)).query({ token: tokenB }).expect(200))
+      .body as SwapLinkViewDto;
+    expect(view.role).toBe('colleague');
+    expect(view.decisions).toEqual(['accept', 'decline']);
+    expect(view.swap.status).toBe('proposed');
+    await t.http().get(api(S.swapLink)).query({ token: tokenB }).expect(200);
+    expect(
+      (
+        await t
+          .http()
+          .get(api(S.swap(created.id)))
+          .set(bearer(tokens.a))
+          .expect(200)
+      ).body.status,
+    ).toBe('proposed');
+
+    // The colleague's link cannot approve.
+    await byLink(tokenB, 'approve').expect(400);
+    const accepted = (await byLink(tokenB, 'accept').expect(200)).body as SwapRequestDto;
+    expect(accepted.status).toBe('accepted');
+    await mailTo(EMAIL.a, /accepted your swap/);
+    // Reused link: refused with a clear message.
+    const reused = await byLink(tokenB, 'decline').expect(410);
+    expect(reused.body.message).toMatch(/already been used/);
+
+    const mailM = await mailTo('manager@example.com', /Swap to approve: Robin Tallis and Priya Wendover/);
+    const tokenM = tokenIn(mailM);
+    const viewM = (await t.http().get(api(S.swapLink)).query({ token: tokenM }).expect(200))
+      .body as SwapLinkViewDto;
+    expect(viewM.decisions).toEqual(['approve', 'refuse']);
+    expect(await cell('a', 0)).toBe('L'); // still unchanged before the POST
+    const approved = (await byLink(tokenM, 'approve').expect(200)).body as SwapRequestDto;
+    expect(approved.status).toBe('approved');
+    expect(await cell('a', 0)).toBe('E');
+    expect(await cell('b', 0)).toBe('L');
+
+    // Everyone involved hears about it.
+    await mailTo(EMAIL.a, /Your roster has changed/);
+    await mailTo(EMAIL.b, /Your roster has changed/);
+    await mailTo('manager@example.com', /You approved a roster change/);
+    // The audit trail has the swap with before and after.
+    const audit = await em().query(
+      `SELECT "kind", "summary" FROM "audit_entries" WHERE "rosterPeriodId" = ?`,
+      [period.id],
+    );
+    expect(audit).toEqual([expect.objectContaining({ kind: 'swap' })]);
+    await byLink(tokenM, 'approve').expect(410);
+  });
+
+  it('refuses a proposal that would break the 11-hour daily rest (EU WTD Art. 3), with the findings', async () => {
+    // A works Late on day 2 and Early on day 4; B works Early on day 3. A taking B's Early on day 3
+    // leaves A 8.5 h of rest after the Late (22:30 -> 07:00).
+    await setCell('a', 2, 'L');
+    await setCell('a', 4, 'E');
+    await setCell('b', 3, 'E');
+    await setCell('b', 4, null);
+    await setCell('a', 3, null);
+    const body = { kind: 'swap', myDate: day(4), colleagueStaffMemberId: staffId.b, theirDate: day(3) };
+    const preview = (
+      await t
+        .http()
+        .post(api(S.swapPreview))
+        .set(bearer(tokens.a))
+        .send({ rosterPeriodId: period.id, ...body })
+        .expect(200)
+    ).body as SwapPreviewDto;
+    expect(preview.blocked).toBe(true);
+    expect(preview.violations).toEqual([
+      expect.objectContaining({ rule: 'minRest', staffMemberId: staffId.a, isNew: true }),
+    ]);
+    const res = await propose('a', body).expect(422);
+    expect(res.body.message).toMatch(/would break a rule/);
+    expect((res.body.findings as SwapPreviewDto).violations[0].rule).toBe('minRest');
+    expect(await cell('a', 3)).toBeNull();
+  });
+
+  it('colleague declines in the app; the proposer cancels another; a cancelled link is refused', async () => {
+    await setCell('a', 6, 'E');
+    const offer = (
+      await propose('a', { kind: 'offer', myDate: day(6), colleagueStaffMemberId: staffId.c }).expect(201)
+    ).body as SwapRequestDto;
+    await mailTo(EMAIL.c, /offers you a shift/);
+    const declined = (await decide(tokens.c, offer.id, 'decline').expect(200)).body as SwapRequestDto;
+    expect(declined.status).toBe('declined');
+    await mailTo(EMAIL.a, /declined your swap/);
+
+    const again = (
+      await propose('a', { kind: 'offer', myDate: day(6), colleagueStaffMemberId: staffId.c }).expect(201)
+    ).body as SwapRequestDto;
+    const tokenC = tokenIn(await mailTo(EMAIL.c, /offers you a shift/));
+    expect(
+      (
+        await t
+          .http()
+          .post(api(S.swapCancel(again.id)))
+          .set(bearer(tokens.a))
+          .expect(200)
+      ).body.status,
+    ).toBe('cancelled');
+    await mailTo(EMAIL.c, /cancelled a swap/);
+    await t.http().get(api(S.swapLink)).query({ token: tokenC }).expect(410);
+    await byLink(tokenC, 'accept').expect(410);
+    expect(await cell('a', 6)).toBe('E');
+    expect(await cell('c', 6)).toBeNull();
+  });
+
+  it('refuses tampered and expired links and keeps the request as it was', async () => {
+    await setCell('a', 8, 'E');
+    const offer = (
+      await propose('a', { kind: 'offer', myDate: day(8), colleagueStaffMemberId: staffId.d }).expect(201)
+    ).body as SwapRequestDto;
+    const token = tokenIn(await mailTo(EMAIL.d, /offers you a shift/));
+    const tampered = token.slice(0, -1) + (token.endsWith('A') ? 'B' : 'A');
+    const bad = await t.http().get(api(S.swapLink)).query({ token: tampered }).expect(400);
+    expect(JSON.stringify(bad.body.message)).toMatch(/not valid/);
+    await byLink(tampered, 'accept').expect(400);
+
+    await em().update(
+      SwapLinkTokenEntity,
+      { swapRequestId: offer.id },
+      { expiresAt: new Date(Date.now() - 1000) },
+    );
+    const expired = await t.http().get(api(S.swapLink)).query({ token }).expect(410);
+    expect(expired.body.message).toMatch(/expired/);
+    await byLink(token, 'accept').expect(410);
+    expect(
+      (
+        await t
+          .http()
+          .get(api(S.swap(offer.id)))
+          .set(bearer(tokens.d))
+          .expect(200)
+      ).body.status,
+    ).toBe('proposed');
+    // The colleague can still decide in the app.
+    await decide(tokens.d, offer.id, 'decline').expect(200);
+  });
+
+  it('a request still pending when its shift has started expires and can no longer be decided', async () => {
+    await setCell('a', 22, 'E');
+    const offer = (
+      await propose('a', { kind: 'offer', myDate: day(22), colleagueStaffMemberId: staffId.c }).expect(201)
+    ).body as SwapRequestDto;
+    // Move the request's day into the past, as if the period had run on.
+    await em().query(
+      `UPDATE "swap_requests" SET "changes" = replace("changes", ?, '2020-01-06') WHERE "id" = ?`,
+      [day(22), offer.id],
+    );
+    const read = (
+      await t
+        .http()
+        .get(api(S.swap(offer.id)))
+        .set(bearer(tokens.c))
+        .expect(200)
+    ).body as SwapRequestDto;
+    expect(read.status).toBe('expired');
+    expect(read.actions).toEqual([]);
+    await decide(tokens.c, offer.id, 'accept').expect(410);
+  });
+
+  it('refuses the wrong role and other units', async () => {
+    const swap = await acceptedSwap(10);
+    await decide(tokens.a, swap.id, 'approve').expect(403); // staff cannot approve
+    await decide(tokens.b, swap.id, 'accept').expect(409); // already accepted
+    await decide(manager, swap.id, 'accept').expect(403); // a manager is not the colleague
+    await decide(tokens.c, swap.id, 'approve').expect(404); // not theirs to see
+    await decide(manager2, swap.id, 'approve').expect(403); // manager of another unit
+    await t
+      .http()
+      .get(api(S.swap(swap.id)))
+      .set(bearer(manager2))
+      .expect(403);
+    // Staff of another unit cannot propose on this roster.
+    await propose('contact', { kind: 'offer', myDate: day(10), colleagueStaffMemberId: staffId.b }).expect(
+      403,
+    );
+    // A manager cannot propose (staff permission).
+    await t
+      .http()
+      .post(api(S.swaps))
+      .set(bearer(manager))
+      .send({ rosterPeriodId: period.id, kind: 'offer', myDate: day(10), colleagueStaffMemberId: staffId.b })
+      .expect(403);
+    // Anonymous: 401.
+    await t
+      .http()
+      .post(api(S.swapDecide(swap.id)))
+      .send({ decision: 'approve' })
+      .expect(401);
+    // Bad input: a clear 400.
+    await decide(manager, swap.id, 'maybe').expect(400);
+    const refused = (await decide(manager, swap.id, 'refuse').expect(200)).body as SwapRequestDto;
+    expect(refused.status).toBe('refused');
+    expect(await cell('a', 10)).toBe('L');
+  });
+
+  it('refuses a double approval', async () => {
+    const swap = await acceptedSwap(12);
+    await decide(manager, swap.id, 'approve').expect(200);
+    const twice = await decide(manager, swap.id, 'approve').expect(409);
+    expect(twice.body.message).toMatch(/already approved/);
+    expect(await cell('a', 12)).toBe('E');
+  });
+
+  it('refuses a stale roster: a cell changed after the proposal', async () => {
+    const swap = await acceptedSwap(14);
+    await setCell('b', 14, 'N'); // the manager changed B's shift meanwhile
+    const res = await decide(manager, swap.id, 'approve').expect(409);
+    expect(res.body.message).toContain(`roster changed since this was asked (Priya Wendover on ${day(14)})`);
+    expect(await cell('a', 14)).toBe('L');
+    expect(await cell('b', 14)).toBe('N');
+    const after = (
+      await t
+        .http()
+        .get(api(S.swap(swap.id)))
+        .set(bearer(tokens.a))
+        .expect(200)
+    ).body as SwapRequestDto;
+    expect(after.status).toBe('refused');
+    expect(after.outcome).toMatch(/roster changed/);
+  });
+
+  it('refuses approval when the period is no longer published', async () => {
+    const swap = await acceptedSwap(17); // not 16: the demo's Robin is unavailable for Wednesday earlies
+    await em().update(RosterPeriodEntity, { id: period.id }, { status: 'archived' });
+    try {
+      const res = await decide(manager, swap.id, 'approve').expect(409);
+      expect(res.body.message).toMatch(/no longer published/);
+    } finally {
+      await em().update(RosterPeriodEntity, { id: period.id }, { status: 'published' });
+    }
+    expect(await cell('a', 17)).toBe('L');
+  });
+
+  it('two approvals racing for the same shift: one succeeds, one is refused', async () => {
+    // A offers one Early to B and to C; both accept; two approvals arrive at the same time.
+    await setCell('a', 18, 'E');
+    const toB = (
+      await propose('a', { kind: 'offer', myDate: day(18), colleagueStaffMemberId: staffId.b }).expect(201)
+    ).body as SwapRequestDto;
+    const toC = (
+      await propose('a', { kind: 'offer', myDate: day(18), colleagueStaffMemberId: staffId.c }).expect(201)
+    ).body as SwapRequestDto;
+    await decide(tokens.b, toB.id, 'accept').expect(200);
+    await decide(tokens.c, toC.id, 'accept').expect(200);
+    const results = await Promise.all([decide(manager, toB.id, 'approve'), decide(admin, toC.id, 'approve')]);
+    expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+    const [b, c] = [await cell('b', 18), await cell('c', 18)];
+    expect([b, c].sort()).toEqual(['E', null].sort());
+    expect(await cell('a', 18)).toBeNull();
+
+    // The same request approved twice at once: one success, one refusal.
+    const swap = await acceptedSwap(20);
+    const twice = await Promise.all([decide(manager, swap.id, 'approve'), decide(admin, swap.id, 'approve')]);
+    expect(twice.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect(await cell('a', 20)).toBe('E');
+    expect(await cell('b', 20)).toBe('L');
+  });
+});

@@ -1,0 +1,75 @@
+import { queryOptions } from '@tanstack/react-query';
+import {
+  type ClaimOpenShiftDto,
+  type OpenShiftDto,
+  PLANNING_ROUTES,
+  type ProposeSwapDto,
+  type RosterPeriodDto,
+  type SwapDecisionDto,
+  type SwapLinkViewDto,
+  type SwapOptionsDto,
+  type SwapPreviewDto,
+  type SwapRequestDto,
+  SWAP_ROUTES,
+  type SwapStatus,
+} from '@rotaplex/contracts';
+import { api, apiRequest } from '@/api/client';
+
+export const swapKeys = {
+  all: ['swaps'] as const,
+  list: (status: SwapStatus | '') => [...swapKeys.all, 'list', status] as const,
+  options: (periodId: string) => [...swapKeys.all, 'options', periodId] as const,
+  openShifts: () => [...swapKeys.all, 'open-shifts'] as const,
+  publishedPeriods: () => [...swapKeys.all, 'published-periods'] as const,
+  link: (token: string) => ['swap-link', token] as const,
+};
+
+/** Swap requests the caller takes part in (staff) or may approve (managers), newest first. */
+export const swapsQuery = (status: SwapStatus | '' = '') =>
+  queryOptions({
+    queryKey: swapKeys.list(status),
+    queryFn: ({ signal }) =>
+      api.get<SwapRequestDto[]>(SWAP_ROUTES.swaps, { status: status || undefined }, signal),
+  });
+
+/** Published periods of the caller's units (swaps and open shifts happen only on those). */
+export const publishedPeriodsQuery = () =>
+  queryOptions({
+    queryKey: swapKeys.publishedPeriods(),
+    queryFn: ({ signal }) =>
+      api.get<RosterPeriodDto[]>(PLANNING_ROUTES.rosterPeriods, { status: 'published' }, signal),
+  });
+
+export const swapOptionsQuery = (periodId: string) =>
+  queryOptions({
+    queryKey: swapKeys.options(periodId),
+    queryFn: ({ signal }) =>
+      api.get<SwapOptionsDto>(SWAP_ROUTES.swapOptions, { rosterPeriodId: periodId }, signal),
+    enabled: periodId !== '',
+  });
+
+export const openShiftsQuery = () =>
+  queryOptions({
+    queryKey: swapKeys.openShifts(),
+    queryFn: ({ signal }) => api.get<OpenShiftDto[]>(SWAP_ROUTES.openShifts, undefined, signal),
+  });
+
+/** What an e-mailed link decides (no sign-in; reading it changes nothing). */
+export const swapLinkQuery = (token: string) =>
+  queryOptions({
+    queryKey: swapKeys.link(token),
+    queryFn: ({ signal }) =>
+      apiRequest<SwapLinkViewDto>(SWAP_ROUTES.swapLink, { query: { token }, signal, auth: false }),
+    enabled: token !== '',
+    retry: false,
+  });
+
+export const previewSwap = (body: ProposeSwapDto) => api.post<SwapPreviewDto>(SWAP_ROUTES.swapPreview, body);
+export const proposeSwap = (body: ProposeSwapDto) => api.post<SwapRequestDto>(SWAP_ROUTES.swaps, body);
+export const decideSwap = (id: string, body: SwapDecisionDto) =>
+  api.post<SwapRequestDto>(SWAP_ROUTES.swapDecide(id), body);
+export const cancelSwap = (id: string) => api.post<SwapRequestDto>(SWAP_ROUTES.swapCancel(id));
+export const claimOpenShift = (body: ClaimOpenShiftDto) =>
+  api.post<SwapRequestDto>(SWAP_ROUTES.openShiftClaims, body);
+export const decideByLink = (token: string, body: SwapDecisionDto) =>
+  api.post<SwapRequestDto>(SWAP_ROUTES.swapLink, { token, ...body }, { auth: false });
