@@ -34,6 +34,10 @@ export function PlanningBoardPage() {
             <AppLink to={PATHS.rosterPeriods} inline>
               All roster periods
             </AppLink>
+            {' · '}
+            <AppLink to={PATHS.periodReports(p.id)} inline>
+              Reports
+            </AppLink>
           </>
         }
       />

@@ -2,11 +2,13 @@ import { queryOptions } from '@tanstack/react-query';
 import {
   MAX_PAGE_SIZE,
   PLANNING_ROUTES,
+  REQUESTS_ROUTES,
   SOLVING_ROUTES,
   type AssignmentCellRequest,
   type AssignmentGridDto,
   type CoverNeedsDto,
   type Page,
+  type PeriodRequestsDto,
   type PinCellRequest,
   type RosterPeriodDto,
   type SolveProgressDto,
@@ -23,6 +25,7 @@ export const boardKeys = {
   grid: (id: string) => ['assignments', id] as const,
   runs: (id: string) => ['solve-runs', id] as const,
   unitStaff: (unitId: string) => ['staff', 'unit-all', unitId] as const,
+  requests: (id: string) => ['requests', 'period', id] as const,
 };
 
 export const rosterPeriodQuery = (id: string) =>
@@ -45,17 +48,42 @@ export const solveRunsQuery = (periodId: string) =>
       api.get<SolveRunDto[]>(SOLVING_ROUTES.periodSolveRuns(periodId), undefined, signal),
   });
 
-/** The unit's staff (first 100 by name): skills and contracts for cover and hours. */
+/**
+ * Every item of a paged list: reads page 1, 2, … until it holds `total` items (or a page comes
+ * back empty, so a list that shrinks while it is read still ends).
+ */
+export async function readAllPages<T>(fetchPage: (page: number) => Promise<Page<T>>): Promise<T[]> {
+  const all: T[] = [];
+  for (let page = 1; ; page += 1) {
+    const batch = await fetchPage(page);
+    all.push(...batch.items);
+    if (batch.items.length === 0 || all.length >= batch.total) return all;
+  }
+}
+
+/** Every staff member of the unit (skills and contracts for cover and hours), MAX_PAGE_SIZE a page. */
+export const fetchAllUnitStaff = (unitId: string, signal?: AbortSignal) =>
+  readAllPages((page) =>
+    api.get<Page<StaffMemberDto>>(
+      PLANNING_ROUTES.staff,
+      { unitId, page, pageSize: MAX_PAGE_SIZE, sort: 'name' },
+      signal,
+    ),
+  );
+
 export const unitStaffQuery = (unitId: string) =>
   queryOptions({
     queryKey: boardKeys.unitStaff(unitId),
-    queryFn: ({ signal }) =>
-      api.get<Page<StaffMemberDto>>(
-        PLANNING_ROUTES.staff,
-        { unitId, pageSize: MAX_PAGE_SIZE, sort: 'name' },
-        signal,
-      ),
+    queryFn: ({ signal }) => fetchAllUnitStaff(unitId, signal),
     enabled: unitId !== '',
+  });
+
+/** The period's date requests, overlapping leave and availability (managers). */
+export const periodRequestsQuery = (periodId: string) =>
+  queryOptions({
+    queryKey: boardKeys.requests(periodId),
+    queryFn: ({ signal }) =>
+      api.get<PeriodRequestsDto>(REQUESTS_ROUTES.periodRequests(periodId), undefined, signal),
   });
 
 export const coverNeedsQuery = (unitId: string) =>

@@ -1,6 +1,12 @@
 import type { KeyboardEvent } from 'react';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
-import { PinFilled, WarningFilled } from '@fluentui/react-icons';
+import {
+  BeachRegular,
+  PersonFeedbackFilled,
+  PersonFeedbackRegular,
+  PinFilled,
+  WarningFilled,
+} from '@fluentui/react-icons';
 import type { AssignmentGridDto, ShiftTypeDto } from '@rotaplex/contracts';
 import { ShiftChip } from '@/features/planning/components/ShiftChip';
 import {
@@ -11,6 +17,7 @@ import {
   type HoursLine,
 } from '../utils/boardSummary';
 import { dayOfMonth, formatDay, formatWeekday } from '../utils/days';
+import { marksText, type CellMarks } from '../utils/requestMarks';
 
 const useStyles = makeStyles({
   scroller: { overflowX: 'auto', maxWidth: '100%' },
@@ -52,6 +59,10 @@ const useStyles = makeStyles({
     ':disabled': { cursor: 'default' },
   },
   flagged: { border: `${tokens.strokeWidthThin} solid ${tokens.colorPaletteRedBorder2}` },
+  leave: { backgroundColor: tokens.colorNeutralBackground5 },
+  leavePending: { opacity: 0.6 },
+  honoured: { color: tokens.colorPaletteGreenForeground1 },
+  notHonoured: { color: tokens.colorPaletteDarkOrangeForeground1 },
   warnIcon: { color: tokens.colorPaletteRedForeground1 },
   off: { color: tokens.colorNeutralForeground4 },
   short: { backgroundColor: tokens.colorPaletteRedBackground2, color: tokens.colorPaletteRedForeground2 },
@@ -64,7 +75,10 @@ const useStyles = makeStyles({
   none: { color: tokens.colorNeutralForeground3 },
   hours: { whiteSpace: 'nowrap', textAlign: 'right' },
   under: { color: tokens.colorPaletteRedForeground1 },
-  coverHead: { textAlign: 'left', backgroundColor: tokens.colorNeutralBackground2 },
+  coverHead: { backgroundColor: tokens.colorNeutralBackground2 },
+  // The heading spans every day; it stays at the left edge while the grid scrolls sideways.
+  coverTitle: { textAlign: 'left' },
+  stickyLeft: { position: 'sticky', left: tokens.spacingHorizontalXS },
 });
 
 /** Words beside each cover figure, so the state never rests on colour alone. */
@@ -85,6 +99,8 @@ export interface BoardGridProps {
   flagged: Set<string>;
   readOnly: boolean;
   onOpenCell: (staffMemberId: string, date: string) => void;
+  /** Date requests and leave per "staffMemberId|date" (empty while they load or when unreadable). */
+  marks?: Map<string, CellMarks>;
 }
 
 const isWeekend = (date: string) => [0, 6].includes(new Date(`${date}T00:00:00Z`).getUTCDay());
@@ -116,8 +132,18 @@ function moveFocus(event: KeyboardEvent<HTMLTableElement>) {
 }
 
 /** People by days with shift codes in their colours, hours against contract and cover against needs. */
-export function BoardGrid({ grid, shiftTypes, cover, hours, flagged, readOnly, onOpenCell }: BoardGridProps) {
+export function BoardGrid({
+  grid,
+  shiftTypes,
+  cover,
+  hours,
+  flagged,
+  readOnly,
+  onOpenCell,
+  marks,
+}: BoardGridProps) {
   const styles = useStyles();
+  const shiftCodes = new Map([...shiftTypes.values()].map((s) => [s.id, s.code]));
   return (
     <div className={styles.scroller}>
       <table className={styles.table} aria-label="Planning board" onKeyDown={moveFocus}>
@@ -152,17 +178,25 @@ export function BoardGrid({ grid, shiftTypes, cover, hours, flagged, readOnly, o
                   const date = grid.dates[c];
                   const shift = cell.shiftTypeId ? shiftTypes.get(cell.shiftTypeId) : undefined;
                   const hasFinding = flagged.has(`${row.staffMemberId}|${date}`);
+                  const mark = marks?.get(`${row.staffMemberId}|${date}`);
                   const label = [
                     row.name,
                     formatDay(date),
                     shift ? `${shift.code} ${shift.name}` : 'day off',
                     cell.pinned ? 'pinned' : '',
                     hasFinding ? 'has a rule finding' : '',
+                    ...marksText(mark, shiftCodes),
                   ]
                     .filter(Boolean)
                     .join(', ');
                   return (
-                    <td key={date} className={mergeClasses(isWeekend(date) && styles.weekend)}>
+                    <td
+                      key={date}
+                      className={mergeClasses(
+                        isWeekend(date) && styles.weekend,
+                        mark?.leave ? styles.leave : undefined,
+                      )}
+                    >
                       <button
                         type="button"
                         className={mergeClasses(styles.cell, hasFinding && styles.flagged)}
@@ -181,6 +215,13 @@ export function BoardGrid({ grid, shiftTypes, cover, hours, flagged, readOnly, o
                             ·
                           </span>
                         )}
+                        {mark?.leave && (
+                          <BeachRegular
+                            aria-hidden
+                            className={mark.leave.status === 'pending' ? styles.leavePending : undefined}
+                          />
+                        )}
+                        {mark && mark.requests.length > 0 && <RequestIcon marks={mark} styles={styles} />}
                         {cell.pinned && <PinFilled aria-hidden />}
                         {hasFinding && <WarningFilled aria-hidden className={styles.warnIcon} />}
                       </button>
@@ -202,7 +243,11 @@ export function BoardGrid({ grid, shiftTypes, cover, hours, flagged, readOnly, o
         <tbody aria-label="Cover against needs">
           <tr>
             <th scope="colgroup" colSpan={grid.dates.length + 2} className={styles.coverHead}>
-              Cover against needs (people on the shift / minimum–target)
+              <div className={styles.coverTitle}>
+                <span className={styles.stickyLeft}>
+                  Cover against needs (people on the shift / minimum–target)
+                </span>
+              </div>
             </th>
           </tr>
           {cover.map((line) => (
@@ -235,6 +280,15 @@ export function BoardGrid({ grid, shiftTypes, cover, hours, flagged, readOnly, o
         </tbody>
       </table>
     </div>
+  );
+}
+
+/** One icon for a cell's date requests: outlined and green when all are honoured, filled and orange if not. */
+function RequestIcon({ marks, styles }: { marks: CellMarks; styles: ReturnType<typeof useStyles> }) {
+  return marks.requests.every((r) => r.honoured) ? (
+    <PersonFeedbackRegular aria-hidden className={styles.honoured} />
+  ) : (
+    <PersonFeedbackFilled aria-hidden className={styles.notHonoured} />
   );
 }
 

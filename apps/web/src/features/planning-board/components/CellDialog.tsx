@@ -28,6 +28,8 @@ export interface CellDialogProps {
   onSave: (shiftTypeId: string | null) => Promise<unknown>;
   onPin: (pinned: boolean) => Promise<unknown>;
   onClose: () => void;
+  /** Shows the cell without Save or Pin (a published period, or while the solver works), saying why. */
+  readOnly?: string | null;
 }
 
 const OFF = '';
@@ -42,6 +44,7 @@ export function CellDialog({
   onSave,
   onPin,
   onClose,
+  readOnly = null,
 }: CellDialogProps) {
   const [value, setValue] = useState(cell.shiftTypeId ?? OFF);
   const [busy, setBusy] = useState(false);
@@ -63,7 +66,11 @@ export function CellDialog({
           </DialogTitle>
           <DialogContent>
             <Field label="Shift">
-              <Select value={value} onChange={(_, d) => setValue(d.value)} disabled={busy}>
+              <Select
+                value={value}
+                onChange={(_, d) => setValue(d.value)}
+                disabled={busy || readOnly !== null}
+              >
                 <option value={OFF}>Day off</option>
                 {shiftTypes.map((s) => (
                   <option key={s.id} value={s.id}>
@@ -77,6 +84,11 @@ export function CellDialog({
                 ? 'Pinned: a new Generate keeps this cell as it is.'
                 : 'Not pinned: a new Generate may change this cell.'}
             </p>
+            {readOnly && (
+              <MessageBar intent="info">
+                <MessageBarBody>{readOnly}</MessageBarBody>
+              </MessageBar>
+            )}
             {error && (
               <MessageBar intent="error">
                 <MessageBarBody>{error}</MessageBarBody>
@@ -89,20 +101,24 @@ export function CellDialog({
             )}
           </DialogContent>
           <DialogActions>
-            <Button
-              icon={cell.pinned ? <PinOffRegular /> : <PinRegular />}
-              disabled={busy}
-              onClick={() => run(() => onPin(!cell.pinned))}
-            >
-              {cell.pinned ? 'Unpin' : 'Pin'}
-            </Button>
-            <Button
-              appearance="primary"
-              disabled={busy || !changed}
-              onClick={() => run(() => onSave(value || null))}
-            >
-              Save shift
-            </Button>
+            {readOnly === null && (
+              <>
+                <Button
+                  icon={cell.pinned ? <PinOffRegular /> : <PinRegular />}
+                  disabled={busy}
+                  onClick={() => run(() => onPin(!cell.pinned))}
+                >
+                  {cell.pinned ? 'Unpin' : 'Pin'}
+                </Button>
+                <Button
+                  appearance="primary"
+                  disabled={busy || !changed}
+                  onClick={() => run(() => onSave(value || null))}
+                >
+                  Save shift
+                </Button>
+              </>
+            )}
             <Button onClick={onClose}>Close</Button>
           </DialogActions>
         </DialogBody>
