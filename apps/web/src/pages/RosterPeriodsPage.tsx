@@ -13,11 +13,13 @@ import {
   AddRegular,
   ArchiveRegular,
   CalendarLtrRegular,
+  DataBarVerticalRegular,
   DeleteRegular,
   EditRegular,
 } from '@fluentui/react-icons';
 import type { RosterPeriodDto, RosterPeriodStatus } from '@rotaplex/contracts';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useNavigate } from 'react-router-dom';
 import {
   archiveRosterPeriod,
   deleteRosterPeriod,
@@ -65,6 +67,7 @@ export function RosterPeriodsPage() {
   const [pending, setPending] = useState<Pending>(null);
   const notify = useNotify();
   const queryClient = useQueryClient();
+  const navigate = useNavigate();
   const change = useMutation({
     mutationFn: async ({ action, period }: NonNullable<Pending>): Promise<void> => {
       if (action === 'archive') await archiveRosterPeriod(period.id);
@@ -135,6 +138,11 @@ export function RosterPeriodsPage() {
                         <RowActions
                           name={`the period from ${fmt(p.startDate)}`}
                           actions={[
+                            {
+                              label: 'Reports',
+                              icon: <DataBarVerticalRegular />,
+                              onClick: () => navigate(PATHS.periodReports(p.id)),
+                            },
                             {
                               label: 'Edit dates',
                               icon: <EditRegular />,
