@@ -5,10 +5,11 @@ import react from '@vitejs/plugin-react';
 const here = fileURLToPath(new URL('.', import.meta.url));
 const fromHere = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
-// Heavy view libraries get chunks of their own so the shell stays small and they load with their route.
+// React gets a long-lived chunk of its own. Everything else is split by route (lazy pages and
+// views): FullCalendar and recharts then load only with the calendar and reports screens. Groups
+// for them pulled shared modules in and made the sign-in page preload them (measured with
+// `npm run bench:bundle`; see docs/benchmarks.md).
 const CHUNK_GROUPS: { name: string; test: RegExp }[] = [
-  { name: 'calendar', test: /node_modules[\\/]@fullcalendar[\\/]/ },
-  { name: 'charts', test: /node_modules[\\/](recharts|d3-[a-z]+|victory-vendor)[\\/]/ },
   { name: 'react', test: /node_modules[\\/](react|react-dom|react-router|react-router-dom|scheduler)[\\/]/ },
 ];
 
@@ -37,7 +38,7 @@ export default defineConfig({
     rolldownOptions: {
       output: {
         // `manualChunks` is deprecated in Vite 8 (Rolldown); `codeSplitting.groups` is its replacement.
-        codeSplitting: { includeDependenciesRecursively: false, groups: CHUNK_GROUPS },
+        codeSplitting: { groups: CHUNK_GROUPS },
       },
     },
   },
