@@ -11,6 +11,9 @@ import { dataSourceOptions } from './database/data-source-options';
 import { serialiseTransactions } from './database/serialised-transactions';
 import { DataSource } from 'typeorm';
 import { DemoModule } from './demo/demo.module';
+import { RequestsModule } from './requests/requests.module';
+import { SwapsModule } from './swaps/swaps.module';
+import { OpenShiftsModule } from './open-shifts/open-shifts.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { OrganisationModule } from './organisation/organisation.module';
@@ -24,6 +27,11 @@ import { CoverNeedsModule } from './cover-needs/cover-needs.module';
 import { RosterPeriodsModule } from './roster-periods/roster-periods.module';
 import { SolveRunsModule } from './solve-runs/solve-runs.module';
 import { AssignmentsModule } from './assignments/assignments.module';
+import { ReportsModule } from './reports/reports.module';
+import { OutboxModule } from './outbox/outbox.module';
+import { AuditModule } from './audit/audit.module';
+import { PublishingModule } from './publishing/publishing.module';
+import { MyRosterModule } from './my-roster/my-roster.module';
 
 @Module({})
 export class AppModule {
@@ -55,6 +63,14 @@ export class AppModule {
         RosterPeriodsModule,
         SolveRunsModule,
         AssignmentsModule,
+        ReportsModule,
+        OutboxModule,
+        AuditModule,
+        PublishingModule,
+        SwapsModule,
+        OpenShiftsModule,
+        MyRosterModule,
+        RequestsModule,
         DemoModule,
       ],
       providers: [

@@ -4,3 +4,8 @@ export * from './lib/dto';
 export * from './lib/users-query';
 export * from './lib/planning';
 export * from './lib/solving';
+export * from './lib/swaps';
+export * from './lib/reports';
+export * from './lib/requests';
+export * from './lib/publishing';
+export * from './lib/my-roster';

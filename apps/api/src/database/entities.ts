@@ -1,4 +1,5 @@
 import { OneTimeTokenEntity } from '../auth/one-time-token.entity';
+import { SwapLinkTokenEntity, SwapRequestEntity } from '../swaps/swap-request.entity';
 import { RefreshTokenEntity } from '../auth/refresh-token.entity';
 import { MailMessageEntity } from '../mail/mail-message.entity';
 import { OrganisationEntity } from '../organisation/organisation.entity';
@@ -12,6 +13,11 @@ import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { AssignmentEntity } from '../assignments/assignment.entity';
+import { CalendarFeedEntity, CalendarFeedEventEntity } from '../my-roster/calendar-feed.entity';
+import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from '../requests/requests.entities';
+import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
+import { AuditEntryEntity } from '../audit/audit-entry.entity';
+import { RosterPublicationEntity } from '../publishing/roster-publication.entity';
 
 /** Every entity of the schema; the migrations in ./migrations must produce exactly these tables. */
 export const ENTITIES = [
@@ -30,4 +36,14 @@ export const ENTITIES = [
   RosterPeriodEntity,
   SolveRunEntity,
   AssignmentEntity,
+  CalendarFeedEntity,
+  CalendarFeedEventEntity,
+  OutboxMessageEntity,
+  AuditEntryEntity,
+  RosterPublicationEntity,
+  AvailabilityCellEntity,
+  DateRequestEntity,
+  LeaveRequestEntity,
+  SwapRequestEntity,
+  SwapLinkTokenEntity,
 ];

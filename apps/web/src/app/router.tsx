@@ -11,6 +11,7 @@ import {
 } from '@/features/mailbox/api/mailbox.queries';
 import { organisationQuery } from '@/features/organisation/api/organisation.queries';
 import { contractPresetsQuery, contractsQuery, skillsQuery } from '@/features/planning/api/planning.queries';
+import { periodReportQuery } from '@/features/reports/api/reports.queries';
 import { unitsQuery } from '@/features/units/api/units.queries';
 import { usersListQuery } from '@/features/users/api/users.queries';
 import { readUsersListParams } from '@/features/users/usersListParams';
@@ -52,6 +53,10 @@ export function createRouter(queryClient: QueryClient) {
           lazy: page(() => import('@/pages/ResetPasswordPage'), 'ResetPasswordPage'),
         },
         {
+          path: PATHS.swapDecision,
+          lazy: page(() => import('@/pages/SwapDecisionPage'), 'SwapDecisionPage'),
+        },
+        {
           element: <RequireSession />,
           children: [
             {
@@ -66,6 +71,15 @@ export function createRouter(queryClient: QueryClient) {
                       lazy: page(() => import('@/pages/HomePage'), 'HomePage'),
                     },
                     { path: PATHS.profile, lazy: page(() => import('@/pages/ProfilePage'), 'ProfilePage') },
+                    {
+                      element: <RequirePermission permission="rosters:read" />,
+                      children: [
+                        {
+                          path: PATHS.myRoster,
+                          lazy: page(() => import('@/pages/MyRosterPage'), 'MyRosterPage'),
+                        },
+                      ],
+                    },
                     {
                       element: <RequirePermission permission="users:read" />,
                       children: [
@@ -117,6 +131,10 @@ export function createRouter(queryClient: QueryClient) {
                           lazy: page(() => import('@/pages/PlanningBoardPage'), 'PlanningBoardPage'),
                         },
                         {
+                          path: ROUTE_PATTERNS.periodAudit,
+                          lazy: page(() => import('@/pages/AuditPage'), 'AuditPage'),
+                        },
+                        {
                           path: PATHS.coverNeeds,
                           loader: prefetch(() =>
                             Promise.all([
@@ -161,6 +179,55 @@ export function createRouter(queryClient: QueryClient) {
                       ],
                     },
                     {
+                      element: <RequirePermission permission="requests:own" />,
+                      children: [
+                        { path: PATHS.swaps, lazy: page(() => import('@/pages/SwapsPage'), 'SwapsPage') },
+                        {
+                          path: PATHS.myAvailability,
+                          lazy: page(() => import('@/pages/MyAvailabilityPage'), 'MyAvailabilityPage'),
+                        },
+                        {
+                          path: PATHS.myRequests,
+                          lazy: page(() => import('@/pages/MyRequestsPage'), 'MyRequestsPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="requests:approve" />,
+                      children: [
+                        {
+                          path: PATHS.swapApprovals,
+                          lazy: page(() => import('@/pages/SwapsPage'), 'SwapApprovalsPage'),
+                        },
+                        {
+                          path: PATHS.requests,
+                          lazy: page(() => import('@/pages/RequestsPage'), 'RequestsPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="rosters:read" />,
+                      children: [
+                        {
+                          path: PATHS.openShifts,
+                          lazy: page(() => import('@/pages/OpenShiftsPage'), 'OpenShiftsPage'),
+                        },
+                      ],
+                    },
+                    {
+                      element: <RequirePermission permission="reports:read" />,
+                      children: [
+                        {
+                          path: ROUTE_PATTERNS.periodReports,
+                          loader: ({ params }) =>
+                            prefetch(() =>
+                              queryClient.prefetchQuery(periodReportQuery(params.periodId ?? '')),
+                            )(),
+                          lazy: page(() => import('@/pages/ReportsPage'), 'ReportsPage'),
+                        },
+                      ],
+                    },
+                    {
                       element: <RequirePermission permission="mailbox:read" />,
                       children: [
                         {
@@ -178,6 +245,7 @@ export function createRouter(queryClient: QueryClient) {
                             )(),
                           lazy: page(() => import('@/pages/MailMessagePage'), 'MailMessagePage'),
                         },
+                        { path: PATHS.outbox, lazy: page(() => import('@/pages/OutboxPage'), 'OutboxPage') },
                       ],
                     },
                     { path: '*', lazy: page(() => import('@/pages/NotFoundPage'), 'NotFoundPage') },

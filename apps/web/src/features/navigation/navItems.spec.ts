@@ -13,17 +13,31 @@ describe('navigation by role', () => {
   it('gives administrators every administration page', () => {
     expect(labels('admin')).toEqual([
       'Overview',
+      'My roster',
+      'Open shifts',
+      'Swap approvals',
+      'Requests',
       'People',
       'Units',
       'Organisation',
       'Mailbox',
+      'Outbox',
       'Profile',
       ...PLANNING,
     ]);
   });
 
   it('gives managers the people of their units and no organisation settings', () => {
-    expect(labels('manager')).toEqual(['Overview', 'People', 'Profile', ...PLANNING]);
+    expect(labels('manager')).toEqual([
+      'Overview',
+      'My roster',
+      'Open shifts',
+      'Swap approvals',
+      'Requests',
+      'People',
+      'Profile',
+      ...PLANNING,
+    ]);
     expect(navSectionsFor(permissionsOf('manager')).map((s) => s.title)).toEqual([
       'Workspace',
       'Planning',
@@ -32,15 +46,34 @@ describe('navigation by role', () => {
   });
 
   it('gives staff no administration section at all', () => {
-    expect(labels('staff')).toEqual(['Overview', 'Profile']);
+    expect(labels('staff')).toEqual([
+      'Overview',
+      'My roster',
+      'Swaps',
+      'Open shifts',
+      'My availability',
+      'My requests',
+      'Profile',
+    ]);
     expect(navSectionsFor(permissionsOf('staff')).map((s) => s.title)).toEqual(['Workspace']);
   });
 
   it('protects each administration path with the permission of its item', () => {
     expect(permissionForPath(PATHS.users)).toBe('users:read');
     expect(permissionForPath(PATHS.mailboxMessage('abc'))).toBe('mailbox:read');
+    // Issue 5, item 5: admins see the outbox and its failures; planners read a period's audit trail.
+    expect(permissionForPath(PATHS.outbox)).toBe('mailbox:read');
+    expect(permissionForPath(PATHS.periodAudit('abc'))).toBe('rosters:plan');
     expect(permissionForPath(PATHS.profile)).toBeUndefined();
+    expect(permissionForPath(PATHS.myRoster)).toBe('rosters:read');
     expect(permissionForPath(PATHS.coverNeeds)).toBe('rosters:plan');
+    // Issue 5, items 3 and 4: staff propose swaps and claim open shifts; managers approve them.
+    expect(permissionForPath(PATHS.swaps)).toBe('requests:own');
+    expect(permissionForPath(PATHS.swapApprovals)).toBe('requests:approve');
+    // Issue 5, item 1: staff enter their own availability and requests; managers decide leave.
+    expect(permissionForPath(PATHS.myAvailability)).toBe('requests:own');
+    expect(permissionForPath(PATHS.myRequests)).toBe('requests:own');
+    expect(permissionForPath(PATHS.requests)).toBe('requests:approve');
     expect(permissionForPath(`${PATHS.staff}?unit=abc`)).toBe('rosters:plan');
   });
 });

@@ -7,7 +7,15 @@ export type NavKey =
   | 'units'
   | 'organisation'
   | 'mailbox'
+  | 'outbox'
   | 'profile'
+  | 'myRoster'
+  | 'swaps'
+  | 'openShifts'
+  | 'swapApprovals'
+  | 'myAvailability'
+  | 'myRequests'
+  | 'requests'
   | 'rosterPeriods'
   | 'coverNeeds'
   | 'staff'
@@ -43,6 +51,62 @@ export const NAV_ITEMS: readonly NavItem[] = [
     description: 'Your units, your role and what you can do.',
   },
   {
+    key: 'myRoster',
+    label: 'My roster',
+    path: PATHS.myRoster,
+    section: 'workspace',
+    permission: 'rosters:read',
+    description: "Your published shifts and your team's in a calendar, and your calendar feed.",
+  },
+  {
+    key: 'swaps',
+    label: 'Swaps',
+    path: PATHS.swaps,
+    section: 'workspace',
+    permission: 'requests:own',
+    description: 'Swap a published shift with a colleague or offer it; answer their requests.',
+  },
+  {
+    key: 'openShifts',
+    label: 'Open shifts',
+    path: PATHS.openShifts,
+    section: 'workspace',
+    permission: 'rosters:read',
+    description: 'Published shifts still short of people; staff claim the ones they can take.',
+  },
+  {
+    key: 'swapApprovals',
+    label: 'Swap approvals',
+    path: PATHS.swapApprovals,
+    section: 'workspace',
+    permission: 'requests:approve',
+    description: 'Agreed swaps and open-shift claims waiting for a manager.',
+  },
+  {
+    key: 'myAvailability',
+    label: 'My availability',
+    path: PATHS.myAvailability,
+    section: 'workspace',
+    permission: 'requests:own',
+    description: 'Your usual week: when you are available, would rather not work, or cannot.',
+  },
+  {
+    key: 'myRequests',
+    label: 'My requests',
+    path: PATHS.myRequests,
+    section: 'workspace',
+    permission: 'requests:own',
+    description: 'Ask for shifts or days off in the next roster, request leave and see its status.',
+  },
+  {
+    key: 'requests',
+    label: 'Requests',
+    path: PATHS.requests,
+    section: 'workspace',
+    permission: 'requests:approve',
+    description: "Your units' date requests and leave; approve or decline leave.",
+  },
+  {
     key: 'users',
     label: 'People',
     path: PATHS.users,
@@ -73,6 +137,14 @@ export const NAV_ITEMS: readonly NavItem[] = [
     section: 'administration',
     permission: 'mailbox:read',
     description: 'Messages Rotaplex has sent, as received by the local mail catcher.',
+  },
+  {
+    key: 'outbox',
+    label: 'Outbox',
+    path: PATHS.outbox,
+    section: 'administration',
+    permission: 'mailbox:read',
+    description: 'Every e-mail on its way out, with retries and failures.',
   },
   {
     key: 'profile',
