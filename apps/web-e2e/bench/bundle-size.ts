@@ -72,6 +72,31 @@ async function main(): Promise<void> {
             .catch(() => undefined);
         },
       ],
+      [
+        'reports',
+        async () => {
+          await page.goto(`/planning/periods/${period.id}/reports`);
+          await page
+            .locator('svg.recharts-surface')
+            .first()
+            .waitFor({ timeout: 20_000 })
+            .catch(() => undefined);
+        },
+      ],
+      [
+        'my roster (staff)',
+        async () => {
+          await page.context().clearCookies();
+          await page.goto('/sign-in');
+          await signIn(page, 'staff@example.com');
+          await page.goto('/my-roster');
+          await page
+            .locator('.fc')
+            .first()
+            .waitFor({ timeout: 10_000 })
+            .catch(() => undefined);
+        },
+      ],
     ];
     const rows: (string | number)[][] = [];
     let signInFiles: Set<string> | null = null;
