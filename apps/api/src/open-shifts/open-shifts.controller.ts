@@ -1,9 +1,10 @@
 import { Body, Controller, Get, Post, Query } from '@nestjs/common';
 import {
   ApiConflictResponse,
+  ApiCreatedResponse,
   ApiOkResponse,
-  ApiPropertyOptional,
   ApiProperty,
+  ApiPropertyOptional,
   ApiTags,
 } from '@nestjs/swagger';
 import { type ClaimOpenShiftDto, type OpenShiftDto, type SwapRequestDto } from '@rotaplex/contracts';
@@ -62,6 +63,7 @@ export class OpenShiftsController {
 
   @Post('claims')
   @RequirePermissions('requests:own')
+  @ApiCreatedResponse({ description: 'The claim, waiting for a manager' })
   @ApiConflictResponse({ description: 'The shift is no longer open' })
   claim(@CurrentUser() user: AuthUser, @Body() body: ClaimOpenShiftBody): Promise<SwapRequestDto> {
     return this.openShifts.claim(user, body);

@@ -1,5 +1,11 @@
 import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
-import { ApiConflictResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import {
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiOkResponse,
+  ApiTags,
+  ApiUnprocessableEntityResponse,
+} from '@nestjs/swagger';
 import {
   type SwapLinkViewDto,
   type SwapOptionsDto,
@@ -50,6 +56,7 @@ export class SwapsController {
 
   @Post()
   @RequirePermissions('requests:own')
+  @ApiCreatedResponse({ description: 'The request, waiting for the colleague' })
   @ApiUnprocessableEntityResponse({ description: 'The change breaks a hard rule (findings in the body)' })
   propose(@CurrentUser() user: AuthUser, @Body() body: ProposeSwapBody): Promise<SwapRequestDto> {
     return this.swaps.propose(user, body);
@@ -57,6 +64,7 @@ export class SwapsController {
 
   @Get(':id')
   @Authenticated()
+  @ApiOkResponse({ description: 'One swap, offer or open-shift claim the caller takes part in or manages' })
   get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SwapRequestDto> {
     return this.swaps.get(user, id);
   }
@@ -64,6 +72,7 @@ export class SwapsController {
   @Post(':id/decision')
   @HttpCode(200)
   @Authenticated()
+  @ApiOkResponse({ description: 'The request after the decision' })
   @ApiConflictResponse({ description: 'Already decided, or the roster changed since the proposal' })
   decide(
     @CurrentUser() user: AuthUser,
@@ -76,6 +85,7 @@ export class SwapsController {
   @Post(':id/cancel')
   @HttpCode(200)
   @Authenticated() // only the proposer may cancel: checked by the service
+  @ApiOkResponse({ description: 'The cancelled request' })
   cancel(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SwapRequestDto> {
     return this.swaps.cancel(user, id);
   }
