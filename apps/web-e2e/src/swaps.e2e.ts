@@ -148,4 +148,16 @@ describe('swap approved by e-mail', () => {
       return (await mine.getByText('Approved').count()) > 0 ? true : undefined;
     }, 'the approved swap in A’s list');
   });
+
+  it('both people’s calendars show the swapped shifts', async () => {
+    const mineOn = async (session: Session) => {
+      await session.page.goto(`/my-roster?date=${START}`);
+      const own = session.page.getByTestId('my-roster-calendar').locator('[data-mine="true"]');
+      await own.first().waitFor();
+      return [...new Set(await own.evaluateAll((els) => els.map((el) => el.getAttribute('aria-label'))))];
+    };
+    expect(await mineOn(staffA)).toEqual([`Your shift, Early (E), ${START} 07:00 to 15:00`]);
+    await signIn(staffB.page, 'priya.wendover@example.com');
+    expect(await mineOn(staffB)).toEqual([`Your shift, Late (L), ${START} 14:30 to 22:30`]);
+  });
 });
