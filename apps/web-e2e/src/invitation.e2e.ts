@@ -97,7 +97,15 @@ describe('inviting a person', () => {
     await page.getByText('The link could not be used').waitFor();
 
     await signIn(page, NEWCOMER.email, NEW_PASSWORD);
-    expect(await navLinks(page)).toEqual(['Overview', 'Profile']);
+    expect(await navLinks(page)).toEqual([
+      'Overview',
+      'My roster',
+      'Swaps',
+      'Open shifts',
+      'My availability',
+      'My requests',
+      'Profile',
+    ]);
     await page.getByRole('heading', { level: 1, name: /, Jordan$/ }).waitFor();
     await page.getByText('Ward 7 Acute Medicine').first().waitFor();
   });

@@ -26,6 +26,10 @@ describe('signing in by role', () => {
     await signIn(page, 'admin@example.com');
     expect(await navLinks(page)).toEqual([
       'Overview',
+      'My roster',
+      'Open shifts',
+      'Swap approvals',
+      'Requests',
       'Profile',
       'Roster periods',
       'Cover needs',
@@ -37,6 +41,7 @@ describe('signing in by role', () => {
       'Units',
       'Organisation',
       'Mailbox',
+      'Outbox',
     ]);
     await page.getByRole('heading', { name: 'Administration' }).waitFor();
     await page.getByRole('banner').getByText('Rotaplex', { exact: true }).waitFor();
@@ -83,6 +88,10 @@ describe('signing in by role', () => {
     await signIn(page, 'manager@example.com');
     expect(await navLinks(page)).toEqual([
       'Overview',
+      'My roster',
+      'Open shifts',
+      'Swap approvals',
+      'Requests',
       'Profile',
       'Roster periods',
       'Cover needs',
@@ -108,7 +117,15 @@ describe('signing in by role', () => {
   it('gives staff no administration and refuses the people page', async () => {
     const { page } = browser;
     await signIn(page, 'staff@example.com');
-    expect(await navLinks(page)).toEqual(['Overview', 'Profile']);
+    expect(await navLinks(page)).toEqual([
+      'Overview',
+      'My roster',
+      'Swaps',
+      'Open shifts',
+      'My availability',
+      'My requests',
+      'Profile',
+    ]);
     expect(await page.getByRole('heading', { name: 'Administration' }).count()).toBe(0);
     await page.goto('/admin/users');
     await page.getByRole('heading', { level: 1, name: "You don't have access to this page" }).waitFor();
