@@ -1,16 +1,5 @@
 import { useState } from 'react';
-import {
-  Badge,
-  Button,
-  makeStyles,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-  tokens,
-} from '@fluentui/react-components';
+import { Badge, Button, makeStyles, TableCell, TableRow, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, HistoryRegular } from '@fluentui/react-icons';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
@@ -20,20 +9,12 @@ import { PATHS } from '@/app/paths';
 import { rosterPeriodQuery } from '@/features/planning-board/api/board.queries';
 import { auditQuery, DEFAULT_AUDIT_PAGE, downloadExport } from '@/features/publishing/api/publishing.queries';
 import { AppLink } from '@/ui/AppLink';
+import { PagedTable, TablePanel } from '@/ui/DataTable';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
-import { TableSkeleton } from '@/ui/LoadingState';
 import { PageHeader } from '@/ui/PageHeader';
-import { Pagination } from '@/ui/Pagination';
 
 const useStyles = makeStyles({
-  panel: {
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalL,
-    overflowX: 'auto',
-  },
   when: { whiteSpace: 'nowrap', color: tokens.colorNeutralForeground3 },
   details: { fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground3 },
 });
@@ -89,52 +70,37 @@ export function AuditPage() {
           </Button>
         }
       />
-      <section className={styles.panel} aria-label="Audit entries">
+      <TablePanel label="Audit entries">
         {exportError && <ErrorBanner error={new Error(`The export failed: ${exportError}`)} />}
         {period.isError && <ErrorBanner error={period.error} onRetry={() => void period.refetch()} />}
         {trail.isError && <ErrorBanner error={trail.error} onRetry={() => void trail.refetch()} />}
-        {trail.isPending && <TableSkeleton label="Loading the audit trail" />}
-        {trail.data && trail.data.items.length === 0 && (
-          <EmptyState icon={<HistoryRegular />} title="Nothing recorded yet">
-            Entries appear here once the roster is published.
-          </EmptyState>
-        )}
-        {trail.data && trail.data.items.length > 0 && (
-          <>
-            <Table aria-label="Audit entries">
-              <TableHeader>
-                <TableRow>
-                  <TableHeaderCell>When</TableHeaderCell>
-                  <TableHeaderCell>What</TableHeaderCell>
-                  <TableHeaderCell>Who</TableHeaderCell>
-                  <TableHeaderCell>Summary</TableHeaderCell>
-                </TableRow>
-              </TableHeader>
-              <TableBody>
-                {trail.data.items.map((entry) => (
-                  <TableRow key={entry.id}>
-                    <TableCell className={styles.when}>{when.format(new Date(entry.at))}</TableCell>
-                    <TableCell>
-                      <Badge appearance="tint">{KIND_LABELS[entry.kind]}</Badge>
-                    </TableCell>
-                    <TableCell>{entry.actorName}</TableCell>
-                    <TableCell>
-                      {entry.summary} <span className={styles.details}>{cellCount(entry)}</span>
-                    </TableCell>
-                  </TableRow>
-                ))}
-              </TableBody>
-            </Table>
-            <Pagination
-              label="Audit entries"
-              page={page}
-              pageSize={params.pageSize}
-              total={trail.data.total}
-              onPageChange={setPage}
-            />
-          </>
-        )}
-      </section>
+        <PagedTable
+          result={trail}
+          loadingLabel="Loading the audit trail"
+          empty={
+            <EmptyState icon={<HistoryRegular />} title="Nothing recorded yet">
+              Entries appear here once the roster is published.
+            </EmptyState>
+          }
+          label="Audit entries"
+          columns={['When', 'What', 'Who', 'Summary']}
+          page={page}
+          pageSize={params.pageSize}
+          onPageChange={setPage}
+          row={(entry) => (
+            <TableRow key={entry.id}>
+              <TableCell className={styles.when}>{when.format(new Date(entry.at))}</TableCell>
+              <TableCell>
+                <Badge appearance="tint">{KIND_LABELS[entry.kind]}</Badge>
+              </TableCell>
+              <TableCell>{entry.actorName}</TableCell>
+              <TableCell>
+                {entry.summary} <span className={styles.details}>{cellCount(entry)}</span>
+              </TableCell>
+            </TableRow>
+          )}
+        />
+      </TablePanel>
     </>
   );
 }

@@ -11,6 +11,7 @@ import { usersCountQuery } from '@/features/users/api/users.queries';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { TableSkeleton } from '@/ui/LoadingState';
+import { useSurfaceStyles } from '@/ui/surfaceStyles';
 
 const useStyles = makeStyles({
   hello: {
@@ -25,15 +26,6 @@ const useStyles = makeStyles({
     gridTemplateColumns: 'repeat(auto-fit, minmax(20rem, 1fr))',
     gap: tokens.spacingHorizontalXL,
     marginBottom: tokens.spacingVerticalXXL,
-  },
-  panel: {
-    display: 'flex',
-    flexDirection: 'column',
-    gap: tokens.spacingVerticalM,
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalXL,
   },
   panelHead: {
     display: 'flex',
@@ -71,6 +63,7 @@ function greeting(now: Date): string {
 
 export function HomePage() {
   const styles = useStyles();
+  const surface = useSurfaceStyles();
   const me = useCurrentUser();
   const units = useQuery(unitsQuery());
   const canReadUsers = useCan('users:read');
@@ -88,7 +81,7 @@ export function HomePage() {
         </Body1>
       </div>
       <div className={styles.grid}>
-        <section className={styles.panel} aria-labelledby="home-role">
+        <section className={surface.panel} aria-labelledby="home-role">
           <div className={styles.panelHead}>
             <Subtitle1 as="h2" id="home-role">
               Your role
@@ -109,7 +102,7 @@ export function HomePage() {
             ))}
           </ul>
         </section>
-        <section className={styles.panel} aria-labelledby="home-units">
+        <section className={surface.panel} aria-labelledby="home-units">
           <div className={styles.panelHead}>
             <Subtitle1 as="h2" id="home-units">
               {isUnitScoped(me.role) ? 'Your units' : 'Units in your organisation'}

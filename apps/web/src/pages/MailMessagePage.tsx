@@ -20,18 +20,10 @@ import { linksInText, sandboxDocument } from '@/features/mailbox/messageLinks';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { LoadingState } from '@/ui/LoadingState';
 import { PageHeader } from '@/ui/PageHeader';
+import { useSurfaceStyles } from '@/ui/surfaceStyles';
 
 const useStyles = makeStyles({
   back: { marginBottom: tokens.spacingVerticalM },
-  panel: {
-    display: 'flex',
-    flexDirection: 'column',
-    gap: tokens.spacingVerticalM,
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalXL,
-  },
   meta: {
     display: 'grid',
     gridTemplateColumns: 'max-content 1fr',
@@ -70,6 +62,7 @@ const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'full', timeStyle: 'm
 
 export function MailMessagePage() {
   const styles = useStyles();
+  const surface = useSurfaceStyles();
   const navigate = useNavigate();
   const { messageId = '' } = useParams();
   const message = useQuery(mailboxMessageQuery(messageId));
@@ -93,7 +86,7 @@ export function MailMessagePage() {
       {data && (
         <>
           <PageHeader title={data.subject || '(no subject)'} />
-          <article className={styles.panel} aria-label="Message">
+          <article className={surface.panel} aria-label="Message">
             <dl className={styles.meta}>
               <dt className={styles.term}>From</dt>
               <dd className={styles.detail}>{data.from}</dd>

@@ -6,11 +6,7 @@ import {
   Field,
   makeStyles,
   Option,
-  Table,
-  TableBody,
   TableCell,
-  TableHeader,
-  TableHeaderCell,
   TableRow,
   tokens,
 } from '@fluentui/react-components';
@@ -25,20 +21,12 @@ import {
   retryOutboxMessage,
 } from '@/features/outbox/api/outbox.queries';
 import { AppLink } from '@/ui/AppLink';
+import { PagedTable, TablePanel } from '@/ui/DataTable';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
-import { TableSkeleton } from '@/ui/LoadingState';
 import { PageHeader } from '@/ui/PageHeader';
-import { Pagination } from '@/ui/Pagination';
 
 const useStyles = makeStyles({
-  panel: {
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalL,
-    overflowX: 'auto',
-  },
   filter: { maxWidth: '240px', marginBottom: tokens.spacingVerticalM },
   when: { whiteSpace: 'nowrap', color: tokens.colorNeutralForeground3 },
   error: { fontSize: tokens.fontSizeBase200, color: tokens.colorPaletteRedForeground1 },
@@ -96,7 +84,7 @@ export function OutboxPage() {
           </Button>
         }
       />
-      <section className={styles.panel} aria-label="Outbox messages">
+      <TablePanel label="Outbox messages">
         <Field label="Show" className={styles.filter}>
           <Dropdown
             value={status ? STATUS_TEXT[status] : 'All messages'}
@@ -116,75 +104,59 @@ export function OutboxPage() {
         </Field>
         {list.isError && <ErrorBanner error={list.error} onRetry={() => void list.refetch()} />}
         {retry.isError && <ErrorBanner error={retry.error} />}
-        {list.isPending && <TableSkeleton label="Loading the outbox" />}
-        {list.data && list.data.items.length === 0 && (
-          <EmptyState icon={<MailInboxRegular />} title="Nothing here">
-            {status ? 'No message is in this state.' : 'Messages appear here as soon as Rotaplex sends one.'}
-          </EmptyState>
-        )}
-        {list.data && list.data.items.length > 0 && (
-          <>
-            <Table aria-label="Outbox messages">
-              <TableHeader>
-                <TableRow>
-                  <TableHeaderCell>Status</TableHeaderCell>
-                  <TableHeaderCell>Subject</TableHeaderCell>
-                  <TableHeaderCell>To</TableHeaderCell>
-                  <TableHeaderCell>Queued</TableHeaderCell>
-                  <TableHeaderCell>Attempts</TableHeaderCell>
-                  <TableHeaderCell>
-                    <span className="visually-hidden">Actions</span>
-                  </TableHeaderCell>
-                </TableRow>
-              </TableHeader>
-              <TableBody>
-                {list.data.items.map((m) => (
-                  <TableRow key={m.id}>
-                    <TableCell>
-                      <Badge appearance="tint" color={STATUS_COLOUR[m.status]}>
-                        {STATUS_TEXT[m.status]}
-                      </Badge>
-                    </TableCell>
-                    <TableCell>
-                      {m.subject}
-                      {m.lastError && m.status !== 'sent' && (
-                        <div className={styles.error}>
-                          {m.lastError}
-                          {m.status === 'pending' && m.nextAttemptAt
-                            ? ` · next try ${when.format(new Date(m.nextAttemptAt))}`
-                            : ''}
-                        </div>
-                      )}
-                    </TableCell>
-                    <TableCell>{m.to}</TableCell>
-                    <TableCell className={styles.when}>{when.format(new Date(m.createdAt))}</TableCell>
-                    <TableCell>{m.attempts}</TableCell>
-                    <TableCell>
-                      {(m.status === 'failed' || m.status === 'pending') && (
-                        <Button
-                          size="small"
-                          icon={<ArrowRepeatAllRegular />}
-                          disabled={retry.isPending}
-                          onClick={() => retry.mutate(m.id)}
-                        >
-                          Retry now
-                        </Button>
-                      )}
-                    </TableCell>
-                  </TableRow>
-                ))}
-              </TableBody>
-            </Table>
-            <Pagination
-              label="Outbox messages"
-              page={page}
-              pageSize={params.pageSize}
-              total={list.data.total}
-              onPageChange={setPage}
-            />
-          </>
-        )}
-      </section>
+        <PagedTable
+          result={list}
+          loadingLabel="Loading the outbox"
+          empty={
+            <EmptyState icon={<MailInboxRegular />} title="Nothing here">
+              {status
+                ? 'No message is in this state.'
+                : 'Messages appear here as soon as Rotaplex sends one.'}
+            </EmptyState>
+          }
+          label="Outbox messages"
+          columns={['Status', 'Subject', 'To', 'Queued', 'Attempts']}
+          actionsColumn
+          page={page}
+          pageSize={params.pageSize}
+          onPageChange={setPage}
+          row={(m) => (
+            <TableRow key={m.id}>
+              <TableCell>
+                <Badge appearance="tint" color={STATUS_COLOUR[m.status]}>
+                  {STATUS_TEXT[m.status]}
+                </Badge>
+              </TableCell>
+              <TableCell>
+                {m.subject}
+                {m.lastError && m.status !== 'sent' && (
+                  <div className={styles.error}>
+                    {m.lastError}
+                    {m.status === 'pending' && m.nextAttemptAt
+                      ? ` · next try ${when.format(new Date(m.nextAttemptAt))}`
+                      : ''}
+                  </div>
+                )}
+              </TableCell>
+              <TableCell>{m.to}</TableCell>
+              <TableCell className={styles.when}>{when.format(new Date(m.createdAt))}</TableCell>
+              <TableCell>{m.attempts}</TableCell>
+              <TableCell>
+                {(m.status === 'failed' || m.status === 'pending') && (
+                  <Button
+                    size="small"
+                    icon={<ArrowRepeatAllRegular />}
+                    disabled={retry.isPending}
+                    onClick={() => retry.mutate(m.id)}
+                  >
+                    Retry now
+                  </Button>
+                )}
+              </TableCell>
+            </TableRow>
+          )}
+        />
+      </TablePanel>
     </>
   );
 }

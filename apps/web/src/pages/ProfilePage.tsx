@@ -5,6 +5,7 @@ import { useCurrentUser } from '@/features/auth/hooks/useCurrentUser';
 import { ChangePasswordForm } from '@/features/profile/components/ChangePasswordForm';
 import { unitsQuery } from '@/features/units/api/units.queries';
 import { PageHeader } from '@/ui/PageHeader';
+import { useSurfaceStyles } from '@/ui/surfaceStyles';
 
 const useStyles = makeStyles({
   grid: {
@@ -13,30 +14,13 @@ const useStyles = makeStyles({
     gap: tokens.spacingHorizontalXL,
     alignItems: 'start',
   },
-  panel: {
-    display: 'flex',
-    flexDirection: 'column',
-    gap: tokens.spacingVerticalM,
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalXL,
-  },
   identity: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalL },
-  meta: {
-    display: 'grid',
-    gridTemplateColumns: 'max-content 1fr',
-    columnGap: tokens.spacingHorizontalL,
-    rowGap: tokens.spacingVerticalS,
-    margin: 0,
-  },
-  term: { color: tokens.colorNeutralForeground3 },
-  detail: { margin: 0 },
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
 export function ProfilePage() {
   const styles = useStyles();
+  const surface = useSurfaceStyles();
   const me = useCurrentUser();
   const units = useQuery(unitsQuery());
   const unitNames = me.unitIds.map((id) => units.data?.find((u) => u.id === id)?.name).filter(Boolean);
@@ -45,7 +29,7 @@ export function ProfilePage() {
     <>
       <PageHeader title="Profile" description="Your account in Rotaplex." />
       <div className={styles.grid}>
-        <section className={styles.panel} aria-labelledby="profile-details">
+        <section className={surface.panel} aria-labelledby="profile-details">
           <div className={styles.identity}>
             <Avatar name={me.displayName} size={56} color="colorful" aria-hidden />
             <div>
@@ -55,13 +39,13 @@ export function ProfilePage() {
               <Body1 className={styles.muted}>{me.email}</Body1>
             </div>
           </div>
-          <dl className={styles.meta}>
-            <dt className={styles.term}>Role</dt>
-            <dd className={styles.detail}>{ROLE_LABELS[me.role]}</dd>
-            <dt className={styles.term}>Organisation</dt>
-            <dd className={styles.detail}>{me.organisation.name}</dd>
-            <dt className={styles.term}>Units</dt>
-            <dd className={styles.detail}>
+          <dl className={surface.facts}>
+            <dt className={surface.term}>Role</dt>
+            <dd className={surface.detail}>{ROLE_LABELS[me.role]}</dd>
+            <dt className={surface.term}>Organisation</dt>
+            <dd className={surface.detail}>{me.organisation.name}</dd>
+            <dt className={surface.term}>Units</dt>
+            <dd className={surface.detail}>
               {me.unitIds.length === 0 ? 'All units (administrator)' : unitNames.join(', ') || '…'}
             </dd>
           </dl>
@@ -69,7 +53,7 @@ export function ProfilePage() {
             To change your name, role or units, ask an administrator of your organisation.
           </Caption1>
         </section>
-        <section className={styles.panel} aria-labelledby="profile-password">
+        <section className={surface.panel} aria-labelledby="profile-password">
           <Subtitle1 as="h2" id="profile-password">
             Password
           </Subtitle1>

@@ -29,6 +29,7 @@ import { deleteUnit, unitKeys, unitsQuery } from '@/features/units/api/units.que
 import { UnitFormDialog } from '@/features/units/components/UnitFormDialog';
 import { localTime, utcOffset } from '@/features/units/timeZones';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
+import { TablePanel } from '@/ui/DataTable';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { TableSkeleton } from '@/ui/LoadingState';
@@ -36,13 +37,6 @@ import { useNotify } from '@/ui/notify';
 import { PageHeader } from '@/ui/PageHeader';
 
 const useStyles = makeStyles({
-  panel: {
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalL,
-    overflowX: 'auto',
-  },
   muted: { color: tokens.colorNeutralForeground3 },
   actionsCol: { width: '3.5rem' },
 });
@@ -78,7 +72,7 @@ export function UnitsPage() {
           </Button>
         }
       />
-      <section className={styles.panel} aria-label="Unit list">
+      <TablePanel label="Unit list">
         {units.isError && <ErrorBanner error={units.error} onRetry={() => void units.refetch()} />}
         {units.isPending && <TableSkeleton rows={3} label="Loading units" />}
         {units.data && sorted.length === 0 && (
@@ -148,7 +142,7 @@ export function UnitsPage() {
             </TableBody>
           </Table>
         )}
-      </section>
+      </TablePanel>
       {editing && (
         <UnitFormDialog
           key={editing === 'new' ? 'new' : editing.id}

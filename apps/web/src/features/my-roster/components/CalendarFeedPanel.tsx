@@ -14,18 +14,10 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
+import { useSurfaceStyles } from '@/ui/surfaceStyles';
 import { calendarFeedQuery, myRosterKeys, regenerateCalendarFeed } from '../api/myRoster.queries';
 
 const useStyles = makeStyles({
-  panel: {
-    display: 'flex',
-    flexDirection: 'column',
-    gap: tokens.spacingVerticalM,
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalXL,
-  },
   row: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS, alignItems: 'flex-end' },
   url: { flexGrow: 1, minWidth: '16rem' },
   muted: { color: tokens.colorNeutralForeground3 },
@@ -34,6 +26,7 @@ const useStyles = makeStyles({
 /** The secret address of my iCalendar feed, to paste into a calendar program; copy and regenerate. */
 export function CalendarFeedPanel() {
   const styles = useStyles();
+  const surface = useSurfaceStyles();
   const notify = useNotify();
   const client = useQueryClient();
   const feed = useQuery(calendarFeedQuery());
@@ -58,7 +51,7 @@ export function CalendarFeedPanel() {
   };
 
   return (
-    <section className={styles.panel} aria-labelledby="calendar-feed-title">
+    <section className={surface.panel} aria-labelledby="calendar-feed-title">
       <Subtitle1 as="h2" id="calendar-feed-title">
         Calendar feed
       </Subtitle1>

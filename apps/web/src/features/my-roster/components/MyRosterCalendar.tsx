@@ -1,73 +1,31 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
-import {
-  Button,
-  Field,
-  makeStyles,
-  Select,
-  Spinner,
-  Subtitle2,
-  Tab,
-  TabList,
-  tokens,
-} from '@fluentui/react-components';
-import { ChevronLeftRegular, ChevronRightRegular } from '@fluentui/react-icons';
+import { Button, Field, makeStyles, Select, Spinner, tokens } from '@fluentui/react-components';
 import type { DatesSetArg, EventClickArg, EventContentArg, EventMountArg } from '@fullcalendar/core';
-import enGbLocale from '@fullcalendar/core/locales/en-gb';
-import dayGridPlugin from '@fullcalendar/daygrid';
-import FullCalendar from '@fullcalendar/react';
-import timeGridPlugin from '@fullcalendar/timegrid';
+import type FullCalendar from '@fullcalendar/react';
 import type { MyRosterShiftDto, MyRosterUnitDto } from '@rotaplex/contracts';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { SHIFT_COLOUR_TOKENS } from '@/features/planning/utils/shiftColours';
 import { ErrorBanner } from '@/ui/ErrorBanner';
+import {
+  CALENDAR_VIEW,
+  CalendarColumn,
+  CalendarEventFace,
+  CalendarToolbar,
+  labelEvent,
+  ShiftCalendar,
+  type CalendarLayout,
+} from '@/ui/ShiftCalendar';
 import { myShiftsQuery } from '../api/myRoster.queries';
 import { rangeDays, rosterEvents, type RosterEventProps, todayIn } from '../utils/rosterEvents';
 import { ShiftDetailsDialog } from './ShiftDetailsDialog';
 
-export type RosterLayout = 'week' | 'month';
-
-const VIEW_OF: Record<RosterLayout, string> = { week: 'timeGridWeek', month: 'dayGridMonth' };
-const TIME_FORMAT = { hour: '2-digit', minute: '2-digit', hour12: false } as const;
-
 const useStyles = makeStyles({
-  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
-  toolbar: {
-    display: 'flex',
-    flexWrap: 'wrap',
-    alignItems: 'flex-end',
-    justifyContent: 'space-between',
-    gap: tokens.spacingHorizontalM,
-  },
-  nav: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
-  title: { minWidth: '14rem', textAlign: 'center' },
   zone: {
     display: 'flex',
     alignItems: 'center',
     gap: tokens.spacingHorizontalS,
     color: tokens.colorNeutralForeground3,
     fontSize: tokens.fontSizeBase200,
-  },
-  // FullCalendar 6 injects its own stylesheet and reads these custom properties: point them at the theme.
-  calendar: {
-    '--fc-border-color': tokens.colorNeutralStroke2,
-    '--fc-page-bg-color': tokens.colorNeutralBackground1,
-    '--fc-neutral-bg-color': tokens.colorNeutralBackground3,
-    '--fc-neutral-text-color': tokens.colorNeutralForeground3,
-    '--fc-today-bg-color': tokens.colorBrandBackground2,
-    '--fc-event-bg-color': tokens.colorBrandBackground,
-    '--fc-event-border-color': tokens.colorBrandStroke1,
-    '--fc-event-text-color': tokens.colorNeutralForegroundOnBrand,
-    '--fc-small-font-size': tokens.fontSizeBase200,
-    fontFamily: tokens.fontFamilyBase,
-    fontSize: tokens.fontSizeBase200,
-    color: tokens.colorNeutralForeground1,
-    '& .fc-event': { cursor: 'pointer' },
-    '& .fc-event:focus-visible': { outline: `${tokens.strokeWidthThick} solid ${tokens.colorStrokeFocus2}` },
-    '& .fc-col-header-cell-cushion, & .fc-daygrid-day-number': {
-      color: tokens.colorNeutralForeground1,
-      textDecorationLine: 'none',
-    },
-    '& .fc-popover': { backgroundColor: tokens.colorNeutralBackground1, boxShadow: tokens.shadow16 },
   },
   // Mine: a strong edge and bold text; colleagues': faded, so my own shifts stand out.
   mine: {
@@ -76,15 +34,6 @@ const useStyles = makeStyles({
     boxShadow: tokens.shadow4,
   },
   other: { opacity: 0.7 },
-  event: {
-    display: 'flex',
-    flexWrap: 'wrap',
-    alignItems: 'center',
-    gap: tokens.spacingHorizontalXXS,
-    overflow: 'hidden',
-    paddingLeft: tokens.spacingHorizontalXXS,
-  },
-  time: { fontWeight: tokens.fontWeightSemibold },
 });
 
 export interface MyRosterCalendarProps {
@@ -102,7 +51,7 @@ export interface MyRosterCalendarProps {
 export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) {
   const styles = useStyles();
   const ref = useRef<FullCalendar>(null);
-  const [layout, setLayout] = useState<RosterLayout>('week');
+  const [layout, setLayout] = useState<CalendarLayout>('week');
   const [unitId, setUnitId] = useState(units[0]?.unitId ?? '');
   const unit = units.find((u) => u.unitId === unitId) ?? units[0];
   const timeZone = unit?.timeZone ?? 'UTC';
@@ -127,7 +76,7 @@ export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) 
   // FullCalendar reads `initialView` once; later layout changes go through its API.
   useEffect(() => {
     const api = ref.current?.getApi();
-    if (api && api.view.type !== VIEW_OF[layout]) api.changeView(VIEW_OF[layout]);
+    if (api && api.view.type !== CALENDAR_VIEW[layout]) api.changeView(CALENDAR_VIEW[layout]);
   }, [layout]);
 
   const handleDatesSet = (arg: DatesSetArg) =>
@@ -143,16 +92,11 @@ export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) 
       `${s.shiftName} (${s.shiftCode})`,
       `${arg.event.startStr.slice(0, 10)} ${arg.event.startStr.slice(11, 16)} to ${arg.event.endStr.slice(11, 16)}`,
     ].join(', ');
-    arg.el.setAttribute('role', 'button');
-    arg.el.setAttribute('aria-label', label);
-    arg.el.setAttribute('title', label);
+    labelEvent(arg.el, label);
     arg.el.dataset.mine = String(s.mine);
   };
   const renderEvent = (arg: EventContentArg) => (
-    <div className={styles.event}>
-      {arg.timeText && <span className={styles.time}>{arg.timeText}</span>}
-      <span>{arg.event.title}</span>
-    </div>
+    <CalendarEventFace timeText={arg.timeText} title={arg.event.title} />
   );
   const step = (action: 'prev' | 'next' | 'today') => {
     const api = ref.current?.getApi();
@@ -163,24 +107,15 @@ export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) 
   };
 
   return (
-    <div className={styles.root}>
-      <div className={styles.toolbar}>
-        <div className={styles.nav}>
-          <Button
-            icon={<ChevronLeftRegular />}
-            aria-label={layout === 'week' ? 'Previous week' : 'Previous month'}
-            onClick={() => step('prev')}
-          />
-          <Subtitle2 as="h2" className={styles.title} aria-live="polite">
-            {range?.title ?? ''}
-          </Subtitle2>
-          <Button
-            icon={<ChevronRightRegular />}
-            aria-label={layout === 'week' ? 'Next week' : 'Next month'}
-            onClick={() => step('next')}
-          />
-          <Button onClick={() => step('today')}>Today</Button>
-        </div>
+    <CalendarColumn>
+      <CalendarToolbar
+        layout={layout}
+        onLayoutChange={setLayout}
+        title={range?.title ?? ''}
+        titleAs="h2"
+        onStep={step}
+        navExtra={<Button onClick={() => step('today')}>Today</Button>}
+      >
         {units.length > 1 && (
           <Field label="Unit">
             <Select value={unit?.unitId ?? ''} onChange={(_, d) => setUnitId(d.value)}>
@@ -192,50 +127,28 @@ export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) 
             </Select>
           </Field>
         )}
-        <TabList
-          size="small"
-          aria-label="Calendar layout"
-          selectedValue={layout}
-          onTabSelect={(_, d) => setLayout(d.value as RosterLayout)}
-        >
-          <Tab value="week">Week</Tab>
-          <Tab value="month">Month</Tab>
-        </TabList>
-      </div>
+      </CalendarToolbar>
       <span className={styles.zone}>
         Times are {unit ? `${unit.unitName}'s` : 'the unit’s'} local time ({timeZone}). Your shifts are
         highlighted; only published rosters show.
         {shifts.isFetching && <Spinner size="extra-tiny" aria-label="Loading shifts" />}
       </span>
       <ErrorBanner error={shifts.error} onRetry={() => void shifts.refetch()} />
-      <div className={styles.calendar} data-testid="my-roster-calendar">
-        <FullCalendar
-          key={timeZone}
-          ref={ref}
-          plugins={[timeGridPlugin, dayGridPlugin]}
-          locale={enGbLocale}
-          timeZone="UTC"
-          initialView={VIEW_OF[layout]}
-          initialDate={initialDate ?? todayIn(timeZone)}
-          headerToolbar={false}
-          height="auto"
-          allDaySlot={false}
-          scrollTime="06:00:00"
-          nowIndicator={false}
-          eventTimeFormat={TIME_FORMAT}
-          slotLabelFormat={TIME_FORMAT}
-          displayEventEnd
-          eventDisplay="block"
-          dayMaxEvents={4}
-          eventMaxStack={4}
-          events={events}
-          eventContent={renderEvent}
-          eventDidMount={handleEventMount}
-          eventClick={handleEventClick}
-          datesSet={handleDatesSet}
-        />
-      </div>
+      <ShiftCalendar
+        key={timeZone}
+        calendarRef={ref}
+        testId="my-roster-calendar"
+        initialView={CALENDAR_VIEW[layout]}
+        initialDate={initialDate ?? todayIn(timeZone)}
+        eventDisplay="block"
+        eventMaxStack={4}
+        events={events}
+        eventContent={renderEvent}
+        eventDidMount={handleEventMount}
+        eventClick={handleEventClick}
+        datesSet={handleDatesSet}
+      />
       {open && <ShiftDetailsDialog shift={open} onClose={() => setOpen(null)} />}
-    </div>
+    </CalendarColumn>
   );
 }

@@ -7,23 +7,10 @@ import {
   DialogContent,
   DialogSurface,
   DialogTitle,
-  makeStyles,
-  tokens,
 } from '@fluentui/react-components';
 import type { MyRosterShiftDto } from '@rotaplex/contracts';
+import { useSurfaceStyles } from '@/ui/surfaceStyles';
 import { wallClock } from '../utils/rosterEvents';
-
-const useStyles = makeStyles({
-  meta: {
-    display: 'grid',
-    gridTemplateColumns: 'max-content 1fr',
-    columnGap: tokens.spacingHorizontalL,
-    rowGap: tokens.spacingVerticalS,
-    margin: 0,
-  },
-  term: { color: tokens.colorNeutralForeground3 },
-  detail: { margin: 0 },
-});
 
 export interface ShiftDetailsDialogProps {
   shift: MyRosterShiftDto;
@@ -45,7 +32,7 @@ function formatWallClock(local: string): string {
 
 /** The details of one shift of the calendar, in the unit's time zone. */
 export function ShiftDetailsDialog({ shift, onClose }: ShiftDetailsDialogProps) {
-  const styles = useStyles();
+  const surface = useSurfaceStyles();
   const start = wallClock(shift.start, shift.timeZone);
   const end = wallClock(shift.end, shift.timeZone);
   const hours = (Date.parse(shift.end) - Date.parse(shift.start)) / 3_600_000;
@@ -62,23 +49,23 @@ export function ShiftDetailsDialog({ shift, onClose }: ShiftDetailsDialogProps) 
             )}
           </DialogTitle>
           <DialogContent>
-            <dl className={styles.meta}>
-              <dt className={styles.term}>Who</dt>
-              <dd className={styles.detail}>{shift.mine ? `You (${shift.name})` : shift.name}</dd>
-              <dt className={styles.term}>Shift</dt>
-              <dd className={styles.detail}>
+            <dl className={surface.facts}>
+              <dt className={surface.term}>Who</dt>
+              <dd className={surface.detail}>{shift.mine ? `You (${shift.name})` : shift.name}</dd>
+              <dt className={surface.term}>Shift</dt>
+              <dd className={surface.detail}>
                 {shift.shiftName} ({shift.shiftCode})
               </dd>
-              <dt className={styles.term}>Starts</dt>
-              <dd className={styles.detail}>{formatWallClock(start)}</dd>
-              <dt className={styles.term}>Ends</dt>
-              <dd className={styles.detail}>{formatWallClock(end)}</dd>
-              <dt className={styles.term}>Length</dt>
-              <dd className={styles.detail}>{Number.isInteger(hours) ? hours : hours.toFixed(1)} hours</dd>
-              <dt className={styles.term}>Unit</dt>
-              <dd className={styles.detail}>{shift.unitName}</dd>
-              <dt className={styles.term}>Time zone</dt>
-              <dd className={styles.detail}>{shift.timeZone}</dd>
+              <dt className={surface.term}>Starts</dt>
+              <dd className={surface.detail}>{formatWallClock(start)}</dd>
+              <dt className={surface.term}>Ends</dt>
+              <dd className={surface.detail}>{formatWallClock(end)}</dd>
+              <dt className={surface.term}>Length</dt>
+              <dd className={surface.detail}>{Number.isInteger(hours) ? hours : hours.toFixed(1)} hours</dd>
+              <dt className={surface.term}>Unit</dt>
+              <dd className={surface.detail}>{shift.unitName}</dd>
+              <dt className={surface.term}>Time zone</dt>
+              <dd className={surface.detail}>{shift.timeZone}</dd>
             </dl>
           </DialogContent>
           <DialogActions>

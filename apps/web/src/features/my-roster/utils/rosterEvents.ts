@@ -1,34 +1,15 @@
 import type { MyRosterShiftDto, ShiftColour } from '@rotaplex/contracts';
-
-const formatters = new Map<string, Intl.DateTimeFormat>();
+import {
+  wallClock as wallClockAt,
+  type ColouredEvent,
+  type ShiftColours,
+} from '@/features/planning-board/utils/calendarEvents';
 
 /**
- * The wall-clock time of an instant in an IANA zone as "YYYY-MM-DDTHH:mm:ss" (no offset). The
+ * The wall-clock time of an instant (ISO 8601) in an IANA zone as "YYYY-MM-DDTHH:mm:ss" (no offset). The
  * calendar runs in UTC and is fed these, so it shows the unit's local times whatever the browser's zone.
  */
-export function wallClock(iso: string, timeZone: string): string {
-  let f = formatters.get(timeZone);
-  if (!f) {
-    f = new Intl.DateTimeFormat('en-GB', {
-      timeZone,
-      hourCycle: 'h23',
-      year: 'numeric',
-      month: '2-digit',
-      day: '2-digit',
-      hour: '2-digit',
-      minute: '2-digit',
-      second: '2-digit',
-    });
-    formatters.set(timeZone, f);
-  }
-  const p = Object.fromEntries(
-    f
-      .formatToParts(new Date(iso))
-      .filter((x) => x.type !== 'literal')
-      .map((x) => [x.type, x.value]),
-  );
-  return `${p.year}-${p.month}-${p.day}T${p.hour}:${p.minute}:${p.second}`;
-}
+export const wallClock = (iso: string, timeZone: string): string => wallClockAt(Date.parse(iso), timeZone);
 
 /** Today's date "YYYY-MM-DD" in a zone. */
 export function todayIn(timeZone: string, now: Date = new Date()): string {
@@ -39,19 +20,11 @@ export interface RosterEventProps {
   shift: MyRosterShiftDto;
 }
 
-export interface RosterEvent {
-  id: string;
-  title: string;
-  start: string;
-  end: string;
-  backgroundColor: string;
-  borderColor: string;
-  textColor: string;
+export interface RosterEvent extends ColouredEvent<RosterEventProps> {
   classNames: string[];
-  extendedProps: RosterEventProps;
 }
 
-export type ColourTokens = Record<ShiftColour, { background: string; foreground: string; border: string }>;
+export type ColourTokens = Record<ShiftColour, ShiftColours>;
 
 /**
  * Calendar events of the shifts in one unit's zone: mine first in each slot and marked, colleagues'

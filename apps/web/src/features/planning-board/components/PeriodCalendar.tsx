@@ -1,79 +1,30 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
-import {
-  Button,
-  Field,
-  makeStyles,
-  Select,
-  Subtitle2,
-  Tab,
-  TabList,
-  tokens,
-} from '@fluentui/react-components';
-import { ChevronLeftRegular, ChevronRightRegular, PinFilled, WarningFilled } from '@fluentui/react-icons';
+import { Field, makeStyles, Select, tokens } from '@fluentui/react-components';
+import { PinFilled, WarningFilled } from '@fluentui/react-icons';
 import type { DatesSetArg, EventClickArg, EventContentArg, EventMountArg } from '@fullcalendar/core';
-import enGbLocale from '@fullcalendar/core/locales/en-gb';
-import dayGridPlugin from '@fullcalendar/daygrid';
 import interactionPlugin, { type DateClickArg } from '@fullcalendar/interaction';
-import FullCalendar from '@fullcalendar/react';
-import timeGridPlugin from '@fullcalendar/timegrid';
+import type FullCalendar from '@fullcalendar/react';
 import type { AssignmentGridDto, RosterPeriodDto, ShiftTypeDto } from '@rotaplex/contracts';
 import { SHIFT_COLOUR_TOKENS } from '@/features/planning/utils/shiftColours';
+import {
+  CALENDAR_VIEW,
+  CalendarColumn,
+  CalendarEventFace,
+  CalendarToolbar,
+  labelEvent,
+  ShiftCalendar,
+  type CalendarLayout,
+} from '@/ui/ShiftCalendar';
 import { addDays, assignmentEvents, wallClock, type AssignmentEventProps } from '../utils/calendarEvents';
 import { marksText, type CellMarks } from '../utils/requestMarks';
 import { formatDay } from '../utils/days';
 
-export type CalendarLayout = 'week' | 'month';
-
-const VIEW_OF: Record<CalendarLayout, string> = { week: 'timeGridWeek', month: 'dayGridMonth' };
-const TIME_FORMAT = { hour: '2-digit', minute: '2-digit', hour12: false } as const;
+export type { CalendarLayout };
 
 const useStyles = makeStyles({
-  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
-  toolbar: {
-    display: 'flex',
-    flexWrap: 'wrap',
-    alignItems: 'flex-end',
-    justifyContent: 'space-between',
-    gap: tokens.spacingHorizontalM,
-  },
-  nav: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
-  title: { minWidth: '14rem', textAlign: 'center' },
   person: { minWidth: '14rem' },
   zone: { color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
-  // FullCalendar 6 injects its own stylesheet and reads these custom properties: point them at the theme.
-  calendar: {
-    '--fc-border-color': tokens.colorNeutralStroke2,
-    '--fc-page-bg-color': tokens.colorNeutralBackground1,
-    '--fc-neutral-bg-color': tokens.colorNeutralBackground3,
-    '--fc-neutral-text-color': tokens.colorNeutralForeground3,
-    '--fc-today-bg-color': tokens.colorBrandBackground2,
-    '--fc-highlight-color': tokens.colorBrandBackground2,
-    '--fc-non-business-color': tokens.colorNeutralBackgroundDisabled,
-    '--fc-now-indicator-color': tokens.colorPaletteRedBorder2,
-    '--fc-event-bg-color': tokens.colorBrandBackground,
-    '--fc-event-border-color': tokens.colorBrandStroke1,
-    '--fc-event-text-color': tokens.colorNeutralForegroundOnBrand,
-    '--fc-small-font-size': tokens.fontSizeBase200,
-    fontFamily: tokens.fontFamilyBase,
-    fontSize: tokens.fontSizeBase200,
-    color: tokens.colorNeutralForeground1,
-    '& .fc-event': { cursor: 'pointer', borderLeftWidth: tokens.strokeWidthThicker },
-    '& .fc-event:focus-visible': { outline: `${tokens.strokeWidthThick} solid ${tokens.colorStrokeFocus2}` },
-    '& .fc-col-header-cell-cushion, & .fc-daygrid-day-number': {
-      color: tokens.colorNeutralForeground1,
-      textDecorationLine: 'none',
-    },
-    '& .fc-popover': { backgroundColor: tokens.colorNeutralBackground1, boxShadow: tokens.shadow16 },
-  },
-  event: {
-    display: 'flex',
-    flexWrap: 'wrap',
-    alignItems: 'center',
-    gap: tokens.spacingHorizontalXXS,
-    overflow: 'hidden',
-    paddingLeft: tokens.spacingHorizontalXXS,
-  },
-  time: { fontWeight: tokens.fontWeightSemibold },
+  calendar: { '& .fc-event': { borderLeftWidth: tokens.strokeWidthThicker } },
   leave: { color: tokens.colorNeutralForeground2, padding: tokens.spacingHorizontalXS },
   flagged: { outline: `${tokens.strokeWidthThick} solid ${tokens.colorPaletteRedBorder2}` },
 });
@@ -152,8 +103,8 @@ export function PeriodCalendar({
   useEffect(() => {
     const api = ref.current?.getApi();
     if (!api) return;
-    if (api.view.type !== VIEW_OF[layout] || gotoDate) {
-      api.changeView(VIEW_OF[layout], gotoDate ?? undefined);
+    if (api.view.type !== CALENDAR_VIEW[layout] || gotoDate) {
+      api.changeView(CALENDAR_VIEW[layout], gotoDate ?? undefined);
       setGotoDate(null);
     }
   }, [layout, gotoDate]);
@@ -191,21 +142,17 @@ export function PeriodCalendar({
     ]
       .filter(Boolean)
       .join(', ');
-    arg.el.setAttribute('role', 'button');
-    arg.el.setAttribute('aria-label', label);
-    arg.el.setAttribute('title', label);
+    labelEvent(arg.el, label);
     arg.el.dataset.cell = `${p.staffMemberId}|${p.date}`;
   };
   const renderEvent = (arg: EventContentArg) => {
     if (arg.event.display === 'background') return <span className={styles.leave}>{arg.event.title}</span>;
     const p = arg.event.extendedProps as AssignmentEventProps;
     return (
-      <div className={styles.event}>
-        {arg.timeText && <span className={styles.time}>{arg.timeText}</span>}
-        <span>{arg.event.title}</span>
+      <CalendarEventFace timeText={arg.timeText} title={arg.event.title}>
         {p.pinned && <PinFilled aria-hidden />}
         {p.flagged && <WarningFilled aria-hidden />}
-      </div>
+      </CalendarEventFace>
     );
   };
 
@@ -217,25 +164,16 @@ export function PeriodCalendar({
   };
 
   return (
-    <div className={styles.root}>
-      <div className={styles.toolbar}>
-        <div className={styles.nav}>
-          <Button
-            icon={<ChevronLeftRegular />}
-            aria-label={layout === 'week' ? 'Previous week' : 'Previous month'}
-            disabled={!shown || shown.start <= validStartMs}
-            onClick={() => step('prev')}
-          />
-          <Subtitle2 as="h3" className={styles.title} aria-live="polite">
-            {shown?.title ?? ''}
-          </Subtitle2>
-          <Button
-            icon={<ChevronRightRegular />}
-            aria-label={layout === 'week' ? 'Next week' : 'Next month'}
-            disabled={!shown || shown.end >= validEndMs}
-            onClick={() => step('next')}
-          />
-        </div>
+    <CalendarColumn>
+      <CalendarToolbar
+        layout={layout}
+        onLayoutChange={onLayoutChange}
+        title={shown?.title ?? ''}
+        titleAs="h3"
+        onStep={step}
+        prevDisabled={!shown || shown.start <= validStartMs}
+        nextDisabled={!shown || shown.end >= validEndMs}
+      >
         <Field label="Person">
           <Select
             className={styles.person}
@@ -250,51 +188,31 @@ export function PeriodCalendar({
             ))}
           </Select>
         </Field>
-        <TabList
-          size="small"
-          aria-label="Calendar layout"
-          selectedValue={layout}
-          onTabSelect={(_, d) => onLayoutChange(d.value as CalendarLayout)}
-        >
-          <Tab value="week">Week</Tab>
-          <Tab value="month">Month</Tab>
-        </TabList>
-      </div>
+      </CalendarToolbar>
       <span className={styles.zone}>Times are the unit&apos;s local time ({timeZone}).</span>
-      <div className={styles.calendar} data-testid="period-calendar">
-        <FullCalendar
-          ref={ref}
-          plugins={[timeGridPlugin, dayGridPlugin, interactionPlugin]}
-          locale={enGbLocale}
-          timeZone="UTC"
-          // "Today" is the unit's today, given in its wall-clock time like every event.
-          now={() => wallClock(Date.now(), timeZone)}
-          initialView={VIEW_OF[layout]}
-          initialDate={period.startDate}
-          validRange={{ start: period.startDate, end: validEnd }}
-          firstDay={new Date(validStartMs).getUTCDay()}
-          headerToolbar={false}
-          height="auto"
-          allDaySlot={false}
-          scrollTime="06:00:00"
-          nowIndicator={false}
-          eventTimeFormat={TIME_FORMAT}
-          slotLabelFormat={TIME_FORMAT}
-          displayEventEnd
-          fixedWeekCount={false}
-          dayMaxEvents={4}
-          eventMaxStack={6}
-          events={events}
-          eventContent={renderEvent}
-          eventClassNames={(arg) =>
-            (arg.event.extendedProps as AssignmentEventProps).flagged ? [styles.flagged] : []
-          }
-          eventDidMount={handleEventMount}
-          eventClick={handleEventClick}
-          dateClick={handleDateClick}
-          datesSet={handleDatesSet}
-        />
-      </div>
-    </div>
+      <ShiftCalendar
+        calendarRef={ref}
+        testId="period-calendar"
+        className={styles.calendar}
+        extraPlugins={[interactionPlugin]}
+        // "Today" is the unit's today, given in its wall-clock time like every event.
+        now={() => wallClock(Date.now(), timeZone)}
+        initialView={CALENDAR_VIEW[layout]}
+        initialDate={period.startDate}
+        validRange={{ start: period.startDate, end: validEnd }}
+        firstDay={new Date(validStartMs).getUTCDay()}
+        fixedWeekCount={false}
+        eventMaxStack={6}
+        events={events}
+        eventContent={renderEvent}
+        eventClassNames={(arg) =>
+          (arg.event.extendedProps as AssignmentEventProps).flagged ? [styles.flagged] : []
+        }
+        eventDidMount={handleEventMount}
+        eventClick={handleEventClick}
+        dateClick={handleDateClick}
+        datesSet={handleDatesSet}
+      />
+    </CalendarColumn>
   );
 }

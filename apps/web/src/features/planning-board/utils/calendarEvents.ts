@@ -81,8 +81,8 @@ export interface AssignmentEventProps {
   minutes: number;
 }
 
-/** One event in the shape FullCalendar's `EventInput` accepts (kept free of FullCalendar's types). */
-export interface AssignmentEvent {
+/** An event in a shift's colours, in the shape FullCalendar's `EventInput` accepts (kept free of its types). */
+export interface ColouredEvent<Props> {
   id: string;
   title: string;
   /** Unit wall-clock "YYYY-MM-DDTHH:mm:ss", read by a calendar in the UTC time zone. */
@@ -91,8 +91,11 @@ export interface AssignmentEvent {
   backgroundColor: string;
   borderColor: string;
   textColor: string;
-  extendedProps: AssignmentEventProps;
+  extendedProps: Props;
 }
+
+/** One assignment's event. */
+export type AssignmentEvent = ColouredEvent<AssignmentEventProps>;
 
 /** Id of the event of one cell: "staffMemberId|date". */
 export const eventId = (staffMemberId: string, date: string) => `${staffMemberId}|${date}`;

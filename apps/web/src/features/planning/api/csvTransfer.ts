@@ -1,26 +1,9 @@
 import type { CsvImportResult } from '@rotaplex/contracts';
-import { buildUrl, refreshSession, type QueryValue } from '@/api/client';
+import { buildUrl, type QueryValue } from '@/api/client';
 import { ApiRequestError, toApiError } from '@/api/errors';
-import { session } from '@/api/session';
+import { authorisedFetch, responseError, saveFile } from '@/api/files';
 
-/**
- * CSV goes to and from the API as plain text, which the shared JSON client does not send or read.
- * These two calls attach the access token the same way and refresh it once on a 401.
- */
-async function authorisedFetch(url: string, init: RequestInit): Promise<Response> {
-  const attempt = () => {
-    const headers = new Headers(init.headers);
-    const token = session.getAccessToken();
-    if (token) headers.set('Authorization', `Bearer ${token}`);
-    return fetch(url, { ...init, headers, credentials: 'include' });
-  };
-  const response = await attempt();
-  if (response.status !== 401) return response;
-  const hadSession = session.getState().status === 'signedIn';
-  if (await refreshSession()) return attempt();
-  if (hadSession) session.signedOut('expired');
-  return response;
-}
+// CSV goes to and from the API as plain text, which the shared JSON client does not send or read.
 
 function isImportResult(body: unknown): body is CsvImportResult {
   return (
@@ -65,23 +48,6 @@ export async function downloadText(
   fileName: string,
 ): Promise<void> {
   const response = await authorisedFetch(buildUrl(path, query), { headers: { Accept: 'text/csv' } });
-  if (!response.ok) {
-    const text = await response.text();
-    let body: unknown = text;
-    try {
-      body = JSON.parse(text) as unknown;
-    } catch {
-      // Plain text body.
-    }
-    throw new ApiRequestError(toApiError(response.status, response.statusText, body));
-  }
-  const blob = await response.blob();
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  document.body.append(link);
-  link.click();
-  link.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  if (!response.ok) throw await responseError(response);
+  saveFile(await response.blob(), fileName);
 }

@@ -6,11 +6,7 @@ import {
   makeStyles,
   Select,
   Spinner,
-  Table,
-  TableBody,
   TableCell,
-  TableHeader,
-  TableHeaderCell,
   TableRow,
   tokens,
 } from '@fluentui/react-components';
@@ -25,6 +21,7 @@ import {
   planningKeys,
   putCoverOverride,
 } from '@/features/planning/api/planning.queries';
+import { DataTable } from '@/ui/DataTable';
 import { ShiftChip } from './ShiftChip';
 
 const useStyles = makeStyles({
@@ -185,52 +182,41 @@ export function CoverOverrides({ unitId, overrides, shiftTypes, skills }: CoverO
       {sorted.length === 0 ? (
         <span className={styles.muted}>No date overrides. Every date follows the weekly pattern.</span>
       ) : (
-        <Table size="small" aria-label="Date overrides">
-          <TableHeader>
-            <TableRow>
-              <TableHeaderCell>Date</TableHeaderCell>
-              <TableHeaderCell>Shift</TableHeaderCell>
-              <TableHeaderCell>Skill</TableHeaderCell>
-              <TableHeaderCell>Minimum</TableHeaderCell>
-              <TableHeaderCell>Target</TableHeaderCell>
-              <TableHeaderCell>
-                <span className="visually-hidden">Actions</span>
-              </TableHeaderCell>
-            </TableRow>
-          </TableHeader>
-          <TableBody>
-            {sorted.map((o) => {
-              const shift = shiftById.get(o.shiftTypeId);
-              const label = `${o.date} ${shift?.code ?? ''}`;
-              return (
-                <TableRow key={o.id}>
-                  <TableCell>{dateFormat.format(new Date(`${o.date}T00:00:00Z`))}</TableCell>
-                  <TableCell>
-                    {shift ? (
-                      <ShiftChip code={shift.code} colour={shift.colour} title={shift.name} />
-                    ) : (
-                      'Unknown'
-                    )}
-                  </TableCell>
-                  <TableCell>
-                    {o.skillId ? (skillById.get(o.skillId)?.name ?? 'Unknown') : 'Anyone'}
-                  </TableCell>
-                  <TableCell>{o.min}</TableCell>
-                  <TableCell>{o.target}</TableCell>
-                  <TableCell>
-                    <Button
-                      appearance="subtle"
-                      icon={<DeleteRegular />}
-                      aria-label={`Remove the override of ${label}`}
-                      disabled={remove.isPending}
-                      onClick={() => remove.mutate(o)}
-                    />
-                  </TableCell>
-                </TableRow>
-              );
-            })}
-          </TableBody>
-        </Table>
+        <DataTable
+          label="Date overrides"
+          columns={['Date', 'Shift', 'Skill', 'Minimum', 'Target']}
+          actionsColumn
+          size="small"
+        >
+          {sorted.map((o) => {
+            const shift = shiftById.get(o.shiftTypeId);
+            const label = `${o.date} ${shift?.code ?? ''}`;
+            return (
+              <TableRow key={o.id}>
+                <TableCell>{dateFormat.format(new Date(`${o.date}T00:00:00Z`))}</TableCell>
+                <TableCell>
+                  {shift ? (
+                    <ShiftChip code={shift.code} colour={shift.colour} title={shift.name} />
+                  ) : (
+                    'Unknown'
+                  )}
+                </TableCell>
+                <TableCell>{o.skillId ? (skillById.get(o.skillId)?.name ?? 'Unknown') : 'Anyone'}</TableCell>
+                <TableCell>{o.min}</TableCell>
+                <TableCell>{o.target}</TableCell>
+                <TableCell>
+                  <Button
+                    appearance="subtle"
+                    icon={<DeleteRegular />}
+                    aria-label={`Remove the override of ${label}`}
+                    disabled={remove.isPending}
+                    onClick={() => remove.mutate(o)}
+                  />
+                </TableCell>
+              </TableRow>
+            );
+          })}
+        </DataTable>
       )}
     </div>
   );

@@ -15,17 +15,14 @@ import {
   MessageBarBody,
   MessageBarTitle,
   Spinner,
-  Table,
-  TableBody,
   TableCell,
-  TableHeader,
-  TableHeaderCell,
   TableRow,
   tokens,
 } from '@fluentui/react-components';
 import type { CsvImportResult } from '@rotaplex/contracts';
 import { useMutation } from '@tanstack/react-query';
 import { ErrorBanner } from '@/ui/ErrorBanner';
+import { DataTable } from '@/ui/DataTable';
 
 const useStyles = makeStyles({
   surface: { maxWidth: '48rem', width: '100%' },
@@ -131,24 +128,15 @@ export function CsvImportDialog({ title, columns, help, send, onImported, onClos
                   </MessageBarBody>
                 </MessageBar>
                 <div className={styles.errors}>
-                  <Table size="small" aria-label="Row errors">
-                    <TableHeader>
-                      <TableRow>
-                        <TableHeaderCell>Line</TableHeaderCell>
-                        <TableHeaderCell>Column</TableHeaderCell>
-                        <TableHeaderCell>Problem</TableHeaderCell>
+                  <DataTable label="Row errors" columns={['Line', 'Column', 'Problem']} size="small">
+                    {result.errors.map((e, i) => (
+                      <TableRow key={`${e.line}-${e.field}-${i}`}>
+                        <TableCell>{e.line}</TableCell>
+                        <TableCell className={styles.code}>{e.field}</TableCell>
+                        <TableCell>{e.message}</TableCell>
                       </TableRow>
-                    </TableHeader>
-                    <TableBody>
-                      {result.errors.map((e, i) => (
-                        <TableRow key={`${e.line}-${e.field}-${i}`}>
-                          <TableCell>{e.line}</TableCell>
-                          <TableCell className={styles.code}>{e.field}</TableCell>
-                          <TableCell>{e.message}</TableCell>
-                        </TableRow>
-                      ))}
-                    </TableBody>
-                  </Table>
+                    ))}
+                  </DataTable>
                 </div>
               </>
             )}

@@ -7,6 +7,7 @@ import {
   type SolveRunStartedDto,
 } from '@rotaplex/contracts';
 import { api } from '@/api/client';
+import { saveFile } from '@/api/files';
 
 export interface AuditPageParams {
   page: number;
@@ -42,12 +43,5 @@ export const repairPeriod = (periodId: string, timeLimitSeconds: number) =>
 /** Downloads the period's CSV export (roster and audit trail) through the signed-in client. */
 export async function downloadExport(periodId: string): Promise<void> {
   const csv = await api.get<string>(PUBLISHING_ROUTES.export(periodId));
-  const url = URL.createObjectURL(new Blob([csv], { type: 'text/csv;charset=utf-8' }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = `roster-${periodId}.csv`;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  saveFile(new Blob([csv], { type: 'text/csv;charset=utf-8' }), `roster-${periodId}.csv`);
 }

@@ -1,8 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { REPORTS_ROUTES, type PeriodReportDto } from '@rotaplex/contracts';
-import { api, buildUrl, refreshSession } from '@/api/client';
-import { ApiRequestError, toApiError } from '@/api/errors';
-import { session } from '@/api/session';
+import { api, buildUrl } from '@/api/client';
+import { authorisedFetch, responseError, saveFile } from '@/api/files';
 import { fileNameFromDisposition } from '../utils/reportFigures';
 
 export const reportKeys = {
@@ -20,48 +19,17 @@ export const periodReportQuery = (periodId: string) =>
     staleTime: 5_000,
   });
 
-/** GET with the access token, refreshed once on a 401 (the JSON client does not read files). */
-async function authorisedGet(url: string): Promise<Response> {
-  const attempt = () => {
-    const token = session.getAccessToken();
-    return fetch(url, {
-      headers: { Accept: 'text/csv', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
-      credentials: 'include',
-    });
-  };
-  const response = await attempt();
-  if (response.status !== 401) return response;
-  const hadSession = session.getState().status === 'signedIn';
-  if (await refreshSession()) return attempt();
-  if (hadSession) session.signedOut('expired');
-  return response;
-}
-
 /**
  * Fetches the period's payroll CSV and saves it under the name the server gives
  * (Content-Disposition), through a temporary object URL.
  */
 export async function downloadPayrollCsv(periodId: string): Promise<string> {
-  const response = await authorisedGet(buildUrl(REPORTS_ROUTES.payrollCsv, { periodId }));
-  if (!response.ok) {
-    const text = await response.text();
-    let body: unknown = text;
-    try {
-      body = JSON.parse(text) as unknown;
-    } catch {
-      // Plain text body.
-    }
-    throw new ApiRequestError(toApiError(response.status, response.statusText, body));
-  }
+  const response = await authorisedFetch(buildUrl(REPORTS_ROUTES.payrollCsv, { periodId }), {
+    headers: { Accept: 'text/csv' },
+  });
+  if (!response.ok) throw await responseError(response);
   const fileName =
     fileNameFromDisposition(response.headers.get('Content-Disposition')) ?? `payroll-${periodId}.csv`;
-  const url = URL.createObjectURL(await response.blob());
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  document.body.append(link);
-  link.click();
-  link.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  saveFile(await response.blob(), fileName);
   return fileName;
 }

@@ -1,7 +1,7 @@
 import { useId, type ReactNode } from 'react';
-import { Body1, makeStyles, Subtitle1, tokens } from '@fluentui/react-components';
+import { Body1, makeStyles, mergeClasses, Subtitle1, tokens } from '@fluentui/react-components';
 
-const useStyles = makeStyles({
+const useCardStyles = makeStyles({
   root: {
     backgroundColor: tokens.colorNeutralBackground1,
     borderRadius: tokens.borderRadiusLarge,
@@ -10,8 +10,32 @@ const useStyles = makeStyles({
     display: 'flex',
     flexDirection: 'column',
     gap: tokens.spacingVerticalM,
-    minWidth: 0,
   },
+});
+
+export interface ReportCardProps {
+  title: string;
+  /** Extra class of the card (how it handles content wider than itself). */
+  className: string;
+  children: ReactNode;
+}
+
+/** A report's card: a section named by its "h2" title. */
+export function ReportCard({ title, className, children }: ReportCardProps) {
+  const styles = useCardStyles();
+  const headingId = useId();
+  return (
+    <section className={mergeClasses(styles.root, className)} aria-labelledby={headingId}>
+      <Subtitle1 as="h2" id={headingId}>
+        {title}
+      </Subtitle1>
+      {children}
+    </section>
+  );
+}
+
+const useStyles = makeStyles({
+  root: { minWidth: 0 },
   summary: { color: tokens.colorNeutralForeground2 },
   chart: { width: '100%', minWidth: 0 },
   details: {
@@ -40,12 +64,8 @@ export interface ChartSectionProps {
  */
 export function ChartSection({ title, summary, chart, table }: ChartSectionProps) {
   const styles = useStyles();
-  const headingId = useId();
   return (
-    <section className={styles.root} aria-labelledby={headingId}>
-      <Subtitle1 as="h2" id={headingId}>
-        {title}
-      </Subtitle1>
+    <ReportCard title={title} className={styles.root}>
       <Body1 className={styles.summary}>{summary}</Body1>
       <div className={styles.chart} role="img" aria-label={`Chart: ${title}`}>
         {chart}
@@ -54,6 +74,6 @@ export function ChartSection({ title, summary, chart, table }: ChartSectionProps
         <summary>Show the figures as a table</summary>
         <div className={styles.table}>{table}</div>
       </details>
-    </section>
+    </ReportCard>
   );
 }

@@ -1,16 +1,10 @@
-import {
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-} from '@fluentui/react-components';
+import { TableCell, TableRow } from '@fluentui/react-components';
 import type { PersonReportDto } from '@rotaplex/contracts';
-import { Bar, BarChart, CartesianGrid, Legend, Tooltip, XAxis, YAxis } from 'recharts';
+import { DataTable } from '@/ui/DataTable';
 import { formatHours, hoursRows, hoursStatus, HOURS_STATUS_TEXT } from '../utils/reportFigures';
 import { ChartSection } from './ChartSection';
-import { CHART_COLOURS, legendText, rowsHeight } from './chartTheme';
+import { CHART_COLOURS } from './chartTheme';
+import { ReportBarChart } from './ReportBarChart';
 
 const hoursOrDash = (minutes: number | null) => (minutes === null ? '–' : formatHours(minutes));
 
@@ -24,61 +18,48 @@ export function HoursChart({ people }: { people: PersonReportDto[] }) {
       title="Hours against contract"
       summary={`Paid hours of each person beside their contracted hours for the period. ${below} below the contract minimum, ${above} above the maximum.`}
       chart={
-        <BarChart
-          data={rows}
-          layout="vertical"
-          responsive
-          accessibilityLayer={false}
-          style={{ width: '100%', height: rowsHeight(rows.length) }}
-          margin={{ left: 8, right: 16 }}
-        >
-          <CartesianGrid stroke={CHART_COLOURS.grid} horizontal={false} />
-          <XAxis type="number" unit=" h" stroke={CHART_COLOURS.text} />
-          <YAxis type="category" dataKey="name" width={140} interval={0} stroke={CHART_COLOURS.text} />
-          <Tooltip />
-          <Legend formatter={legendText} />
-          <Bar dataKey="worked" name="Paid hours" fill={CHART_COLOURS.worked} isAnimationActive={false} />
-          <Bar
-            dataKey="target"
-            name="Contracted hours"
-            fill={CHART_COLOURS.target}
-            isAnimationActive={false}
-          />
-        </BarChart>
+        <ReportBarChart
+          rows={rows}
+          by="people"
+          valueAxis={{ unit: ' h' }}
+          bars={[
+            { dataKey: 'worked', name: 'Paid hours', fill: CHART_COLOURS.worked },
+            { dataKey: 'target', name: 'Contracted hours', fill: CHART_COLOURS.target },
+          ]}
+        />
       }
       table={
-        <Table size="small" aria-label="Hours against contract">
-          <TableHeader>
-            <TableRow>
-              <TableHeaderCell>Person</TableHeaderCell>
-              <TableHeaderCell>Shifts</TableHeaderCell>
-              <TableHeaderCell>Paid hours</TableHeaderCell>
-              <TableHeaderCell>Minimum</TableHeaderCell>
-              <TableHeaderCell>Contracted</TableHeaderCell>
-              <TableHeaderCell>Maximum</TableHeaderCell>
-              <TableHeaderCell>Difference</TableHeaderCell>
-              <TableHeaderCell>Standing</TableHeaderCell>
+        <DataTable
+          label="Hours against contract"
+          columns={[
+            'Person',
+            'Shifts',
+            'Paid hours',
+            'Minimum',
+            'Contracted',
+            'Maximum',
+            'Difference',
+            'Standing',
+          ]}
+          size="small"
+        >
+          {people.map((p) => (
+            <TableRow key={p.staffMemberId}>
+              <TableCell>{p.name}</TableCell>
+              <TableCell>{p.shifts}</TableCell>
+              <TableCell>{formatHours(p.paidMinutes)}</TableCell>
+              <TableCell>{hoursOrDash(p.minPaidMinutes)}</TableCell>
+              <TableCell>{hoursOrDash(p.targetPaidMinutes)}</TableCell>
+              <TableCell>{hoursOrDash(p.maxPaidMinutes)}</TableCell>
+              <TableCell>
+                {p.deviationMinutes === null
+                  ? '–'
+                  : `${p.deviationMinutes > 0 ? '+' : ''}${formatHours(p.deviationMinutes)}`}
+              </TableCell>
+              <TableCell>{HOURS_STATUS_TEXT[hoursStatus(p)]}</TableCell>
             </TableRow>
-          </TableHeader>
-          <TableBody>
-            {people.map((p) => (
-              <TableRow key={p.staffMemberId}>
-                <TableCell>{p.name}</TableCell>
-                <TableCell>{p.shifts}</TableCell>
-                <TableCell>{formatHours(p.paidMinutes)}</TableCell>
-                <TableCell>{hoursOrDash(p.minPaidMinutes)}</TableCell>
-                <TableCell>{hoursOrDash(p.targetPaidMinutes)}</TableCell>
-                <TableCell>{hoursOrDash(p.maxPaidMinutes)}</TableCell>
-                <TableCell>
-                  {p.deviationMinutes === null
-                    ? '–'
-                    : `${p.deviationMinutes > 0 ? '+' : ''}${formatHours(p.deviationMinutes)}`}
-                </TableCell>
-                <TableCell>{HOURS_STATUS_TEXT[hoursStatus(p)]}</TableCell>
-              </TableRow>
-            ))}
-          </TableBody>
-        </Table>
+          ))}
+        </DataTable>
       }
     />
   );

@@ -1,15 +1,9 @@
-import {
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-} from '@fluentui/react-components';
+import { TableCell, TableRow } from '@fluentui/react-components';
 import type { PersonReportDto } from '@rotaplex/contracts';
-import { Bar, BarChart, CartesianGrid, Legend, Tooltip, XAxis, YAxis } from 'recharts';
+import { DataTable } from '@/ui/DataTable';
 import { ChartSection } from './ChartSection';
-import { CHART_COLOURS, legendText, rowsHeight } from './chartTheme';
+import { CHART_COLOURS } from './chartTheme';
+import { ReportBarChart } from './ReportBarChart';
 
 function spread(values: number[]): string {
   if (!values.length) return 'nobody';
@@ -24,49 +18,31 @@ export function NightsWeekendsChart({ people }: { people: PersonReportDto[] }) {
       title="Nights and weekends per person"
       summary={`Night shifts per person range ${spread(people.map((p) => p.nights))}; weekends worked ${spread(people.map((p) => p.weekendsWorked))}.`}
       chart={
-        <BarChart
-          data={rows}
-          layout="vertical"
-          responsive
-          accessibilityLayer={false}
-          style={{ width: '100%', height: rowsHeight(rows.length) }}
-          margin={{ left: 8, right: 16 }}
-        >
-          <CartesianGrid stroke={CHART_COLOURS.grid} horizontal={false} />
-          <XAxis type="number" allowDecimals={false} stroke={CHART_COLOURS.text} />
-          <YAxis type="category" dataKey="name" width={140} interval={0} stroke={CHART_COLOURS.text} />
-          <Tooltip />
-          <Legend formatter={legendText} />
-          <Bar dataKey="nights" name="Night shifts" fill={CHART_COLOURS.nights} isAnimationActive={false} />
-          <Bar
-            dataKey="weekends"
-            name="Weekends worked"
-            fill={CHART_COLOURS.weekends}
-            isAnimationActive={false}
-          />
-        </BarChart>
+        <ReportBarChart
+          rows={rows}
+          by="people"
+          valueAxis={{ allowDecimals: false }}
+          bars={[
+            { dataKey: 'nights', name: 'Night shifts', fill: CHART_COLOURS.nights },
+            { dataKey: 'weekends', name: 'Weekends worked', fill: CHART_COLOURS.weekends },
+          ]}
+        />
       }
       table={
-        <Table size="small" aria-label="Nights and weekends per person">
-          <TableHeader>
-            <TableRow>
-              <TableHeaderCell>Person</TableHeaderCell>
-              <TableHeaderCell>Night shifts</TableHeaderCell>
-              <TableHeaderCell>Weekends worked</TableHeaderCell>
-              <TableHeaderCell>Weekend days worked</TableHeaderCell>
+        <DataTable
+          label="Nights and weekends per person"
+          columns={['Person', 'Night shifts', 'Weekends worked', 'Weekend days worked']}
+          size="small"
+        >
+          {people.map((p) => (
+            <TableRow key={p.staffMemberId}>
+              <TableCell>{p.name}</TableCell>
+              <TableCell>{p.nights}</TableCell>
+              <TableCell>{p.weekendsWorked}</TableCell>
+              <TableCell>{p.weekendDaysWorked}</TableCell>
             </TableRow>
-          </TableHeader>
-          <TableBody>
-            {people.map((p) => (
-              <TableRow key={p.staffMemberId}>
-                <TableCell>{p.name}</TableCell>
-                <TableCell>{p.nights}</TableCell>
-                <TableCell>{p.weekendsWorked}</TableCell>
-                <TableCell>{p.weekendDaysWorked}</TableCell>
-              </TableRow>
-            ))}
-          </TableBody>
-        </Table>
+          ))}
+        </DataTable>
       }
     />
   );

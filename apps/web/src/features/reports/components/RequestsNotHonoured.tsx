@@ -1,28 +1,11 @@
-import {
-  makeStyles,
-  Subtitle1,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-  tokens,
-} from '@fluentui/react-components';
+import { makeStyles, TableCell, TableRow, tokens } from '@fluentui/react-components';
 import type { RequestNotHonouredDto } from '@rotaplex/contracts';
+import { DataTable } from '@/ui/DataTable';
 import { formatDate } from '../utils/reportFigures';
+import { ReportCard } from './ChartSection';
 
 const useStyles = makeStyles({
-  root: {
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow2,
-    padding: tokens.spacingHorizontalL,
-    display: 'flex',
-    flexDirection: 'column',
-    gap: tokens.spacingVerticalM,
-    overflowX: 'auto',
-  },
+  root: { overflowX: 'auto' },
   muted: { color: tokens.colorNeutralForeground3 },
   reasons: { margin: 0, paddingInlineStart: tokens.spacingHorizontalL },
 });
@@ -43,43 +26,34 @@ export interface RequestsNotHonouredProps {
 export function RequestsNotHonoured({ requests, honoured, items }: RequestsNotHonouredProps) {
   const styles = useStyles();
   return (
-    <section className={styles.root} aria-labelledby="requests-not-honoured">
-      <Subtitle1 as="h2" id="requests-not-honoured">
-        Requests honoured
-      </Subtitle1>
+    <ReportCard title="Requests honoured" className={styles.root}>
       <span className={styles.muted}>
         {requests === 0
           ? 'Nobody asked for anything in this period.'
           : `${honoured} of ${requests} requests are honoured${items.length ? '; the others and why:' : '.'}`}
       </span>
       {items.length > 0 && (
-        <Table size="small" aria-label="Requests not honoured">
-          <TableHeader>
-            <TableRow>
-              <TableHeaderCell>Person</TableHeaderCell>
-              <TableHeaderCell>Date</TableHeaderCell>
-              <TableHeaderCell>Request</TableHeaderCell>
-              <TableHeaderCell>Why not</TableHeaderCell>
+        <DataTable
+          label="Requests not honoured"
+          columns={['Person', 'Date', 'Request', 'Why not']}
+          size="small"
+        >
+          {items.map((r) => (
+            <TableRow key={`${r.staffMemberId}|${r.date}|${r.kind}`}>
+              <TableCell>{r.name}</TableCell>
+              <TableCell>{formatDate(r.date)}</TableCell>
+              <TableCell>{KIND[r.kind] ?? r.kind}</TableCell>
+              <TableCell>
+                <ul className={styles.reasons}>
+                  {r.reasons.slice(1).map((reason) => (
+                    <li key={reason}>{reason}</li>
+                  ))}
+                </ul>
+              </TableCell>
             </TableRow>
-          </TableHeader>
-          <TableBody>
-            {items.map((r) => (
-              <TableRow key={`${r.staffMemberId}|${r.date}|${r.kind}`}>
-                <TableCell>{r.name}</TableCell>
-                <TableCell>{formatDate(r.date)}</TableCell>
-                <TableCell>{KIND[r.kind] ?? r.kind}</TableCell>
-                <TableCell>
-                  <ul className={styles.reasons}>
-                    {r.reasons.slice(1).map((reason) => (
-                      <li key={reason}>{reason}</li>
-                    ))}
-                  </ul>
-                </TableCell>
-              </TableRow>
-            ))}
-          </TableBody>
-        </Table>
+          ))}
+        </DataTable>
       )}
-    </section>
+    </ReportCard>
   );
 }

@@ -1,16 +1,5 @@
 import { useEffect, useState } from 'react';
-import {
-  Button,
-  makeStyles,
-  Select,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-  tokens,
-} from '@fluentui/react-components';
+import { Button, makeStyles, Select, TableCell, TableRow, tokens } from '@fluentui/react-components';
 import {
   AVAILABILITY_STATUSES,
   type AvailabilityStatus,
@@ -18,6 +7,7 @@ import {
   DAY_PARTS,
 } from '@rotaplex/contracts';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { DataTable } from '@/ui/DataTable';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { TableSkeleton } from '@/ui/LoadingState';
 import { useNotify } from '@/ui/notify';
@@ -64,52 +54,46 @@ export function AvailabilityGrid({ staffMemberId }: { staffMemberId: string }) {
 
   return (
     <div className={styles.wrap}>
-      <Table aria-label="Weekly availability" size="small">
-        <TableHeader>
-          <TableRow>
-            <TableHeaderCell>Part of the day</TableHeaderCell>
-            {GRID_WEEKDAYS.map((w) => (
-              <TableHeaderCell key={w}>{WEEKDAY_LABELS[w]}</TableHeaderCell>
-            ))}
-          </TableRow>
-        </TableHeader>
-        <TableBody>
-          {DAY_PARTS.map((part) => (
-            <TableRow key={part}>
-              <TableCell>{DAY_PART_LABELS[part]}</TableCell>
-              {GRID_WEEKDAYS.map((w) => {
-                const key = cellKey(w, part);
-                const status = grid[key];
-                return (
-                  <TableCell
-                    key={w}
-                    className={
-                      status === 'unavailable'
-                        ? styles.unavailable
-                        : status === 'prefer-not'
-                          ? styles.prefer
-                          : undefined
-                    }
+      <DataTable
+        label="Weekly availability"
+        columns={['Part of the day', ...GRID_WEEKDAYS.map((w) => WEEKDAY_LABELS[w])]}
+        size="small"
+      >
+        {DAY_PARTS.map((part) => (
+          <TableRow key={part}>
+            <TableCell>{DAY_PART_LABELS[part]}</TableCell>
+            {GRID_WEEKDAYS.map((w) => {
+              const key = cellKey(w, part);
+              const status = grid[key];
+              return (
+                <TableCell
+                  key={w}
+                  className={
+                    status === 'unavailable'
+                      ? styles.unavailable
+                      : status === 'prefer-not'
+                        ? styles.prefer
+                        : undefined
+                  }
+                >
+                  <Select
+                    className={styles.select}
+                    aria-label={`${WEEKDAY_LABELS[w]}, ${part}`}
+                    value={status}
+                    onChange={(_, d) => set(key, d.value as AvailabilityStatus)}
                   >
-                    <Select
-                      className={styles.select}
-                      aria-label={`${WEEKDAY_LABELS[w]}, ${part}`}
-                      value={status}
-                      onChange={(_, d) => set(key, d.value as AvailabilityStatus)}
-                    >
-                      {AVAILABILITY_STATUSES.map((s) => (
-                        <option key={s} value={s}>
-                          {AVAILABILITY_LABELS[s]}
-                        </option>
-                      ))}
-                    </Select>
-                  </TableCell>
-                );
-              })}
-            </TableRow>
-          ))}
-        </TableBody>
-      </Table>
+                    {AVAILABILITY_STATUSES.map((s) => (
+                      <option key={s} value={s}>
+                        {AVAILABILITY_LABELS[s]}
+                      </option>
+                    ))}
+                  </Select>
+                </TableCell>
+              );
+            })}
+          </TableRow>
+        ))}
+      </DataTable>
       {save.error ? <ErrorBanner error={save.error} title="Your availability was not saved" /> : null}
       <div className={styles.actions}>
         <Button appearance="primary" disabled={save.isPending} onClick={() => save.mutate(grid)}>

@@ -6,11 +6,7 @@ import {
   makeStyles,
   Select,
   Subtitle1,
-  Table,
-  TableBody,
   TableCell,
-  TableHeader,
-  TableHeaderCell,
   TableRow,
   tokens,
 } from '@fluentui/react-components';
@@ -19,6 +15,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
+import { DataTable } from '@/ui/DataTable';
 import { cancelLeave, deleteDateRequest, requestKeys } from '../api/requests.queries';
 import { dateLabel, kindLabel, rangeLabel, STATUS_COLOURS, STATUS_LABELS } from '../utils/requestText';
 import { DateRequestForm } from './DateRequestForm';
@@ -94,41 +91,33 @@ export function MyRequestsView({ data }: { data: MyRequestsDto }) {
         )}
         {remove.error ? <ErrorBanner error={remove.error} title="The request was not deleted" /> : null}
         {data.dateRequests.length ? (
-          <Table aria-label="My date requests" size="small">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell>Date</TableHeaderCell>
-                <TableHeaderCell>Request</TableHeaderCell>
-                <TableHeaderCell>Shift</TableHeaderCell>
-                <TableHeaderCell>Note</TableHeaderCell>
-                <TableHeaderCell>
-                  <span className="visually-hidden">Actions</span>
-                </TableHeaderCell>
+          <DataTable
+            label="My date requests"
+            columns={['Date', 'Request', 'Shift', 'Note']}
+            actionsColumn
+            size="small"
+          >
+            {data.dateRequests.map((r) => (
+              <TableRow key={r.id}>
+                <TableCell>{dateLabel(r.date)}</TableCell>
+                <TableCell>{kindLabel(r.kind)}</TableCell>
+                <TableCell>{r.shiftTypeCode ?? ''}</TableCell>
+                <TableCell>{r.note ?? ''}</TableCell>
+                <TableCell>
+                  {periodStatus.get(r.rosterPeriodId) === 'draft' ? (
+                    <Button
+                      size="small"
+                      disabled={remove.isPending}
+                      onClick={() => remove.mutate(r.id)}
+                      aria-label={`Delete the request for ${dateLabel(r.date)}`}
+                    >
+                      Delete
+                    </Button>
+                  ) : null}
+                </TableCell>
               </TableRow>
-            </TableHeader>
-            <TableBody>
-              {data.dateRequests.map((r) => (
-                <TableRow key={r.id}>
-                  <TableCell>{dateLabel(r.date)}</TableCell>
-                  <TableCell>{kindLabel(r.kind)}</TableCell>
-                  <TableCell>{r.shiftTypeCode ?? ''}</TableCell>
-                  <TableCell>{r.note ?? ''}</TableCell>
-                  <TableCell>
-                    {periodStatus.get(r.rosterPeriodId) === 'draft' ? (
-                      <Button
-                        size="small"
-                        disabled={remove.isPending}
-                        onClick={() => remove.mutate(r.id)}
-                        aria-label={`Delete the request for ${dateLabel(r.date)}`}
-                      >
-                        Delete
-                      </Button>
-                    ) : null}
-                  </TableCell>
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
+            ))}
+          </DataTable>
         ) : null}
       </section>
 
@@ -139,46 +128,38 @@ export function MyRequestsView({ data }: { data: MyRequestsDto }) {
         {data.staffMembers.length ? <LeaveForm staffMembers={data.staffMembers} /> : null}
         {cancel.error ? <ErrorBanner error={cancel.error} title="The leave was not cancelled" /> : null}
         {data.leave.length ? (
-          <Table aria-label="My leave" size="small">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell>Dates</TableHeaderCell>
-                <TableHeaderCell>Type</TableHeaderCell>
-                <TableHeaderCell>Status</TableHeaderCell>
-                <TableHeaderCell>Note</TableHeaderCell>
-                <TableHeaderCell>
-                  <span className="visually-hidden">Actions</span>
-                </TableHeaderCell>
+          <DataTable
+            label="My leave"
+            columns={['Dates', 'Type', 'Status', 'Note']}
+            actionsColumn
+            size="small"
+          >
+            {data.leave.map((l) => (
+              <TableRow key={l.id}>
+                <TableCell>{rangeLabel(l.startDate, l.endDate)}</TableCell>
+                <TableCell>{kindLabel(l.type)}</TableCell>
+                <TableCell>
+                  <Badge appearance="tint" shape="rounded" color={STATUS_COLOURS[l.status]}>
+                    {STATUS_LABELS[l.status]}
+                  </Badge>
+                  {l.decidedBy ? ` by ${l.decidedBy}` : ''}
+                </TableCell>
+                <TableCell>{[l.note, l.decisionNote].filter(Boolean).join(' / ')}</TableCell>
+                <TableCell>
+                  {l.status === 'pending' || l.status === 'approved' ? (
+                    <Button
+                      size="small"
+                      disabled={cancel.isPending}
+                      onClick={() => cancel.mutate(l.id)}
+                      aria-label={`Cancel the leave ${rangeLabel(l.startDate, l.endDate)}`}
+                    >
+                      Cancel
+                    </Button>
+                  ) : null}
+                </TableCell>
               </TableRow>
-            </TableHeader>
-            <TableBody>
-              {data.leave.map((l) => (
-                <TableRow key={l.id}>
-                  <TableCell>{rangeLabel(l.startDate, l.endDate)}</TableCell>
-                  <TableCell>{kindLabel(l.type)}</TableCell>
-                  <TableCell>
-                    <Badge appearance="tint" shape="rounded" color={STATUS_COLOURS[l.status]}>
-                      {STATUS_LABELS[l.status]}
-                    </Badge>
-                    {l.decidedBy ? ` by ${l.decidedBy}` : ''}
-                  </TableCell>
-                  <TableCell>{[l.note, l.decisionNote].filter(Boolean).join(' / ')}</TableCell>
-                  <TableCell>
-                    {l.status === 'pending' || l.status === 'approved' ? (
-                      <Button
-                        size="small"
-                        disabled={cancel.isPending}
-                        onClick={() => cancel.mutate(l.id)}
-                        aria-label={`Cancel the leave ${rangeLabel(l.startDate, l.endDate)}`}
-                      >
-                        Cancel
-                      </Button>
-                    ) : null}
-                  </TableCell>
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
+            ))}
+          </DataTable>
         ) : (
           <EmptyState title="No leave requested yet" headingLevel="h3" />
         )}

@@ -6,11 +6,7 @@ import {
   Input,
   makeStyles,
   Select,
-  Table,
-  TableBody,
   TableCell,
-  TableHeader,
-  TableHeaderCell,
   TableRow,
   tokens,
 } from '@fluentui/react-components';
@@ -25,9 +21,8 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { rosterPeriodsQuery } from '@/features/planning/api/planning.queries';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
-import { TableSkeleton } from '@/ui/LoadingState';
 import { useNotify } from '@/ui/notify';
-import { Pagination } from '@/ui/Pagination';
+import { PagedTable } from '@/ui/DataTable';
 import {
   approveLeave,
   declineLeave,
@@ -126,76 +121,58 @@ export function RequestsTable({ unit }: { unit: UnitDto }) {
       </div>
       {rows.error ? <ErrorBanner error={rows.error} onRetry={() => void rows.refetch()} /> : null}
       {decide.error ? <ErrorBanner error={decide.error} title="The decision was not saved" /> : null}
-      {rows.isPending ? <TableSkeleton label="Loading requests" /> : null}
-      {rows.data && rows.data.items.length === 0 ? (
-        <EmptyState title="No requests match these filters" headingLevel="h3" />
-      ) : null}
-      {rows.data && rows.data.items.length > 0 ? (
-        <>
-          <Table aria-label={`Requests of ${unit.name}`} size="small">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell>Person</TableHeaderCell>
-                <TableHeaderCell>Dates</TableHeaderCell>
-                <TableHeaderCell>Request</TableHeaderCell>
-                <TableHeaderCell>Status</TableHeaderCell>
-                <TableHeaderCell>Note</TableHeaderCell>
-                <TableHeaderCell>
-                  <span className="visually-hidden">Actions</span>
-                </TableHeaderCell>
-              </TableRow>
-            </TableHeader>
-            <TableBody>
-              {rows.data.items.map((r) => (
-                <TableRow key={r.id}>
-                  <TableCell>{r.staffName}</TableCell>
-                  <TableCell>{rangeLabel(r.startDate, r.endDate)}</TableCell>
-                  <TableCell>
-                    {kindLabel(r.kind)}
-                    {r.shiftTypeCode ? ` ${r.shiftTypeCode}` : ''}
-                  </TableCell>
-                  <TableCell>
-                    <Badge appearance="tint" shape="rounded" color={STATUS_COLOURS[r.status]}>
-                      {STATUS_LABELS[r.status]}
-                    </Badge>
-                  </TableCell>
-                  <TableCell>{r.note ?? ''}</TableCell>
-                  <TableCell>
-                    {r.type === 'leave' && r.status === 'pending' ? (
-                      <div className={styles.actions}>
-                        <Button
-                          size="small"
-                          appearance="primary"
-                          disabled={decide.isPending}
-                          aria-label={`Approve leave of ${r.staffName}, ${rangeLabel(r.startDate, r.endDate)}`}
-                          onClick={() => decide.mutate({ id: r.id, approve: true })}
-                        >
-                          Approve
-                        </Button>
-                        <Button
-                          size="small"
-                          disabled={decide.isPending}
-                          aria-label={`Decline leave of ${r.staffName}, ${rangeLabel(r.startDate, r.endDate)}`}
-                          onClick={() => decide.mutate({ id: r.id, approve: false })}
-                        >
-                          Decline
-                        </Button>
-                      </div>
-                    ) : null}
-                  </TableCell>
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
-          <Pagination
-            label="Requests"
-            page={page}
-            pageSize={pageSize}
-            total={rows.data.total}
-            onPageChange={setPage}
-          />
-        </>
-      ) : null}
+      <PagedTable
+        result={rows}
+        loadingLabel="Loading requests"
+        empty={<EmptyState title="No requests match these filters" headingLevel="h3" />}
+        label={`Requests of ${unit.name}`}
+        columns={['Person', 'Dates', 'Request', 'Status', 'Note']}
+        actionsColumn
+        size="small"
+        page={page}
+        pageSize={pageSize}
+        onPageChange={setPage}
+        pagerLabel="Requests"
+        row={(r) => (
+          <TableRow key={r.id}>
+            <TableCell>{r.staffName}</TableCell>
+            <TableCell>{rangeLabel(r.startDate, r.endDate)}</TableCell>
+            <TableCell>
+              {kindLabel(r.kind)}
+              {r.shiftTypeCode ? ` ${r.shiftTypeCode}` : ''}
+            </TableCell>
+            <TableCell>
+              <Badge appearance="tint" shape="rounded" color={STATUS_COLOURS[r.status]}>
+                {STATUS_LABELS[r.status]}
+              </Badge>
+            </TableCell>
+            <TableCell>{r.note ?? ''}</TableCell>
+            <TableCell>
+              {r.type === 'leave' && r.status === 'pending' ? (
+                <div className={styles.actions}>
+                  <Button
+                    size="small"
+                    appearance="primary"
+                    disabled={decide.isPending}
+                    aria-label={`Approve leave of ${r.staffName}, ${rangeLabel(r.startDate, r.endDate)}`}
+                    onClick={() => decide.mutate({ id: r.id, approve: true })}
+                  >
+                    Approve
+                  </Button>
+                  <Button
+                    size="small"
+                    disabled={decide.isPending}
+                    aria-label={`Decline leave of ${r.staffName}, ${rangeLabel(r.startDate, r.endDate)}`}
+                    onClick={() => decide.mutate({ id: r.id, approve: false })}
+                  >
+                    Decline
+                  </Button>
+                </div>
+              ) : null}
+            </TableCell>
+          </TableRow>
+        )}
+      />
     </>
   );
 }

@@ -1,14 +1,7 @@
-import {
-  Button,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-} from '@fluentui/react-components';
+import { Button, TableCell, TableRow } from '@fluentui/react-components';
 import type { OpenShiftDto } from '@rotaplex/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { DataTable } from '@/ui/DataTable';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
 import { claimOpenShift, swapKeys } from '../api/swaps.queries';
@@ -38,43 +31,35 @@ export function OpenShiftList({ openShifts, canClaim }: OpenShiftListProps) {
   return (
     <>
       {claim.error ? <ErrorBanner error={claim.error} title="The shift was not claimed" /> : null}
-      <Table aria-label="Open shifts" size="small">
-        <TableHeader>
-          <TableRow>
-            <TableHeaderCell>Day</TableHeaderCell>
-            <TableHeaderCell>Shift</TableHeaderCell>
-            <TableHeaderCell>Skill</TableHeaderCell>
-            <TableHeaderCell>Still wanted</TableHeaderCell>
-            <TableHeaderCell>Claims waiting</TableHeaderCell>
-            {canClaim ? <TableHeaderCell>Action</TableHeaderCell> : null}
-          </TableRow>
-        </TableHeader>
-        <TableBody>
-          {openShifts.map((o) => (
-            <TableRow key={`${o.rosterPeriodId}|${o.date}|${o.shiftTypeId}|${o.skillId ?? ''}`}>
-              <TableCell>{dayLabel(o.date)}</TableCell>
+      <DataTable
+        label="Open shifts"
+        columns={['Day', 'Shift', 'Skill', 'Still wanted', 'Claims waiting', ...(canClaim ? ['Action'] : [])]}
+        size="small"
+      >
+        {openShifts.map((o) => (
+          <TableRow key={`${o.rosterPeriodId}|${o.date}|${o.shiftTypeId}|${o.skillId ?? ''}`}>
+            <TableCell>{dayLabel(o.date)}</TableCell>
+            <TableCell>
+              {o.shiftName} ({o.shiftCode}) {o.start}–{o.end}
+            </TableCell>
+            <TableCell>{o.skillCode ?? 'Any'}</TableCell>
+            <TableCell>{o.short}</TableCell>
+            <TableCell>{o.pendingClaims}</TableCell>
+            {canClaim ? (
               <TableCell>
-                {o.shiftName} ({o.shiftCode}) {o.start}–{o.end}
+                <Button
+                  size="small"
+                  appearance="primary"
+                  disabled={claim.isPending}
+                  onClick={() => claim.mutate(o)}
+                >
+                  Claim
+                </Button>
               </TableCell>
-              <TableCell>{o.skillCode ?? 'Any'}</TableCell>
-              <TableCell>{o.short}</TableCell>
-              <TableCell>{o.pendingClaims}</TableCell>
-              {canClaim ? (
-                <TableCell>
-                  <Button
-                    size="small"
-                    appearance="primary"
-                    disabled={claim.isPending}
-                    onClick={() => claim.mutate(o)}
-                  >
-                    Claim
-                  </Button>
-                </TableCell>
-              ) : null}
-            </TableRow>
-          ))}
-        </TableBody>
-      </Table>
+            ) : null}
+          </TableRow>
+        ))}
+      </DataTable>
     </>
   );
 }

@@ -1,20 +1,9 @@
-import {
-  Badge,
-  Button,
-  Caption1,
-  makeStyles,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-  tokens,
-} from '@fluentui/react-components';
+import { Badge, Button, Caption1, makeStyles, TableCell, TableRow, tokens } from '@fluentui/react-components';
 import type { SwapAction, SwapRequestDto } from '@rotaplex/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
+import { DataTable } from '@/ui/DataTable';
 import { cancelSwap, decideSwap, swapKeys } from '../api/swaps.queries';
 import { changeSummary, KIND_LABELS, STATUS_LABELS, statusColour } from '../utils/swapText';
 
@@ -53,51 +42,41 @@ export function SwapList({ swaps, label }: SwapListProps) {
   return (
     <>
       {act.error ? <ErrorBanner error={act.error} title="The decision was not made" /> : null}
-      <Table aria-label={label} size="small">
-        <TableHeader>
-          <TableRow>
-            <TableHeaderCell>Request</TableHeaderCell>
-            <TableHeaderCell>Change</TableHeaderCell>
-            <TableHeaderCell>State</TableHeaderCell>
-            <TableHeaderCell>Actions</TableHeaderCell>
+      <DataTable label={label} columns={['Request', 'Change', 'State', 'Actions']} size="small">
+        {swaps.map((s) => (
+          <TableRow key={s.id} data-swap-id={s.id}>
+            <TableCell>
+              {KIND_LABELS[s.kind]}: {s.proposerName}
+              {s.colleagueName ? ` with ${s.colleagueName}` : ''}
+            </TableCell>
+            <TableCell>
+              {changeSummary(s.changes)}
+              {s.note ? <Caption1 className={styles.outcome}>Note: {s.note}</Caption1> : null}
+            </TableCell>
+            <TableCell>
+              <Badge appearance="tint" color={statusColour(s.status)}>
+                {STATUS_LABELS[s.status]}
+              </Badge>
+              {s.outcome ? <Caption1 className={styles.outcome}>{s.outcome}</Caption1> : null}
+            </TableCell>
+            <TableCell>
+              <div className={styles.actions}>
+                {s.actions.map((action) => (
+                  <Button
+                    key={action}
+                    size="small"
+                    appearance={action === 'accept' || action === 'approve' ? 'primary' : 'secondary'}
+                    disabled={act.isPending}
+                    onClick={() => act.mutate({ swap: s, action })}
+                  >
+                    {ACTION_LABELS[action]}
+                  </Button>
+                ))}
+              </div>
+            </TableCell>
           </TableRow>
-        </TableHeader>
-        <TableBody>
-          {swaps.map((s) => (
-            <TableRow key={s.id} data-swap-id={s.id}>
-              <TableCell>
-                {KIND_LABELS[s.kind]}: {s.proposerName}
-                {s.colleagueName ? ` with ${s.colleagueName}` : ''}
-              </TableCell>
-              <TableCell>
-                {changeSummary(s.changes)}
-                {s.note ? <Caption1 className={styles.outcome}>Note: {s.note}</Caption1> : null}
-              </TableCell>
-              <TableCell>
-                <Badge appearance="tint" color={statusColour(s.status)}>
-                  {STATUS_LABELS[s.status]}
-                </Badge>
-                {s.outcome ? <Caption1 className={styles.outcome}>{s.outcome}</Caption1> : null}
-              </TableCell>
-              <TableCell>
-                <div className={styles.actions}>
-                  {s.actions.map((action) => (
-                    <Button
-                      key={action}
-                      size="small"
-                      appearance={action === 'accept' || action === 'approve' ? 'primary' : 'secondary'}
-                      disabled={act.isPending}
-                      onClick={() => act.mutate({ swap: s, action })}
-                    >
-                      {ACTION_LABELS[action]}
-                    </Button>
-                  ))}
-                </div>
-              </TableCell>
-            </TableRow>
-          ))}
-        </TableBody>
-      </Table>
+        ))}
+      </DataTable>
     </>
   );
 }
