@@ -1,13 +1,12 @@
 import {
   type AssignmentGridDto,
-  PLANNING_ROUTES as P,
   REST_RULE_WARNING,
   type RosterPeriodDto,
   type ShiftTypeDto,
   SOLVING_ROUTES as R,
   type SolveRunDto,
-  type UnitDto,
 } from '@rotaplex/contracts';
+import { createPeriod, findUnit, readGrid, shiftTypesByCode } from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 describe('/api/roster-periods/:id/assignments', () => {
@@ -24,35 +23,14 @@ describe('/api/roster-periods/:id/assignments', () => {
     manager = (await t.login('manager@example.com')).token;
     manager2 = (await t.login('manager2@example.com')).token;
     staff = (await t.login('staff@example.com')).token;
-    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
-    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    const ward = await findUnit(t, admin);
     // A one-week draft of the demo ward (its people, contracts and needs): solved within seconds.
-    period = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: '2030-01-07', days: 7 })
-        .expect(201)
-    ).body as RosterPeriodDto;
-    const types = (
-      await t
-        .http()
-        .get(api(P.shiftTypes(ward.id)))
-        .set(bearer(manager))
-    ).body as ShiftTypeDto[];
-    shifts = Object.fromEntries(types.map((s) => [s.code, s]));
+    period = await createPeriod(t, manager, ward.id, '2030-01-07');
+    shifts = await shiftTypesByCode(t, manager, ward.id);
   });
   afterAll(() => t.close());
 
-  const grid = async (token = manager) =>
-    (
-      await t
-        .http()
-        .get(api(R.assignments(period.id)))
-        .set(bearer(token))
-        .expect(200)
-    ).body as AssignmentGridDto;
+  const grid = (token = manager) => readGrid(t, token, period.id);
   const edit = (body: object, token = manager) =>
     t
       .http()

@@ -1,16 +1,20 @@
 import {
   type CalendarFeedDto,
   MY_ROSTER_ROUTES as M,
-  type Page,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
   type ShiftTypeDto,
-  PUBLISHING_ROUTES,
-  SOLVING_ROUTES as S,
   type StaffMemberDto,
-  type UnitDto,
 } from '@rotaplex/contracts';
 import ICAL from 'ical.js';
+import {
+  createPeriod,
+  findUnit,
+  publishPeriod,
+  putCell,
+  shiftTypesByCode,
+  staffByName,
+} from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /**
@@ -62,23 +66,6 @@ function parseFeed(text: string): { calendar: Component; events: Map<string, Par
   return { calendar, events };
 }
 
-/** Publishes a draft period through the publish endpoint, with the version it has now. */
-async function publish(t: TestApp, manager: string, periodId: string): Promise<void> {
-  const current = (
-    await t
-      .http()
-      .get(api(P.rosterPeriod(periodId)))
-      .set(bearer(manager))
-      .expect(200)
-  ).body as RosterPeriodDto;
-  await t
-    .http()
-    .post(api(PUBLISHING_ROUTES.publish(periodId)))
-    .set(bearer(manager))
-    .send({ version: current.version })
-    .expect(200);
-}
-
 describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
   let t: TestApp;
   let manager: string;
@@ -96,52 +83,26 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
   };
   const uidOf = (staffMemberId: string, date: string) => `${date}-${staffMemberId}@rotaplex`;
   const setCell = (staffMemberId: string, date: string, code: string | null) =>
-    t
-      .http()
-      .put(api(S.assignmentCell(period.id)))
-      .set(bearer(manager))
-      .send({ staffMemberId, date, shiftTypeId: code ? shifts[code].id : null })
-      .expect(200);
+    putCell(t, manager, period.id, { staffMemberId, date, shiftTypeId: code ? shifts[code].id : null });
 
   beforeAll(async () => {
     t = await startTestApp();
     manager = (await t.login('manager@example.com')).token;
     staff = (await t.login('staff@example.com')).token;
-    const units = (await t.http().get(api('/units')).set(bearer(manager))).body as UnitDto[];
-    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    const ward = await findUnit(t, manager);
     expect(ward.timeZone).toBe('Europe/London');
-    const types = (
-      await t
-        .http()
-        .get(api(P.shiftTypes(ward.id)))
-        .set(bearer(manager))
-    ).body as ShiftTypeDto[];
-    shifts = Object.fromEntries(types.map((s) => [s.code, s]));
-    const people = (
-      await t
-        .http()
-        .get(api(P.staff))
-        .query({ unitId: ward.id, pageSize: 100 })
-        .set(bearer(manager))
-        .expect(200)
-    ).body as Page<StaffMemberDto>;
-    robin = people.items.find((p) => p.name === 'Robin Tallis')!;
-    grace = people.items.find((p) => p.name === 'Grace Holloway')!;
+    shifts = await shiftTypesByCode(t, manager, ward.id);
+    const person = await staffByName(t, manager, ward.id);
+    robin = person('Robin Tallis');
+    grace = person('Grace Holloway');
     // A week across the 2030 spring clock change (31 March).
-    period = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: '2030-03-27', days: 7 })
-        .expect(201)
-    ).body as RosterPeriodDto;
+    period = await createPeriod(t, manager, ward.id, '2030-03-27');
     await setCell(robin.id, '2030-03-28', 'E');
     await setCell(robin.id, '2030-03-30', 'N');
     await setCell(robin.id, '2030-04-01', 'E');
     await setCell(robin.id, '2030-04-02', 'L');
     await setCell(grace.id, '2030-03-30', 'L');
-    await publish(t, manager, period.id);
+    await publishPeriod(t, manager, period.id);
   });
   afterAll(() => t.close());
 

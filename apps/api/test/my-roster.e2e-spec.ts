@@ -4,30 +4,19 @@ import {
   type Page,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
-  type ShiftTypeDto,
-  PUBLISHING_ROUTES,
-  SOLVING_ROUTES as S,
   type StaffMemberDto,
   type UnitDto,
 } from '@rotaplex/contracts';
+import {
+  createPeriod,
+  DEMO_WARD,
+  listUnits,
+  publishPeriod,
+  putCell,
+  shiftTypesByCode,
+  staffByName,
+} from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
-
-/** Publishes a draft period through the publish endpoint, with the version it has now. */
-async function publish(t: TestApp, manager: string, periodId: string): Promise<void> {
-  const current = (
-    await t
-      .http()
-      .get(api(P.rosterPeriod(periodId)))
-      .set(bearer(manager))
-      .expect(200)
-  ).body as RosterPeriodDto;
-  await t
-    .http()
-    .post(api(PUBLISHING_ROUTES.publish(periodId)))
-    .set(bearer(manager))
-    .send({ version: current.version })
-    .expect(200);
-}
 
 /**
  * GET /api/me/shifts: my published shifts and my unit's, colleagues with name and shift only
@@ -52,39 +41,14 @@ describe('/api/me/shifts', () => {
     t = await startTestApp();
     manager = (await t.login('manager@example.com')).token;
     staff = (await t.login('staff@example.com')).token;
-    const units = (
-      await t
-        .http()
-        .get(api('/units'))
-        .set(bearer((await t.login('admin@example.com')).token))
-    ).body as UnitDto[];
-    ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    const units = await listUnits(t, (await t.login('admin@example.com')).token);
+    ward = units.find((u) => u.name === DEMO_WARD)!;
     contact = units.find((u) => u.name === 'Contact Centre North')!;
-    const types = (
-      await t
-        .http()
-        .get(api(P.shiftTypes(ward.id)))
-        .set(bearer(manager))
-    ).body as ShiftTypeDto[];
-    const shift = Object.fromEntries(types.map((s) => [s.code, s]));
-    const people = (
-      await t
-        .http()
-        .get(api(P.staff))
-        .query({ unitId: ward.id, pageSize: 100 })
-        .set(bearer(manager))
-        .expect(200)
-    ).body as Page<StaffMemberDto>;
-    robin = people.items.find((p) => p.name === 'Robin Tallis')!;
-    grace = people.items.find((p) => p.name === 'Grace Holloway')!;
-    period = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: '2030-03-27', days: 7 })
-        .expect(201)
-    ).body as RosterPeriodDto;
+    const shift = await shiftTypesByCode(t, manager, ward.id);
+    const person = await staffByName(t, manager, ward.id);
+    robin = person('Robin Tallis');
+    grace = person('Grace Holloway');
+    period = await createPeriod(t, manager, ward.id, '2030-03-27');
     const cells: [string, string, string][] = [
       [robin.id, '2030-03-30', 'N'],
       [robin.id, '2030-04-01', 'E'],
@@ -92,12 +56,7 @@ describe('/api/me/shifts', () => {
       [grace.id, '2030-04-02', 'E'],
     ];
     for (const [staffMemberId, date, code] of cells) {
-      await t
-        .http()
-        .put(api(S.assignmentCell(period.id)))
-        .set(bearer(manager))
-        .send({ staffMemberId, date, shiftTypeId: shift[code].id })
-        .expect(200);
+      await putCell(t, manager, period.id, { staffMemberId, date, shiftTypeId: shift[code].id });
     }
   });
   afterAll(() => t.close());
@@ -110,7 +69,7 @@ describe('/api/me/shifts', () => {
   });
 
   it("lists my published shifts and my unit's, as UTC instants with the unit's zone", async () => {
-    await publish(t, manager, period.id);
+    await publishPeriod(t, manager, period.id);
     const body = (await myShifts(staff, { from: '2030-03-27', to: '2030-04-02' }).expect(200))
       .body as MyRosterDto;
     expect(body.shifts.map((s) => [s.date, s.name, s.shiftCode, s.mine, s.start, s.end])).toEqual([

@@ -1,8 +1,5 @@
 import {
-  type MailMessageDto,
-  type MailMessageSummaryDto,
   type OpenShiftDto,
-  type Page,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
   type ShiftTypeDto,
@@ -10,14 +7,21 @@ import {
   SWAP_DECISION_WEB_PATH,
   SWAP_ROUTES as S,
   type SwapRequestDto,
-  type UnitDto,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
-import { ContractEntity } from '../src/contracts/contract.entity';
-import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/roster-periods/roster-periods.service';
-import { StaffMemberEntity } from '../src/staff/staff-member.entity';
-import { linkToken } from './support/mailbox';
+import { linkToken, nextMailTo } from './support/mailbox';
+import {
+  createPeriod,
+  findUnit,
+  idsByEmail,
+  markPublished,
+  restOnlyContract,
+  shiftTypesByCode,
+  WARD_PEOPLE,
+  type WardPerson,
+  loginAll,
+} from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /**
@@ -30,20 +34,14 @@ describe('open shifts', () => {
   let t: TestApp;
   let admin: string;
   let manager: string;
-  const tokens: Record<string, string> = {};
+  let tokens: Record<Who, string>;
   let period: RosterPeriodDto;
   let shift: Record<string, ShiftTypeDto>;
   let skill: Record<string, string>;
   let staffId: Record<string, string>;
   const seen = new Set<string>();
-  const EMAIL = {
-    a: 'staff@example.com',
-    b: 'priya.wendover@example.com',
-    c: 'tomasz.kellaway@example.com',
-    d: 'grace.holloway@example.com',
-    contact: 'sofia.marin@example.com',
-  } as const;
-  type Who = keyof typeof EMAIL;
+  const EMAIL = WARD_PEOPLE;
+  type Who = WardPerson;
   const START = '2030-01-07'; // a Monday
   const day = (n: number) => addDays(START, n);
 
@@ -51,55 +49,17 @@ describe('open shifts', () => {
     t = await startTestApp({ LOGIN_RATE_LIMIT: '1000' });
     admin = (await t.login('admin@example.com')).token;
     manager = (await t.login('manager@example.com')).token;
-    for (const [who, email] of Object.entries(EMAIL)) tokens[who] = (await t.login(email)).token;
-    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
-    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
-    period = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: START, days: 7 })
-        .expect(201)
-    ).body as RosterPeriodDto;
-    const types = (
-      await t
-        .http()
-        .get(api(P.shiftTypes(ward.id)))
-        .set(bearer(manager))
-    ).body as ShiftTypeDto[];
-    shift = Object.fromEntries(types.map((s) => [s.code, s]));
+    tokens = await loginAll(t, EMAIL);
+    const ward = await findUnit(t, admin);
+    period = await createPeriod(t, manager, ward.id, START);
+    shift = await shiftTypesByCode(t, manager, ward.id);
     const skills = (await t.http().get(api(P.skills)).set(bearer(manager))).body as SkillDto[];
     skill = Object.fromEntries(skills.map((s) => [s.code, s.id]));
-    const em = t.dataSource.manager;
-    const [{ organisationId }] = (await em.query(`SELECT "organisationId" FROM "units" WHERE "id" = ?`, [
-      ward.id,
-    ])) as { organisationId: string }[];
-    const contract = await em.save(
-      em.create(ContractEntity, {
-        organisationId,
-        unitId: null,
-        name: 'Rest only (test)',
-        maxShiftsPerType: null,
-        minPaidMinutes: null,
-        maxPaidMinutes: null,
-        targetPaidMinutes: null,
-        maxConsecutiveWorkDays: null,
-        minConsecutiveWorkDays: null,
-        minConsecutiveDaysOff: null,
-        maxWeekends: null,
-        maxConsecutiveNights: null,
-        minRestMinutes: 660,
-      }),
-    );
-    await em.update(StaffMemberEntity, { unitId: ward.id }, { contractId: contract.id });
-    const staff = await em.findBy(StaffMemberEntity, { unitId: ward.id });
-    staffId = Object.fromEntries(
-      (Object.keys(EMAIL) as Who[]).map((w) => [w, staff.find((s) => s.email === EMAIL[w])?.id ?? '']),
-    );
+    const staff = await restOnlyContract(t, ward.id);
+    staffId = idsByEmail(staff, EMAIL);
     await setCell('a', 0, 'L');
     await setCell('d', 4, 'N');
-    await em.update(RosterPeriodEntity, { id: period.id }, { status: 'published', publishedAt: new Date() });
+    await markPublished(t, period.id);
   });
   afterAll(() => t.close());
 
@@ -142,26 +102,7 @@ describe('open shifts', () => {
         shiftTypeId: shift[code].id,
         skillId: skill[skillCode],
       });
-  const mailTo = async (to: string, subject: RegExp): Promise<MailMessageDto> => {
-    for (let i = 0; i < 100; i++) {
-      const page = (
-        await t.http().get(api('/mailbox')).query({ q: to, pageSize: 100 }).set(bearer(admin)).expect(200)
-      ).body as Page<MailMessageSummaryDto>;
-      const hit = page.items.find((m) => m.to.includes(to) && subject.test(m.subject) && !seen.has(m.id));
-      if (hit) {
-        seen.add(hit.id);
-        return (
-          await t
-            .http()
-            .get(api(`/mailbox/${hit.id}`))
-            .set(bearer(admin))
-            .expect(200)
-        ).body as MailMessageDto;
-      }
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    throw new Error(`no mail to ${to} matching ${subject}`);
-  };
+  const mailTo = (to: string, subject: RegExp) => nextMailTo(t, admin, seen, to, subject);
 
   it('offers staff only the open shifts they have the skill for and the checker allows', async () => {
     const mine = await list(tokens.a);

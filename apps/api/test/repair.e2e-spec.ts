@@ -2,13 +2,12 @@ import {
   type AssignmentGridDto,
   type AuditEntryDto,
   type Page,
-  PLANNING_ROUTES as P,
   PUBLISHING_ROUTES as PUB,
   type RosterPeriodDto,
-  SOLVING_ROUTES as R,
 } from '@rotaplex/contracts';
 import { LeaveRequestEntity } from '../src/requests/requests.entities';
 import { generate, outboxSettled, smallUnit, waitForRun } from './publishing-fixture';
+import { publishPeriod, readGrid, readPeriod } from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 jest.setTimeout(240_000);
@@ -23,14 +22,7 @@ describe('POST /api/roster-periods/:id/repair', () => {
   let period: RosterPeriodDto;
   const savedEnv = { ...process.env };
 
-  const grid = async () =>
-    (
-      await t
-        .http()
-        .get(api(R.assignments(period.id)))
-        .set(bearer(manager))
-        .expect(200)
-    ).body as AssignmentGridDto;
+  const grid = () => readGrid(t, manager, period.id);
   const cellKey = (staffMemberId: string, date: string) => `${staffMemberId}|${date}`;
   const cellsOf = (g: AssignmentGridDto) =>
     new Map(
@@ -79,20 +71,7 @@ describe('POST /api/roster-periods/:id/repair', () => {
   });
 
   it('after sick leave, re-solves against the published roster: leave honoured, no hard violation, changes audited and e-mailed to the people concerned only', async () => {
-    const version = (
-      (
-        await t
-          .http()
-          .get(api(P.rosterPeriod(period.id)))
-          .set(bearer(manager))
-      ).body as RosterPeriodDto
-    ).version;
-    await t
-      .http()
-      .post(api(PUB.publish(period.id)))
-      .set(bearer(manager))
-      .send({ version })
-      .expect(200);
+    const version = await publishPeriod(t, manager, period.id);
     await outboxSettled(t);
     const before = await grid();
     expect(before.check.violations).toEqual([]);
@@ -162,12 +141,7 @@ describe('POST /api/roster-periods/:id/repair', () => {
     }
 
     // The period's version moved on; the board stays published.
-    const now = (
-      await t
-        .http()
-        .get(api(P.rosterPeriod(period.id)))
-        .set(bearer(manager))
-    ).body as RosterPeriodDto;
+    const now = await readPeriod(t, manager, period.id);
     expect(now).toMatchObject({ status: 'published', version: version + 2 });
 
     // One "changed" e-mail per person whose cells changed (with an address), nobody else.

@@ -1,16 +1,13 @@
 import {
-  type AssignmentGridDto,
   PAYROLL_CSV_COLUMNS,
   type PeriodReportDto,
   PLANNING_ROUTES as P,
   REPORTS_ROUTES,
   type RosterPeriodDto,
-  type ShiftTypeDto,
-  SOLVING_ROUTES as R,
-  type UnitDto,
 } from '@rotaplex/contracts';
 import { parse } from 'csv-parse/sync';
 import { randomUUID } from 'node:crypto';
+import { createPeriod, findUnit, putCell, readGrid, shiftTypesByCode } from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /**
@@ -37,30 +34,10 @@ describe('/api/reports', () => {
     manager = (await t.login('manager@example.com')).token;
     manager2 = (await t.login('manager2@example.com')).token;
     staff = (await t.login('staff@example.com')).token;
-    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
-    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
-    period = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: MON, days: 7 })
-        .expect(201)
-    ).body as RosterPeriodDto;
-    const types = (
-      await t
-        .http()
-        .get(api(P.shiftTypes(ward.id)))
-        .set(bearer(manager))
-    ).body as ShiftTypeDto[];
-    const shift = Object.fromEntries(types.map((s) => [s.code, s.id]));
-    const grid = (
-      await t
-        .http()
-        .get(api(R.assignments(period.id)))
-        .set(bearer(manager))
-        .expect(200)
-    ).body as AssignmentGridDto;
+    const ward = await findUnit(t, admin);
+    period = await createPeriod(t, manager, ward.id, MON);
+    const shift = await shiftTypesByCode(t, manager, ward.id);
+    const grid = await readGrid(t, manager, period.id);
     ids = Object.fromEntries(grid.rows.map((r) => [r.name, r.staffMemberId]));
     const cells: [string, string, string][] = [
       ['Priya Wendover', MON, 'E'],
@@ -71,12 +48,7 @@ describe('/api/reports', () => {
       ['Beth Lindqvist', SUN, 'E'],
     ];
     for (const [name, date, code] of cells) {
-      await t
-        .http()
-        .put(api(R.assignmentCell(period.id)))
-        .set(bearer(manager))
-        .send({ staffMemberId: ids[name], date, shiftTypeId: shift[code] })
-        .expect(200);
+      await putCell(t, manager, period.id, { staffMemberId: ids[name], date, shiftTypeId: shift[code].id });
     }
   });
   afterAll(() => t.close());
@@ -168,13 +140,7 @@ describe('/api/reports', () => {
 
   it("agrees with the checker's objective terms the planning board shows for the same roster", async () => {
     const report = await getReport();
-    const grid = (
-      await t
-        .http()
-        .get(api(R.assignments(period.id)))
-        .set(bearer(manager))
-        .expect(200)
-    ).body as AssignmentGridDto;
+    const grid = await readGrid(t, manager, period.id);
     expect(report.objectiveTerms).toEqual(grid.check.terms);
     expect(report.objective).toBeCloseTo(grid.check.objective, 9);
     expect(report.totals.violations).toBe(grid.check.violations.length);

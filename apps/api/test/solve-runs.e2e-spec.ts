@@ -1,16 +1,15 @@
 import {
-  type AssignmentGridDto,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
   SOLVING_ROUTES as R,
   type SolveRunDto,
-  type UnitDto,
 } from '@rotaplex/contracts';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { SolveRunEntity } from '../src/solve-runs/solve-run.entity';
 import { RESTARTED_MESSAGE, SolveRunsService } from '../src/solve-runs/solve-runs.service';
+import { createPeriod, findUnit, readGrid } from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /** Polls `read` until `done` holds (real solves on the worker pool take seconds). */
@@ -64,19 +63,11 @@ describe('solve runs', () => {
     manager = (await t.login('manager@example.com')).token;
     manager2 = (await t.login('manager2@example.com')).token;
     staff = (await t.login('staff@example.com')).token;
-    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
-    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    const ward = await findUnit(t, admin);
     const periods = (await t.http().get(api(P.rosterPeriods)).query({ unitId: ward.id }).set(bearer(manager)))
       .body as RosterPeriodDto[];
     period = periods[0];
-    week = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: '2030-01-07', days: 7 })
-        .expect(201)
-    ).body as RosterPeriodDto;
+    week = await createPeriod(t, manager, ward.id, '2030-01-07');
   });
   afterAll(() => t.close());
 
@@ -208,13 +199,7 @@ describe('solve runs', () => {
 
     // The stored roster, read back and re-checked by the independent checker, is the solver's roster:
     // no hard-rule violation and the same objective (the solver's own result is checked the same way).
-    const grid = (
-      await t
-        .http()
-        .get(api(R.assignments(week.id)))
-        .set(bearer(manager))
-        .expect(200)
-    ).body as AssignmentGridDto;
+    const grid = await readGrid(t, manager, week.id);
     expect(grid.dates).toHaveLength(week.days);
     const worked = grid.rows.flatMap((r) => r.cells).filter((c) => c.shiftTypeId !== null);
     expect(worked.length).toBeGreaterThan(0);
@@ -260,13 +245,7 @@ describe('solve runs', () => {
     const run = res.body as SolveRunDto;
     expect(run.status).toBe('cancelled');
     expect(run.result!.objective).not.toBeNull();
-    const grid = (
-      await t
-        .http()
-        .get(api(R.assignments(period.id)))
-        .set(bearer(manager))
-        .expect(200)
-    ).body as AssignmentGridDto;
+    const grid = await readGrid(t, manager, period.id);
     expect(grid.rows.flatMap((r) => r.cells).some((c) => c.shiftTypeId !== null)).toBe(true);
     // Cancelling again: the run has ended.
     await t
@@ -294,13 +273,7 @@ describe('solve runs', () => {
   }, 180_000);
 
   it('fails the run and saves nothing when the period stops being a draft during the solve', async () => {
-    const before = (
-      await t
-        .http()
-        .get(api(R.assignments(period.id)))
-        .set(bearer(manager))
-        .expect(200)
-    ).body as AssignmentGridDto;
+    const before = await readGrid(t, manager, period.id);
     const { id } = (await start({ timeLimitSeconds: 120 }).expect(202)).body as { id: string };
     await untilImproving(id);
     // Publishing is another feature; set the status directly as it would.
@@ -315,13 +288,7 @@ describe('solve runs', () => {
       ).body as SolveRunDto;
       expect(run.status).toBe('failed');
       expect(run.errorMessage).toMatch(/published during the solve/);
-      const after = (
-        await t
-          .http()
-          .get(api(R.assignments(period.id)))
-          .set(bearer(manager))
-          .expect(200)
-      ).body as AssignmentGridDto;
+      const after = await readGrid(t, manager, period.id);
       expect(after.rows).toEqual(before.rows);
       // A published period cannot be generated.
       expect((await start({ timeLimitSeconds: 2 })).status).toBe(409);

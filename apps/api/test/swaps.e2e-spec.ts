@@ -1,8 +1,5 @@
 import {
   type MailMessageDto,
-  type MailMessageSummaryDto,
-  type Page,
-  PLANNING_ROUTES as P,
   type RosterPeriodDto,
   type ShiftTypeDto,
   type SwapLinkViewDto,
@@ -10,15 +7,23 @@ import {
   type SwapRequestDto,
   SWAP_DECISION_WEB_PATH,
   SWAP_ROUTES as S,
-  type UnitDto,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
-import { ContractEntity } from '../src/contracts/contract.entity';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/roster-periods/roster-periods.service';
-import { StaffMemberEntity } from '../src/staff/staff-member.entity';
 import { SwapLinkTokenEntity } from '../src/swaps/swap-request.entity';
-import { linkToken } from './support/mailbox';
+import { linkToken, nextMailTo } from './support/mailbox';
+import {
+  createPeriod,
+  findUnit,
+  idsByEmail,
+  markPublished,
+  restOnlyContract,
+  shiftTypesByCode,
+  WARD_PEOPLE,
+  type WardPerson,
+  loginAll,
+} from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /**
@@ -34,20 +39,14 @@ describe('swaps', () => {
   let admin: string;
   let manager: string;
   let manager2: string;
-  const tokens: Record<string, string> = {};
+  let tokens: Record<Who, string>;
   let period: RosterPeriodDto;
   let shift: Record<string, ShiftTypeDto>;
   let staffId: Record<string, string>;
   const seen = new Set<string>();
 
-  const EMAIL = {
-    a: 'staff@example.com',
-    b: 'priya.wendover@example.com',
-    c: 'tomasz.kellaway@example.com',
-    d: 'grace.holloway@example.com',
-    contact: 'sofia.marin@example.com',
-  } as const;
-  type Who = keyof typeof EMAIL;
+  const EMAIL = WARD_PEOPLE;
+  type Who = WardPerson;
   const START = '2030-01-07';
   const day = (n: number) => addDays(START, n);
 
@@ -56,56 +55,16 @@ describe('swaps', () => {
     admin = (await t.login('admin@example.com')).token;
     manager = (await t.login('manager@example.com')).token;
     manager2 = (await t.login('manager2@example.com')).token;
-    for (const [who, email] of Object.entries(EMAIL)) tokens[who] = (await t.login(email)).token;
+    tokens = await loginAll(t, EMAIL);
 
-    const units = (await t.http().get(api('/units')).set(bearer(admin))).body as UnitDto[];
-    const ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
-    period = (
-      await t
-        .http()
-        .post(api(P.rosterPeriods))
-        .set(bearer(manager))
-        .send({ unitId: ward.id, startDate: START, days: 28 })
-        .expect(201)
-    ).body as RosterPeriodDto;
-    const types = (
-      await t
-        .http()
-        .get(api(P.shiftTypes(ward.id)))
-        .set(bearer(manager))
-    ).body as ShiftTypeDto[];
-    shift = Object.fromEntries(types.map((s) => [s.code, s]));
+    const ward = await findUnit(t, admin);
+    period = await createPeriod(t, manager, ward.id, START, 28);
+    shift = await shiftTypesByCode(t, manager, ward.id);
 
     // Every ward person on one contract with only the 11-hour daily rest (EU WTD Art. 3), so the
     // sparse test roster breaks no other rule.
-    const em = t.dataSource.manager;
-    const contract = await em.save(
-      em.create(ContractEntity, {
-        organisationId: (
-          (await em.query(`SELECT "organisationId" FROM "units" WHERE "id" = ?`, [ward.id])) as {
-            organisationId: string;
-          }[]
-        )[0].organisationId,
-        unitId: null,
-        name: 'Rest only (test)',
-        maxShiftsPerType: null,
-        minPaidMinutes: null,
-        maxPaidMinutes: null,
-        targetPaidMinutes: null,
-        maxConsecutiveWorkDays: null,
-        minConsecutiveWorkDays: null,
-        minConsecutiveDaysOff: null,
-        maxWeekends: null,
-        maxConsecutiveNights: null,
-        minRestMinutes: 660,
-      }),
-    );
-    await em.update(StaffMemberEntity, { unitId: ward.id }, { contractId: contract.id });
-    const staff = await em.findBy(StaffMemberEntity, { unitId: ward.id });
-    staffId = Object.fromEntries(
-      (Object.keys(EMAIL) as Who[]).map((w) => [w, staff.find((s) => s.email === EMAIL[w])?.id ?? '']),
-    );
-    await em.update(RosterPeriodEntity, { id: period.id }, { status: 'published', publishedAt: new Date() });
+    staffId = idsByEmail(await restOnlyContract(t, ward.id), EMAIL);
+    await markPublished(t, period.id);
   });
   afterAll(() => t.close());
 
@@ -137,26 +96,7 @@ describe('swaps', () => {
   };
 
   /** Waits for a new message to `to` whose subject matches, delivered by the outbox to the catcher. */
-  const mailTo = async (to: string, subject: RegExp): Promise<MailMessageDto> => {
-    for (let i = 0; i < 100; i++) {
-      const page = (
-        await t.http().get(api('/mailbox')).query({ q: to, pageSize: 100 }).set(bearer(admin)).expect(200)
-      ).body as Page<MailMessageSummaryDto>;
-      const hit = page.items.find((m) => m.to.includes(to) && subject.test(m.subject) && !seen.has(m.id));
-      if (hit) {
-        seen.add(hit.id);
-        return (
-          await t
-            .http()
-            .get(api(`/mailbox/${hit.id}`))
-            .set(bearer(admin))
-            .expect(200)
-        ).body as MailMessageDto;
-      }
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    throw new Error(`no mail to ${to} matching ${subject}`);
-  };
+  const mailTo = (to: string, subject: RegExp) => nextMailTo(t, admin, seen, to, subject);
   const tokenIn = (mail: MailMessageDto) => linkToken(mail.text, SWAP_DECISION_WEB_PATH).token;
 
   const propose = (who: Who, body: object) =>

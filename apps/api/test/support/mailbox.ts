@@ -32,3 +32,34 @@ export function linkToken(text: string, path: string): { url: string; token: str
   if (!match) throw new Error(`no ${path} link in: ${text}`);
   return { url: match[1], token: decodeURIComponent(match[2]) };
 }
+
+/**
+ * Waits for a message to `to` whose subject matches and whose id is not in `seen` (the outbox
+ * delivers in the background), marks it seen and reads it through the admin mailbox API.
+ */
+export async function nextMailTo(
+  t: TestApp,
+  adminToken: string,
+  seen: Set<string>,
+  to: string,
+  subject: RegExp,
+): Promise<MailMessageDto> {
+  for (let i = 0; i < 100; i++) {
+    const page = (
+      await t.http().get(api('/mailbox')).query({ q: to, pageSize: 100 }).set(bearer(adminToken)).expect(200)
+    ).body as Page<MailMessageSummaryDto>;
+    const hit = page.items.find((m) => m.to.includes(to) && subject.test(m.subject) && !seen.has(m.id));
+    if (hit) {
+      seen.add(hit.id);
+      return (
+        await t
+          .http()
+          .get(api(`/mailbox/${hit.id}`))
+          .set(bearer(adminToken))
+          .expect(200)
+      ).body as MailMessageDto;
+    }
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail to ${to} matching ${subject}`);
+}
