@@ -3,16 +3,11 @@ import {
   PLANNING_ROUTES,
   PUBLISHING_ROUTES,
   SOLVING_ROUTES,
-  type Page as PageOf,
   type RosterPeriodDto,
-  type ShiftTypeDto,
-  type StaffMemberDto,
-  type TokenResponse,
-  type UnitDto,
 } from '@rotaplex/contracts';
+import { apiCall, apiSignIn, createPeriod, findWard, shiftIdsByCode, staffIdLookup } from './support/api';
 import {
   baseUrl,
-  DEMO_PASSWORD,
   eventually,
   navLinks,
   openBrowser,
@@ -33,31 +28,16 @@ describe('my roster as a demo staff member', () => {
   let browser: Session;
   let start: string;
 
-  const call = async <T>(path: string, token: string | null, method = 'GET', body?: unknown): Promise<T> => {
-    const res = await fetch(`${baseUrl()}/api${path}`, {
-      method,
-      headers: {
-        ...(token ? { Authorization: `Bearer ${token}` } : {}),
-        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
-      },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
-    return (await res.json()) as T;
-  };
   const addDays = (date: string, n: number) =>
     new Date(Date.parse(`${date}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
 
   beforeAll(async () => {
-    const login = await call<TokenResponse>('/auth/login', null, 'POST', {
-      email: 'manager@example.com',
-      password: DEMO_PASSWORD,
-    });
-    const token = login.accessToken;
-    const ward = (await call<UnitDto[]>('/units', token)).find((u) => u.name === 'Ward 7 Acute Medicine')!;
-    const periods = await call<RosterPeriodDto[]>(
-      `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}`,
+    const token = await apiSignIn('manager@example.com');
+    const ward = await findWard(token);
+    const periods = await apiCall<RosterPeriodDto[]>(
       token,
+      'GET',
+      `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}`,
     );
     // A Monday five weeks after the start of the latest period (demo periods start on a Monday).
     const latest = periods
@@ -65,32 +45,23 @@ describe('my roster as a demo staff member', () => {
       .sort()
       .pop()!;
     start = addDays(latest, 35);
-    const period = await call<RosterPeriodDto>(PLANNING_ROUTES.rosterPeriods, token, 'POST', {
-      unitId: ward.id,
-      startDate: start,
-      days: 7,
-    });
-    const types = await call<ShiftTypeDto[]>(PLANNING_ROUTES.shiftTypes(ward.id), token);
-    const shift = Object.fromEntries(types.map((s) => [s.code, s.id]));
-    const people = await call<PageOf<StaffMemberDto>>(
-      `${PLANNING_ROUTES.staff}?unitId=${ward.id}&pageSize=100`,
-      token,
-    );
-    const id = (name: string) => people.items.find((p) => p.name === name)!.id;
+    const period = await createPeriod(token, ward.id, start);
+    const shift = await shiftIdsByCode(token, ward.id);
+    const id = await staffIdLookup(token, ward.id);
     const cells: [string, string, string][] = [
       [id('Robin Tallis'), start, 'E'],
       [id('Robin Tallis'), addDays(start, 2), 'N'],
       [id('Grace Holloway'), start, 'L'],
     ];
     for (const [staffMemberId, date, code] of cells) {
-      await call(SOLVING_ROUTES.assignmentCell(period.id), token, 'PUT', {
+      await apiCall(token, 'PUT', SOLVING_ROUTES.assignmentCell(period.id), {
         staffMemberId,
         date,
         shiftTypeId: shift[code],
       });
     }
-    const current = await call<RosterPeriodDto>(PLANNING_ROUTES.rosterPeriod(period.id), token);
-    await call(PUBLISHING_ROUTES.publish(period.id), token, 'POST', { version: current.version });
+    const current = await apiCall<RosterPeriodDto>(token, 'GET', PLANNING_ROUTES.rosterPeriod(period.id));
+    await apiCall(token, 'POST', PUBLISHING_ROUTES.publish(period.id), { version: current.version });
 
     browser = await openBrowser();
     await signIn(browser.page, 'staff@example.com');
@@ -167,8 +138,13 @@ describe('my roster as a demo staff member', () => {
     const res = await fetch(first);
     expect(res.status).toBe(200);
     const cal = new ICAL.Component(ICAL.parse(await res.text()));
+    // Other journeys publish rosters too: only this journey's week counts (the UID starts with the date).
     const summaries = cal
       .getAllSubcomponents('vevent')
+      .filter((v) => {
+        const date = String(v.getFirstPropertyValue('uid')).slice(0, 10);
+        return date >= start && date < addDays(start, 7);
+      })
       .map((v) => String(v.getFirstPropertyValue('summary')));
     expect(summaries.sort()).toEqual(['Early, Ward 7 Acute Medicine', 'Night, Ward 7 Acute Medicine']);
 

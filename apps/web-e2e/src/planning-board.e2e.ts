@@ -20,7 +20,12 @@ describe('planning board as the demo manager', () => {
   it('opens the draft period of the ward from the roster periods list', async () => {
     const { page } = browser;
     await page.goto('/planning/periods');
-    const row = page.getByRole('row').filter({ hasText: 'Draft' }).first();
+    // The demo's four-week draft (other journeys add periods of their own).
+    const row = page
+      .getByRole('row')
+      .filter({ hasText: 'Draft' })
+      .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
+      .first();
     await row.getByRole('link').click();
     await page.getByRole('heading', { name: /^Planning board: / }).waitFor();
     await board().waitFor();

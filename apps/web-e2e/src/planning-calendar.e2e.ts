@@ -1,8 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { chromium } from 'playwright-core';
-import { baseUrl, CHROMIUM_PATH, screenshot, signIn, unnamedControls, type Session } from './support/browser';
+import { openBrowser, screenshot, signIn, unnamedControls, type Session } from './support/browser';
 
 // Issue 4, item 3: the calendar view (FullCalendar, a week with hours and a month) of the same
 // roster period as the planning board. Times are the UNIT's wall-clock times whatever the
@@ -17,40 +13,10 @@ const dayLabel = (isoDate: string) =>
     timeZone: 'UTC',
   }).format(new Date(`${isoDate}T00:00:00Z`));
 
-/** Like support/browser.ts openBrowser, but with the browser's clocks in another time zone. */
-async function openBrowserIn(timezoneId: string): Promise<Session> {
-  const profile = mkdtempSync(join(tmpdir(), 'rotaplex-chromium-'));
-  const context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM_PATH,
-    headless: true,
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--no-first-run',
-    ],
-    viewport: { width: 1360, height: 860 },
-    locale: 'en-GB',
-    timezoneId,
-    baseURL: baseUrl(),
-  });
-  context.setDefaultTimeout(15_000);
-  const page = context.pages()[0] ?? (await context.newPage());
-  return {
-    context,
-    page,
-    close: async () => {
-      await context.close();
-      rmSync(profile, { recursive: true, force: true });
-    },
-  };
-}
-
 describe('planning calendar as the demo manager', () => {
   let browser: Session;
   beforeAll(async () => {
-    browser = await openBrowserIn('Asia/Tokyo');
+    browser = await openBrowser({ timezoneId: 'Asia/Tokyo' });
     await signIn(browser.page, 'manager@example.com');
   });
   afterAll(async () => {
@@ -70,7 +36,12 @@ describe('planning calendar as the demo manager', () => {
     const { page } = browser;
     expect(await page.evaluate(() => Intl.DateTimeFormat().resolvedOptions().timeZone)).toBe('Asia/Tokyo');
     await page.goto('/planning/periods');
-    const row = page.getByRole('row').filter({ hasText: 'Draft' }).first();
+    // The demo's four-week draft (other journeys add periods of their own).
+    const row = page
+      .getByRole('row')
+      .filter({ hasText: 'Draft' })
+      .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
+      .first();
     await row.getByRole('link').click();
     await page.getByRole('heading', { name: /^Planning board: Ward 7/ }).waitFor();
     await cell().waitFor();

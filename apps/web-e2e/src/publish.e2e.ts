@@ -1,13 +1,6 @@
+import { PLANNING_ROUTES as P, type RosterPeriodDto } from '@rotaplex/contracts';
+import { apiCall, managerPeriod } from './support/api';
 import {
-  API_PREFIX,
-  PLANNING_ROUTES as P,
-  type RosterPeriodDto,
-  type TokenResponse,
-  type UnitDto,
-} from '@rotaplex/contracts';
-import {
-  baseUrl,
-  DEMO_PASSWORD,
   eventually,
   openBrowser,
   screenshot,
@@ -16,17 +9,6 @@ import {
   unnamedControls,
   type Session,
 } from './support/browser';
-
-/** Calls the running server's API (setting up the period the journey then works on). */
-async function apiCall<T>(token: string, method: string, path: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${baseUrl()}${API_PREFIX}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${await response.text()}`);
-  return (response.status === 204 ? undefined : await response.json()) as T;
-}
 
 // Issue 4, item 3 and PRODUCT.md flow 6: the manager generates a one-week roster, publishes it after
 // a confirmation, and the board becomes read-only; everyone on it is e-mailed their shifts through
@@ -40,20 +22,7 @@ describe('publishing a roster as the demo manager', () => {
   let browser: Session;
 
   beforeAll(async () => {
-    const login = await fetch(`${baseUrl()}${API_PREFIX}/auth/login`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ email: 'manager@example.com', password: DEMO_PASSWORD }),
-    });
-    token = ((await login.json()) as TokenResponse).accessToken;
-    const ward = (await apiCall<UnitDto[]>(token, 'GET', '/units')).find(
-      (u) => u.name === 'Ward 7 Acute Medicine',
-    )!;
-    period = await apiCall<RosterPeriodDto>(token, 'POST', P.rosterPeriods, {
-      unitId: ward.id,
-      startDate: START,
-      days: 7,
-    });
+    ({ token, period } = await managerPeriod(START));
     browser = await openBrowser();
     await signIn(browser.page, 'manager@example.com');
   });

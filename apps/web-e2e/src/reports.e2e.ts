@@ -1,35 +1,14 @@
 import { readFileSync } from 'node:fs';
 import {
-  API_PREFIX,
   type AssignmentGridDto,
   PAYROLL_CSV_COLUMNS,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
-  type ShiftTypeDto,
   SOLVING_ROUTES as R,
-  type TokenResponse,
   type UnitDto,
 } from '@rotaplex/contracts';
-import {
-  baseUrl,
-  DEMO_PASSWORD,
-  openBrowser,
-  screenshot,
-  signIn,
-  unnamedControls,
-  type Session,
-} from './support/browser';
-
-/** Calls the running server's API as the demo manager (setting up data the journey then reads). */
-async function apiCall<T>(token: string, method: string, path: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${baseUrl()}${API_PREFIX}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${await response.text()}`);
-  return (response.status === 204 ? undefined : await response.json()) as T;
-}
+import { apiCall, managerPeriod, shiftIdsByCode } from './support/api';
+import { openBrowser, screenshot, signIn, unnamedControls, type Session } from './support/browser';
 
 // Issue 4, items 1 and 3: the reports of a ward period whose cells the manager has set. A one-week
 // period in the past of its own (so it neither overlaps nor heads the ward's list of periods), deleted
@@ -42,23 +21,9 @@ describe('reports of a period as the demo manager', () => {
   let browser: Session;
 
   beforeAll(async () => {
-    const login = await fetch(`${baseUrl()}${API_PREFIX}/auth/login`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ email: 'manager@example.com', password: DEMO_PASSWORD }),
-    });
-    token = ((await login.json()) as TokenResponse).accessToken;
-    const ward = (await apiCall<UnitDto[]>(token, 'GET', '/units')).find(
-      (u) => u.name === 'Ward 7 Acute Medicine',
-    )!;
-    period = await apiCall<RosterPeriodDto>(token, 'POST', P.rosterPeriods, {
-      unitId: ward.id,
-      startDate: START,
-      days: 7,
-    });
-    const shift = Object.fromEntries(
-      (await apiCall<ShiftTypeDto[]>(token, 'GET', P.shiftTypes(ward.id))).map((s) => [s.code, s.id]),
-    );
+    let ward: UnitDto;
+    ({ token, ward, period } = await managerPeriod(START));
+    const shift = await shiftIdsByCode(token, ward.id);
     const grid = await apiCall<AssignmentGridDto>(token, 'GET', R.assignments(period.id));
     const priya = grid.rows.find((r) => r.name === 'Priya Wendover')!.staffMemberId;
     // Priya: Early on Monday 6 Jan, Night on Saturday 11 Jan (to Sunday 07:30).

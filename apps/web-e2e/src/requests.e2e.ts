@@ -1,42 +1,11 @@
 import {
-  API_PREFIX,
   type LeaveDto,
   type PeriodRequestsDto,
-  PLANNING_ROUTES as P,
   REQUESTS_ROUTES as Q,
   type RosterPeriodDto,
-  type TokenResponse,
-  type UnitDto,
 } from '@rotaplex/contracts';
-import {
-  baseUrl,
-  DEMO_PASSWORD,
-  openBrowser,
-  screenshot,
-  signIn,
-  signOut,
-  unnamedControls,
-  type Session,
-} from './support/browser';
-
-async function login(email: string): Promise<string> {
-  const response = await fetch(`${baseUrl()}${API_PREFIX}/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  return ((await response.json()) as TokenResponse).accessToken;
-}
-
-async function apiCall<T>(token: string, method: string, path: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${baseUrl()}${API_PREFIX}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${await response.text()}`);
-  return (response.status === 204 ? undefined : await response.json()) as T;
-}
+import { apiCall, apiSignIn, managerPeriod } from './support/api';
+import { openBrowser, screenshot, signIn, signOut, unnamedControls, type Session } from './support/browser';
 
 // Issue 5, item 1: a staff member enters a day-off request and a leave request, the manager approves
 // the leave, and the staff member sees the decision. A one-week draft period of its own, far ahead,
@@ -47,15 +16,7 @@ describe('availability, requests and leave in the browser', () => {
   let period: RosterPeriodDto;
 
   beforeAll(async () => {
-    const manager = await login('manager@example.com');
-    const ward = (await apiCall<UnitDto[]>(manager, 'GET', '/units')).find(
-      (u) => u.name === 'Ward 7 Acute Medicine',
-    )!;
-    period = await apiCall<RosterPeriodDto>(manager, 'POST', P.rosterPeriods, {
-      unitId: ward.id,
-      startDate: '2035-01-01',
-      days: 7,
-    });
+    ({ period } = await managerPeriod('2035-01-01'));
     browser = await openBrowser();
   });
   afterAll(async () => {
@@ -142,13 +103,13 @@ describe('availability, requests and leave in the browser', () => {
     await row.waitFor({ state: 'detached' }); // no longer pending
 
     // The API agrees: the period holds Robin's day-off request, and the leave is approved by the manager.
-    const managerToken = await login('manager@example.com');
+    const managerToken = await apiSignIn('manager@example.com');
     const board = await apiCall<PeriodRequestsDto>(managerToken, 'GET', Q.periodRequests(period.id));
     expect(board.dateRequests.map((r) => [r.staffName, r.date, r.kind, r.note])).toEqual([
       ['Robin Tallis', '2035-01-03', 'dayOff', 'School play'],
     ]);
     expect(board.leave.map((l) => [l.staffName, l.status])).toEqual([['Robin Tallis', 'approved']]);
-    const staffToken = await login('staff@example.com');
+    const staffToken = await apiSignIn('staff@example.com');
     const mine = await apiCall<{ leave: LeaveDto[] }>(staffToken, 'GET', Q.mine);
     expect(mine.leave.find((l) => l.startDate === '2035-01-04')).toMatchObject({
       status: 'approved',

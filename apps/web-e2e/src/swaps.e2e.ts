@@ -3,21 +3,10 @@ import {
   PLANNING_ROUTES,
   PUBLISHING_ROUTES,
   type RosterPeriodDto,
-  type ShiftTypeDto,
   SOLVING_ROUTES,
-  type StaffMemberDto,
-  type TokenResponse,
-  type UnitDto,
 } from '@rotaplex/contracts';
-import {
-  baseUrl,
-  DEMO_PASSWORD,
-  eventually,
-  openBrowser,
-  signIn,
-  unnamedControls,
-  type Session,
-} from './support/browser';
+import { apiCall, managerPeriod, shiftIdsByCode, staffIdLookup } from './support/api';
+import { openBrowser, signIn, unnamedControls, type Session } from './support/browser';
 import { linkFromMailbox } from './support/mailbox';
 
 /**
@@ -28,8 +17,6 @@ import { linkFromMailbox } from './support/mailbox';
  * Demo ward shift types (invented data): Early 07:00-15:00, Late 14:30-22:30.
  */
 const START = '2033-03-07'; // a Monday (no demo unavailability for Robin on Mondays)
-
-type PageOf<T> = { items: T[] };
 
 describe('swap approved by e-mail', () => {
   let staffA: Session;
@@ -42,53 +29,30 @@ describe('swap approved by e-mail', () => {
   let robin: string;
   let priya: string;
 
-  const call = async <T>(path: string, token: string | null, method = 'GET', body?: unknown): Promise<T> => {
-    const res = await fetch(`${baseUrl()}/api${path}`, {
-      method,
-      headers: {
-        ...(token ? { Authorization: `Bearer ${token}` } : {}),
-        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
-      },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
-    return (await res.json()) as T;
-  };
-
   beforeAll(async () => {
-    const login = await call<TokenResponse>('/auth/login', null, 'POST', {
-      email: 'manager@example.com',
-      password: DEMO_PASSWORD,
-    });
-    managerToken = login.accessToken;
-    const ward = (await call<UnitDto[]>('/units', managerToken)).find(
-      (u) => u.name === 'Ward 7 Acute Medicine',
-    )!;
-    period = await call<RosterPeriodDto>(PLANNING_ROUTES.rosterPeriods, managerToken, 'POST', {
-      unitId: ward.id,
-      startDate: START,
-      days: 7,
-    });
-    const types = await call<ShiftTypeDto[]>(PLANNING_ROUTES.shiftTypes(ward.id), managerToken);
-    shift = Object.fromEntries(types.map((s) => [s.code, s.id]));
-    const people = await call<PageOf<StaffMemberDto>>(
-      `${PLANNING_ROUTES.staff}?unitId=${ward.id}&pageSize=100`,
-      managerToken,
-    );
-    robin = people.items.find((p) => p.name === 'Robin Tallis')!.id;
-    priya = people.items.find((p) => p.name === 'Priya Wendover')!.id;
+    const { token, ward, period: created } = await managerPeriod(START);
+    managerToken = token;
+    period = created;
+    shift = await shiftIdsByCode(managerToken, ward.id);
+    const id = await staffIdLookup(managerToken, ward.id);
+    robin = id('Robin Tallis');
+    priya = id('Priya Wendover');
     for (const [staffMemberId, code] of [
       [robin, 'L'],
       [priya, 'E'],
     ]) {
-      await call(SOLVING_ROUTES.assignmentCell(period.id), managerToken, 'PUT', {
+      await apiCall(managerToken, 'PUT', SOLVING_ROUTES.assignmentCell(period.id), {
         staffMemberId,
         date: START,
         shiftTypeId: shift[code],
       });
     }
-    const fresh = await call<RosterPeriodDto>(PLANNING_ROUTES.rosterPeriod(period.id), managerToken);
-    await call(PUBLISHING_ROUTES.publish(period.id), managerToken, 'POST', { version: fresh.version });
+    const fresh = await apiCall<RosterPeriodDto>(
+      managerToken,
+      'GET',
+      PLANNING_ROUTES.rosterPeriod(period.id),
+    );
+    await apiCall(managerToken, 'POST', PUBLISHING_ROUTES.publish(period.id), { version: fresh.version });
 
     staffA = await openBrowser();
     staffB = await openBrowser();
@@ -139,14 +103,13 @@ describe('swap approved by e-mail', () => {
     await manager.page.getByText('Done: approved').waitFor();
 
     // The roster holds the swap, and A's list shows it approved.
-    const grid = await call<AssignmentGridDto>(SOLVING_ROUTES.assignments(period.id), managerToken);
+    const grid = await apiCall<AssignmentGridDto>(managerToken, 'GET', SOLVING_ROUTES.assignments(period.id));
     const cellOf = (id: string) => grid.rows.find((r) => r.staffMemberId === id)!.cells[0].shiftTypeId;
     expect(cellOf(robin)).toBe(shift['E']);
     expect(cellOf(priya)).toBe(shift['L']);
-    await eventually(async () => {
-      await page.reload();
-      return (await mine.getByText('Approved').count()) > 0 ? true : undefined;
-    }, 'the approved swap in A’s list');
+    // The approval is already stored (the grid above shows it): one reload must show it.
+    await page.reload();
+    await mine.getByText('Approved').first().waitFor();
   });
 
   it('both people’s calendars show the swapped shifts', async () => {

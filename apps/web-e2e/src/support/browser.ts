@@ -20,9 +20,10 @@ export interface Session {
 
 /**
  * A fresh browser with its own profile directory (no cookies, no cache): Debian's Chromium,
- * headless, with everything that would reach the network on its own switched off.
+ * headless, with everything that would reach the network on its own switched off. The browser's
+ * clocks are in Europe/London unless `timezoneId` (an IANA zone name) says otherwise.
  */
-export async function openBrowser(): Promise<Session> {
+export async function openBrowser(options: { timezoneId?: string } = {}): Promise<Session> {
   const profile = mkdtempSync(join(tmpdir(), 'rotaplex-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
@@ -39,7 +40,7 @@ export async function openBrowser(): Promise<Session> {
     ],
     viewport: { width: 1360, height: 860 },
     locale: 'en-GB',
-    timezoneId: 'Europe/London',
+    timezoneId: options.timezoneId ?? 'Europe/London',
     baseURL: baseUrl(),
   });
   context.setDefaultTimeout(15_000);
