@@ -9,6 +9,7 @@ import { AppConfig } from './config/app-config';
 import { ConfigModule } from './config/config.module';
 import { dataSourceOptions } from './database/data-source-options';
 import { serialiseTransactions } from './database/serialised-transactions';
+import { WriteGenerationModule } from './database/write-generation';
 import { DataSource } from 'typeorm';
 import { DemoModule } from './demo/demo.module';
 import { RequestsModule } from './requests/requests.module';
@@ -49,6 +50,7 @@ export class AppModule {
             return dataSource.initialize();
           },
         }),
+        WriteGenerationModule,
         HealthModule,
         MailModule,
         OrganisationModule,

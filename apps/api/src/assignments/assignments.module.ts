@@ -4,13 +4,12 @@ import { RosterInputModule } from '../roster-input/roster-input.module';
 import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
 import { AssignmentEntity } from './assignment.entity';
 import { AssignmentsController } from './assignments.controller';
-import { WriteGeneration } from '../database/write-generation';
 import { AssignmentsService } from './assignments.service';
 
 @Module({
   imports: [TypeOrmModule.forFeature([AssignmentEntity]), RosterPeriodsModule, RosterInputModule],
   controllers: [AssignmentsController],
-  providers: [AssignmentsService, WriteGeneration],
+  providers: [AssignmentsService],
   exports: [AssignmentsService],
 })
 export class AssignmentsModule {}

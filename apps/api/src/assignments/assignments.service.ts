@@ -24,13 +24,17 @@ export class AssignmentsService {
     writes: WriteGeneration,
   ) {
     this.grids = new GenerationCache(writes);
+    this.access = new GenerationCache(writes, { maxEntries: 256 });
   }
 
   /** Board reads repeat while nothing changes (many readers, a solve running): served from a cache. */
   private readonly grids: GenerationCache<AssignmentGridDto>;
+  /** The access check of a read, per caller (with their role and units) and period. */
+  private readonly access: GenerationCache<unknown>;
 
   async grid(user: AuthUser, periodId: string): Promise<AssignmentGridDto> {
-    await this.periods.get(user, periodId); // 404 / 403 by unit
+    const caller = `${user.id}|${user.role}|${user.organisationId}|${user.unitIds.join(',')}`;
+    await this.access.get(`${caller}|${periodId}`, () => this.periods.get(user, periodId)); // 404 / 403 by unit
     return this.grids.get(periodId, () => this.gridOf(periodId));
   }
 

@@ -50,6 +50,16 @@ describe('write generation and the read cache', () => {
     expect(await names()).toEqual(['Alpha', 'Beta']);
   });
 
+  it('expires an entry after its maximum age even when nothing was written', async () => {
+    const aged = new GenerationCache<number>(writes, { maxAgeMs: 50 });
+    let computed = 0;
+    const read = () => aged.get('k', async () => ++computed);
+    expect(await read()).toBe(1);
+    expect(await read()).toBe(1);
+    await new Promise((r) => setTimeout(r, 80));
+    expect(await read()).toBe(2);
+  });
+
   it('sees saves, query-builder updates and deletes, removes and transactions', async () => {
     const org = await ds.manager.save(OrganisationEntity, { name: 'Alpha' });
     expect(await names()).toEqual(['Alpha']);

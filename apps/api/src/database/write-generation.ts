@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { Global, Injectable, Module } from '@nestjs/common';
 import { DataSource, type EntitySubscriberInterface, type EntityMetadata } from 'typeorm';
 
 /**
@@ -59,22 +59,40 @@ export class WriteGeneration {
   }
 }
 
+/** One WriteGeneration for the whole application. */
+@Global()
+@Module({ providers: [WriteGeneration], exports: [WriteGeneration] })
+export class WriteGenerationModule {}
+
+export interface GenerationCacheOptions {
+  /** Most keys kept (least recently stored dropped first); default 64. */
+  maxEntries?: number;
+  /** Also expire an entry after this many milliseconds, whatever the generation (default: never). */
+  maxAgeMs?: number;
+}
+
 /** Results of an expensive read per key, valid while the write generation has not moved. */
 export class GenerationCache<T> {
-  private readonly entries = new Map<string, { generation: number; value: Promise<T> }>();
+  private readonly entries = new Map<string, { generation: number; at: number; value: Promise<T> }>();
+  private readonly maxEntries: number;
+  private readonly maxAgeMs: number;
 
   constructor(
     private readonly writes: WriteGeneration,
-    private readonly maxEntries = 64,
-  ) {}
+    options: GenerationCacheOptions = {},
+  ) {
+    this.maxEntries = options.maxEntries ?? 64;
+    this.maxAgeMs = options.maxAgeMs ?? Infinity;
+  }
 
   get(key: string, compute: () => Promise<T>): Promise<T> {
     const generation = this.writes.current();
+    const now = performance.now();
     const hit = this.entries.get(key);
-    if (hit && hit.generation === generation) return hit.value;
+    if (hit && hit.generation === generation && now - hit.at <= this.maxAgeMs) return hit.value;
     const value = compute();
     this.entries.delete(key);
-    this.entries.set(key, { generation, value });
+    this.entries.set(key, { generation, at: now, value });
     // A failed read is not kept.
     value.catch(() => {
       if (this.entries.get(key)?.value === value) this.entries.delete(key);

@@ -8,6 +8,7 @@ import {
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { type Page, type UserDto, WEB_PATHS } from '@rotaplex/contracts';
+import { GenerationCache, WriteGeneration } from '../database/write-generation';
 import { DataSource, Repository } from 'typeorm';
 import { OneTimeTokensService } from '../auth/one-time-tokens.service';
 import { RefreshTokensService } from '../auth/refresh-tokens.service';
@@ -34,7 +35,10 @@ export class UsersService {
     private readonly refreshTokens: RefreshTokensService,
     private readonly mail: MailService,
     private readonly config: AppConfig,
-  ) {}
+    writes: WriteGeneration,
+  ) {
+    this.authUsers = new GenerationCache(writes, { maxEntries: 1024, maxAgeMs: 1000 });
+  }
 
   /** Users the caller may see: everyone for admins, people sharing a unit for managers. */
   async list(caller: AuthUser, query: UsersQueryDto): Promise<Page<UserDto>> {
@@ -138,11 +142,20 @@ export class UsersService {
   }
 
   /** The caller as the guards see them; null when missing or deactivated. */
+  /**
+   * The caller behind a valid token, loaded on every request (a deactivated user is refused at
+   * once). Repeated requests are served from a cache that any write to the data and one second of
+   * age both invalidate.
+   */
   async findActiveAuthUser(id: string): Promise<AuthUser | null> {
-    const user = await this.users.findOne({ where: { id }, relations: { units: true } });
-    if (!user || !user.active) return null;
-    return toAuthUser(user);
+    const found = await this.authUsers.get(id, async () => {
+      const user = await this.users.findOne({ where: { id }, relations: { units: true } });
+      return user && user.active ? toAuthUser(user) : null;
+    });
+    return found && { ...found, unitIds: [...found.unitIds] };
   }
+
+  private readonly authUsers: GenerationCache<AuthUser | null>;
 
   private async sendInvitation(caller: AuthUser, user: UserEntity, token: string): Promise<void> {
     const org = await this.dataSource
