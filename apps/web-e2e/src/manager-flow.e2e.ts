@@ -1,0 +1,60 @@
+import { PLANNING_ROUTES, type RosterPeriodDto } from '@rotaplex/contracts';
+import { apiCall, apiSignIn } from './support/api';
+import { openBrowser, screenshot, signIn, unnamedControls, type Session } from './support/browser';
+
+// Issue 4, item 5: the manager's whole flow on a demo period, from Generate to Publish (staff
+// reading published shifts in their calendar is my-roster.e2e.ts). It uses the contact
+// centre's four-week demo draft (no other journey touches it; the ward's draft stays a draft for
+// the board and calendar journeys). The demo puts the only French speaker on approved leave on the
+// period's second Monday, so one need is short on purpose and its explanation says why.
+describe('the contact centre planner generates and publishes the demo period', () => {
+  let browser: Session;
+  let period: RosterPeriodDto;
+  beforeAll(async () => {
+    browser = await openBrowser();
+    await signIn(browser.page, 'manager2@example.com');
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('generates the demo period and explains the short need', async () => {
+    const { page } = browser;
+    await page.goto('/planning/periods');
+    const row = page
+      .getByRole('row')
+      .filter({ hasText: 'Draft' })
+      .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
+      .first();
+    await row.getByRole('link').click();
+    await page.getByRole('heading', { name: /^Planning board: Contact Centre North/ }).waitFor();
+    await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('30');
+    await page.getByRole('button', { name: 'Generate' }).click();
+    await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
+    const explanations = page.getByRole('region', { name: 'Explanations' });
+    await explanations.getByText(/Unmet needs \([1-9]\d*\)/).waitFor();
+    await explanations
+      .getByText(/on leave/)
+      .first()
+      .waitFor();
+    expect(await unnamedControls(page)).toEqual([]);
+    await screenshot(page, 'manager-flow-generated');
+    const id = /\/planning\/periods\/([^/]+)\/board/.exec(page.url())?.[1];
+    const token = await apiSignIn('manager2@example.com');
+    period = await apiCall<RosterPeriodDto>(token, 'GET', PLANNING_ROUTES.rosterPeriod(id!));
+    expect(period.status).toBe('draft');
+  }, 150_000);
+
+  it('publishes after confirmation', async () => {
+    const { page } = browser;
+    await page.getByRole('button', { name: 'Publish' }).click();
+    const dialog = page.getByRole('alertdialog', { name: 'Publish this roster?' });
+    await dialog.getByRole('button', { name: 'Publish' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await page.getByText('Published: read-only').waitFor();
+    const token = await apiSignIn('manager2@example.com');
+    expect(
+      (await apiCall<RosterPeriodDto>(token, 'GET', PLANNING_ROUTES.rosterPeriod(period.id))).status,
+    ).toBe('published');
+  });
+});
