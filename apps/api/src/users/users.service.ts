@@ -1,11 +1,4 @@
-import {
-  BadGatewayException,
-  ConflictException,
-  ForbiddenException,
-  Injectable,
-  Logger,
-  NotFoundException,
-} from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { type Page, type UserDto, WEB_PATHS } from '@rotaplex/contracts';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
@@ -25,8 +18,6 @@ import { UserEntity } from './user.entity';
 
 @Injectable()
 export class UsersService {
-  private readonly logger = new Logger(UsersService.name);
-
   constructor(
     @InjectRepository(UserEntity) private readonly users: Repository<UserEntity>,
     private readonly dataSource: DataSource,
@@ -169,14 +160,8 @@ export class UsersService {
       link,
       validDays: Math.round(this.oneTimeTokens.ttlSeconds('invitation') / 86400),
     });
-    try {
-      await this.mail.send({ to: user.email, ...content });
-    } catch (err) {
-      this.logger.error(`Invitation e-mail to ${user.email} failed: ${(err as Error).message}`);
-      throw new BadGatewayException(
-        `The user was saved but the invitation e-mail could not be sent (${(err as Error).message}); try "resend invitation"`,
-      );
-    }
+    // Queued in the outbox and retried there: a mail server that is down loses nothing.
+    await this.mail.send({ to: user.email, ...content });
   }
 
   private async loadInOrganisation(caller: AuthUser, id: string): Promise<UserEntity> {
