@@ -82,6 +82,30 @@ describe('fixAndOptimise', () => {
     expect(r.objective).toBeCloseTo(optimum, 6);
   });
 
+  it('takes over a better roster offered from elsewhere, and ignores worse or broken ones', async () => {
+    // The offered roster is the proven optimum of the whole model (HiGHS, checked by the checker in
+    // solveAndCheck); the worse offer is the start itself, the broken one the optimum with a rule broken.
+    const solved = await solveAndCheck(p);
+    const built = buildModel(p);
+    const start = construct(p, { seed: 3, timeLimitMs: 50, maxIterations: 0 });
+    const startObjective = checkRoster(p, start).objective;
+    expect(startObjective).toBeGreaterThan(solved.objective);
+    const broken = structuredClone(solved.roster);
+    broken[p.people[0].id] = broken[p.people[0].id].map(() => 'N');
+    expect(checkRoster(p, broken).violations.length).toBeGreaterThan(0);
+    const offers = [broken, start, solved.roster];
+    const r = await fixAndOptimise(built, start, subSolver, {
+      timeLimitSeconds: 30,
+      // Neighbourhoods of a single column cannot reach the optimum by themselves in a few rounds.
+      freeColumns: 1,
+      incoming: () => offers.shift() ?? null,
+      targetObjective: solved.objective,
+    });
+    expect(r.adopted).toBe(1);
+    expect(r.objective).toBeCloseTo(solved.objective, 6);
+    expect(checkRoster(p, r.roster).violations).toEqual([]);
+  });
+
   it('refuses a start roster that breaks a hard rule', async () => {
     const built = buildModel(p);
     const bad = construct(p, { seed: 1, timeLimitMs: 100 });

@@ -37,6 +37,11 @@ export interface FixAndOptimiseOptions {
   targetObjective?: number;
   signal?: AbortSignal;
   onImprovement?: (roster: Roster, objective: number) => void;
+  /**
+   * A roster found elsewhere (another solve of the same problem on the other core), asked for before
+   * each round. One that meets every hard rule and costs less than the current roster replaces it.
+   */
+  incoming?: () => Roster | null;
 }
 
 export interface FixAndOptimiseResult {
@@ -45,6 +50,8 @@ export interface FixAndOptimiseResult {
   objective: number;
   rounds: number;
   improvements: number;
+  /** Rosters taken over from `incoming` because they were better. */
+  adopted: number;
 }
 
 function rng(seed: number): () => number {
@@ -188,8 +195,28 @@ export async function fixAndOptimise(
   let target = Math.min(options.freeColumns ?? 300, totalX);
   let rounds = 0;
   let improvements = 0;
+  let adopted = 0;
   const base = built.arrays;
   while (Date.now() < deadline && !options.signal?.aborted) {
+    if (options.incoming) {
+      // Let messages from other threads in (a sub-MIP blocks this thread while it runs).
+      await new Promise<void>((resolve) => setImmediate(resolve));
+      const other = options.incoming();
+      if (other) {
+        const otherValues = built.encode(other);
+        const otherObjective = built.objectiveOf(otherValues);
+        if (
+          otherObjective < objective - 1e-9 &&
+          checkRoster(built.problem, other, built.index).violations.length === 0
+        ) {
+          roster = other;
+          values = otherValues;
+          objective = otherObjective;
+          violators = [];
+          adopted++;
+        }
+      }
+    }
     if (options.targetObjective !== undefined && objective <= options.targetObjective + 1e-9) break;
     rounds++;
     const free =
@@ -233,5 +260,5 @@ export async function fixAndOptimise(
     improvements++;
     options.onImprovement?.(roster, objective);
   }
-  return { roster, objective, rounds, improvements };
+  return { roster, objective, rounds, improvements, adopted };
 }

@@ -1,6 +1,6 @@
 /** Messages between the solver pool (main thread) and its workers. Everything here is structured-cloneable. */
 import type { EncodedModel, ModelData } from 'highs';
-import type { RosterProblem } from '../problem';
+import type { Roster, RosterProblem } from '../problem';
 import type { SolveProgress } from '../result';
 import type { MipRunOptions, MipRunResult } from '../solve/run-mip';
 import type { RosterSolveResult, SolveRosterOptions } from '../solve/solve';
@@ -8,9 +8,12 @@ import type { RosterSolveResult, SolveRosterOptions } from '../solve/solve';
 /** Solve options that can cross a thread boundary (no functions, no signals). */
 export type PortableRosterOptions = Omit<
   SolveRosterOptions,
-  'onProgress' | 'signal' | 'cancelFlag' | 'session'
+  'onProgress' | 'signal' | 'cancelFlag' | 'session' | 'onRoster' | 'incomingRoster'
 >;
-export type PortableMipOptions = Omit<MipRunOptions, 'onProgress' | 'signal' | 'cancelFlag' | 'clockStart'>;
+export type PortableMipOptions = Omit<
+  MipRunOptions,
+  'onProgress' | 'signal' | 'cancelFlag' | 'clockStart' | 'onSolution'
+>;
 
 export type WorkerTask =
   | { kind: 'roster'; problem: RosterProblem; options: PortableRosterOptions }
@@ -26,6 +29,17 @@ export interface TaskMessage {
   cancelBuffer: SharedArrayBuffer;
 }
 
+/** A roster found by another solve of the same problem, offered to a running roster task. */
+export interface RosterOfferMessage {
+  type: 'roster';
+  id: number;
+  roster: Roster;
+  objective: number;
+}
+
+/** What the pool sends to a worker. */
+export type PoolMessage = TaskMessage | RosterOfferMessage;
+
 export interface WorkerErrorInfo {
   name: string;
   message: string;
@@ -37,6 +51,8 @@ export type WorkerMessage =
   | { type: 'ready' }
   | { type: 'startFailed'; error: WorkerErrorInfo }
   | { type: 'progress'; id: number; progress: SolveProgress }
+  /** A roster task found a better roster that meets every hard rule. */
+  | { type: 'roster'; id: number; roster: Roster; objective: number }
   | { type: 'done'; id: number; result: WorkerResult; memoryBytes: number }
   | { type: 'failed'; id: number; error: WorkerErrorInfo; memoryBytes: number };
 

@@ -8,7 +8,15 @@ import type { SolveProgress } from '../result';
 import { HighsSession, isWasmFailure } from '../solve/highs-session';
 import { runMip } from '../solve/run-mip';
 import { solveRoster } from '../solve/solve';
-import type { TaskMessage, WorkerErrorInfo, WorkerInit, WorkerMessage, WorkerResult } from './protocol';
+import type { Roster } from '../problem';
+import type {
+  PoolMessage,
+  TaskMessage,
+  WorkerErrorInfo,
+  WorkerInit,
+  WorkerMessage,
+  WorkerResult,
+} from './protocol';
 
 if (!parentPort) throw new Error('solve-worker must run in a worker thread');
 const port = parentPort;
@@ -40,12 +48,21 @@ async function main(): Promise<void> {
     return;
   }
   let queue = Promise.resolve();
-  port.on('message', (message: TaskMessage) => {
+  port.on('message', (message: PoolMessage) => {
+    if (message.type === 'roster') {
+      // Keep only the best offer for the running task; the solve takes it between rounds.
+      const current = offers.get(message.id);
+      if (!current || message.objective < current.objective) offers.set(message.id, message);
+      return;
+    }
     // One task at a time: the pool never sends a second one before the first is answered.
     queue = queue.then(() => runTask(session, message));
   });
   send({ type: 'ready' });
 }
+
+/** Rosters offered by other solves of the same problem, per task id, until the task takes them. */
+const offers = new Map<number, { roster: Roster; objective: number }>();
 
 async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMessage): Promise<void> {
   const cancelFlag = new Int32Array(cancelBuffer);
@@ -54,7 +71,18 @@ async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMe
     await session.ensureHealthy();
     let result: WorkerResult;
     if (task.kind === 'roster') {
-      result = await solveRoster(task.problem, { ...task.options, session, cancelFlag, onProgress });
+      result = await solveRoster(task.problem, {
+        ...task.options,
+        session,
+        cancelFlag,
+        onProgress,
+        onRoster: (roster, objective) => send({ type: 'roster', id, roster, objective }),
+        incomingRoster: () => {
+          const offer = offers.get(id);
+          offers.delete(id);
+          return offer?.roster ?? null;
+        },
+      });
     } else {
       result = runMip(session, task.model, { ...task.options, cancelFlag, onProgress });
     }
@@ -63,6 +91,7 @@ async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMe
     if (isWasmFailure(err)) session.markBroken();
     send({ type: 'failed', id, error: errorInfo(err), memoryBytes: session.memoryBytes });
   }
+  offers.delete(id);
   // Replace a damaged or bloated instance now, while idle, rather than at the start of the next solve.
   try {
     await session.ensureHealthy();

@@ -3,7 +3,9 @@
  */
 import type { SolveProgress } from '../result';
 import { busyUnit, smallWard } from '../solve/fixtures.test-helpers';
-import { SolverError, SolverPool } from './solver-pool';
+import { checkRoster } from '../check/checker';
+import type { Roster } from '../problem';
+import { SolverError, SolverPool, TWO_CORE_PORTFOLIO } from './solver-pool';
 
 // The production-planning example of the highs package README (node_modules/highs/README.md,
 // "Quick start"): chairs earn 30 and tables 50; carpentry c + 2t ≤ 40, finishing 2c + t ≤ 50.
@@ -126,6 +128,29 @@ describe('SolverPool', () => {
     expect(result.status).toBe('optimal');
     expect(result.objective).toBe(0);
     expect(result.quality).toBe('Proven best possible roster.');
+    expect(result.check?.violations).toEqual([]);
+  });
+  it('hands better rosters between the two members and keeps the best one', async () => {
+    // busyUnit is not solved to optimality in 8 s, so both members report rosters while they run.
+    const problem = busyUnit();
+    const seen: { roster: Roster; objective: number }[] = [];
+    const result = await pool.solveRoster(problem, {
+      timeLimitSeconds: 8,
+      explain: false,
+      portfolio: 2,
+      portfolioOptions: TWO_CORE_PORTFOLIO,
+      onRoster: (roster, objective) => seen.push({ roster, objective }),
+    });
+    expect(seen.length).toBeGreaterThan(0);
+    // Every roster handed on meets every hard rule and costs what the checker computes.
+    for (const { roster, objective } of seen) {
+      const check = checkRoster(problem, roster);
+      expect(check.violations).toEqual([]);
+      expect(check.objective).toBeCloseTo(objective, 6);
+    }
+    const bestSeen = Math.min(...seen.map((s) => s.objective));
+    expect(result.objective).not.toBeNull();
+    expect(result.objective as number).toBeLessThanOrEqual(bestSeen + 1e-6);
     expect(result.check?.violations).toEqual([]);
   });
   it('runs a portfolio with a different strategy on each worker', async () => {

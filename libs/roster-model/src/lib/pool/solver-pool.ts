@@ -19,13 +19,14 @@ import * as os from 'node:os';
 import * as path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { EncodedModel, ModelData } from 'highs';
-import type { RosterProblem } from '../problem';
+import type { Roster, RosterProblem } from '../problem';
 import type { SolveProgress } from '../result';
 import { qualityStatement } from '../explain/quality';
 import { compiledHighsModule, type WasmModule } from '../solve/highs-session';
 import { relativeGap, type MipRunResult } from '../solve/run-mip';
 import type { RosterSolveResult, SolveRosterOptions } from '../solve/solve';
 import type {
+  PoolMessage,
   PortableMipOptions,
   TaskMessage,
   WorkerErrorInfo,
@@ -61,6 +62,8 @@ export interface TaskControls {
   signal?: AbortSignal;
   /** Abort to end the solve at once by terminating its worker (no roster is returned). */
   killSignal?: AbortSignal;
+  /** Every better roster (meeting every hard rule) a roster task finds while it runs. */
+  onRoster?: (roster: Roster, objective: number) => void;
 }
 
 export interface PoolRosterOptions
@@ -73,7 +76,33 @@ export interface PoolRosterOptions
    * Default: every member uses `strategy`.
    */
   portfolioStrategies?: NonNullable<SolveRosterOptions['strategy']>[];
+  /**
+   * Options of each portfolio member in turn (member i uses entry i mod length), over the common
+   * ones and `portfolioStrategies`.
+   */
+  portfolioOptions?: PortfolioMemberOptions[];
+  /**
+   * Members hand each other every better roster they find (default true): a member in its
+   * fix-and-optimise phase continues from the best roster of all of them.
+   */
+  shareRosters?: boolean;
 }
+
+/**
+ * The portfolio for two cores: one member runs the solve as asked (by default 'auto': the MIP, which
+ * also proves the bound, then fix-and-optimise on large models), the other runs fix-and-optimise for
+ * the whole time, continuing from every better roster the first one finds and handing its own back.
+ */
+export const TWO_CORE_PORTFOLIO: PortfolioMemberOptions[] = [
+  {},
+  { strategy: 'fixAndOptimise', fixAndOptimiseShare: 1 },
+];
+
+/** What may differ between the members of a portfolio. */
+export type PortfolioMemberOptions = Pick<
+  SolveRosterOptions,
+  'strategy' | 'fixAndOptimiseShare' | 'highsOptions' | 'warmStart'
+>;
 
 /** A running task: its result, and switches to stop it gently or at once. */
 export interface TaskHandle<T> {
@@ -82,6 +111,8 @@ export interface TaskHandle<T> {
   cancel(): void;
   /** Terminate the worker running the solve (the pool starts a new one). */
   kill(): void;
+  /** Offer a roster of the same problem to the running roster task (it takes it if better). */
+  offer(roster: Roster, objective: number): void;
 }
 
 interface Job {
@@ -90,6 +121,7 @@ interface Job {
   cancelFlag: Int32Array;
   cancelBuffer: SharedArrayBuffer;
   onProgress?: (progress: SolveProgress) => void;
+  onRoster?: (roster: Roster, objective: number) => void;
   resolve: (result: WorkerResult) => void;
   reject: (err: Error) => void;
   killRequested: boolean;
@@ -152,6 +184,7 @@ export class SolverPool {
         cancelBuffer,
         cancelFlag: new Int32Array(cancelBuffer),
         onProgress: controls.onProgress,
+        onRoster: controls.onRoster,
         resolve,
         reject,
         killRequested: false,
@@ -168,6 +201,11 @@ export class SolverPool {
       if (job.slot) void job.slot.worker.terminate();
       else this.settle(job, new SolverError('The solve was stopped before it started.', 'killed'));
     };
+    const offer = (roster: Roster, objective: number): void => {
+      if (job.settled || !job.slot || job.slot.job !== job) return;
+      const message: PoolMessage = { type: 'roster', id: job.id, roster, objective };
+      job.slot.worker.postMessage(message);
+    };
     if (controls.signal?.aborted) cancel();
     controls.signal?.addEventListener('abort', cancel, { once: true });
     controls.killSignal?.addEventListener('abort', kill, { once: true });
@@ -177,7 +215,7 @@ export class SolverPool {
       this.queue.push(job);
       this.pump();
     }
-    return { result, cancel, kill };
+    return { result, cancel, kill, offer };
   }
 
   /** Solve a plain model (arrays or LP/MPS text) in a worker. */
@@ -192,7 +230,17 @@ export class SolverPool {
 
   /** Solve a roster problem in a worker (or several, with `portfolio`). */
   async solveRoster(problem: RosterProblem, options: PoolRosterOptions = {}): Promise<RosterSolveResult> {
-    const { onProgress, signal, killSignal, portfolio = 1, portfolioStrategies, ...rest } = options;
+    const {
+      onProgress,
+      signal,
+      killSignal,
+      onRoster,
+      portfolio = 1,
+      portfolioStrategies,
+      portfolioOptions,
+      shareRosters = true,
+      ...rest
+    } = options;
     const count = Math.max(1, Math.floor(portfolio));
     const baseSeed = rest.randomSeed ?? 0;
     const latest: (SolveProgress | null)[] = new Array<SolveProgress | null>(count).fill(null);
@@ -206,7 +254,17 @@ export class SolverPool {
       lastEmit = now;
       onProgress(mergeProgress(latest));
     };
-    const handles = Array.from({ length: count }, (_, i) =>
+    // The best roster any member has found so far, handed to the others.
+    let shared = Infinity;
+    const share = (from: number, roster: Roster, objective: number): void => {
+      onRoster?.(roster, objective);
+      if (!shareRosters || count === 1 || objective >= shared - 1e-9) return;
+      shared = objective;
+      handles.forEach((h, j) => {
+        if (j !== from) h.offer(roster, objective);
+      });
+    };
+    const handles: TaskHandle<WorkerResult>[] = Array.from({ length: count }, (_, i) =>
       this.start(
         {
           kind: 'roster',
@@ -217,9 +275,15 @@ export class SolverPool {
             ...(portfolioStrategies?.length
               ? { strategy: portfolioStrategies[i % portfolioStrategies.length] }
               : {}),
+            ...(portfolioOptions?.length ? portfolioOptions[i % portfolioOptions.length] : {}),
           },
         },
-        { onProgress: (p) => emitMerged(i, p), signal, killSignal },
+        {
+          onProgress: (p) => emitMerged(i, p),
+          onRoster: (roster, objective) => share(i, roster, objective),
+          signal,
+          killSignal,
+        },
       ),
     );
     if (count === 1) return (await handles[0].result) as RosterSolveResult;
@@ -329,6 +393,10 @@ export class SolverPool {
       case 'progress':
         if (slot.job && slot.job.id === message.id && !slot.job.settled)
           slot.job.onProgress?.(message.progress);
+        return;
+      case 'roster':
+        if (slot.job && slot.job.id === message.id && !slot.job.settled)
+          slot.job.onRoster?.(message.roster, message.objective);
         return;
       case 'done':
       case 'failed': {

@@ -61,6 +61,8 @@ export interface MipRunOptions {
   relaxIntegrality?: boolean;
   /** `performance.now()` at which the caller's clock started (so elapsed time includes model building). */
   clockStart?: number;
+  /** Every new incumbent's full column vector and objective, as HiGHS finds it. */
+  onSolution?: (values: Float64Array, objective: number) => void;
 }
 
 export interface MipRunResult {
@@ -203,6 +205,8 @@ export function runMip(
                 if (better || improvements.length === 0) {
                   incumbent = objective;
                   improvements.push({ objective, seconds: elapsed() });
+                  const solution = event.data.mip_solution;
+                  if (options.onSolution && solution) options.onSolution(solution, objective);
                 }
               }
               bound = finiteOrNull(event.data.mip_dual_bound) ?? bound;

@@ -68,6 +68,16 @@ export interface SolveRosterOptions {
    * first for the rest and fix-and-optimise continues from its best roster.
    */
   fixAndOptimiseShare?: number;
+  /**
+   * Every better roster that meets every hard rule, as it is found (the MIP's incumbents and
+   * fix-and-optimise's improvements), so a solve on another core can continue from it.
+   */
+  onRoster?: (roster: Roster, objective: number) => void;
+  /**
+   * Asked between fix-and-optimise rounds: a roster found by another solve of the same problem, or
+   * null. A better one that meets every hard rule replaces the current roster.
+   */
+  incomingRoster?: () => Roster | null;
 }
 
 /**
@@ -253,19 +263,29 @@ async function fixAndOptimisePhase(
     return { values: run.values, optimal: run.status === 'optimal' };
   };
   let best: { values: Float64Array; objective: number } | null = startValuesOf(built, start);
-  await fixAndOptimise(model, start.roster, solveSub, {
+  if (best) options.onRoster?.(start.roster, best.objective);
+  const result = await fixAndOptimise(model, start.roster, solveSub, {
     timeLimitSeconds: seconds,
     seed: (options.randomSeed ?? 0) + 1,
     signal: stop.signal,
     targetObjective,
+    incoming: options.incomingRoster,
     onImprovement: (roster) => {
       const check = checkRoster(problem, roster, built.index);
       if (check.violations.length > 0) return;
       if (best && check.objective >= best.objective) return;
       best = { values: built.encode(roster), objective: check.objective };
       onImproved(check.objective);
+      options.onRoster?.(roster, check.objective);
     },
   });
+  // The last roster may have come from another solve (`incomingRoster`) and be better than any of
+  // this phase's own.
+  const last = checkRoster(problem, result.roster, built.index);
+  if (last.violations.length === 0 && (!best || last.objective < best.objective - 1e-9)) {
+    best = { values: built.encode(result.roster), objective: last.objective };
+    onImproved(last.objective);
+  }
   return best;
 }
 
@@ -380,6 +400,13 @@ export async function solveRoster(
       cancelFlag: options.cancelFlag,
       startValues: elastic ? elastic.model.encode(startRoster!.roster) : start?.values,
       clockStart,
+      onSolution: options.onRoster
+        ? (values) => {
+            const roster = (elastic ? elastic.model : built).decode(values);
+            const check = checkRoster(problem, roster, built.index);
+            if (check.violations.length === 0) options.onRoster?.(roster, check.objective);
+          }
+        : undefined,
     });
     if (elastic) run = strictRun(run, elastic.model, elastic.penalty, built, problem);
     const left = timeLimitSeconds - elapsed();
