@@ -55,6 +55,7 @@ describe('bench command', () => {
       outDir: '/tmp/o',
       warmStart: true,
       model: 'product',
+      cores: 1,
     });
     expect(parseArgs(['2', '--model', 'textbook', '--no-warm-start'])).toMatchObject({
       model: 'textbook',
@@ -63,6 +64,9 @@ describe('bench command', () => {
     expect(() => parseArgs(['1', '--model', 'fancy'])).toThrow(/--model is product or textbook/);
     expect(parseArgs(['1', '--strategy', 'mip']).strategy).toBe('mip');
     expect(() => parseArgs(['1', '--strategy', 'guess'])).toThrow(/--strategy is one of auto, mip/);
+    expect(parseArgs(['1']).cores).toBe(1);
+    expect(parseArgs(['1', '--cores', '2']).cores).toBe(2);
+    expect(() => parseArgs(['1', '--cores', '3'])).toThrow(/--cores is 1 or 2/);
     expect(() => parseArgs([])).toThrow(/No instance given/);
     expect(() => parseArgs(['1', '--time-limit'])).toThrow(/--time-limit needs a value/);
     expect(() => parseArgs(['1', '--time-limit', '-3'])).toThrow(/positive number/);

@@ -2,6 +2,7 @@
  * Benchmark command line:
  *   npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]
  *                    [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]
+ *                    [--cores 1|2]
  * Instances are numbers 1-24 (InstanceN.txt in $ROTAPLEX_BENCHMARKS_DIR, default
  * ../shared/benchmarks/curtois-qu beside the repository), ranges such as 1-12, or paths to files
  * in the same format. Each instance is solved in turn by the product's solve path; a table is
@@ -21,13 +22,14 @@ interface CliOptions {
   warmStart: boolean;
   model: 'product' | 'textbook';
   strategy?: SolveRosterOptions['strategy'];
+  cores: number;
 }
 
 const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
 
 const USAGE =
   'Usage: npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]\n' +
-  '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]\n' +
+  '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise] [--cores 1|2]\n' +
   '  instances: numbers 1-24, ranges like 1-12, or paths to instance files';
 
 export function parseArgs(argv: string[]): CliOptions {
@@ -37,6 +39,7 @@ export function parseArgs(argv: string[]): CliOptions {
     outDir: null,
     warmStart: true,
     model: 'product',
+    cores: 1,
   };
   const value = (i: number, flag: string): string => {
     const v = argv[i + 1];
@@ -55,7 +58,11 @@ export function parseArgs(argv: string[]): CliOptions {
     else if (arg === '--gap') options.mipRelGap = Number(value(i++, arg));
     else if (arg === '--seed') options.randomSeed = Number(value(i++, arg));
     else if (arg === '--no-warm-start') options.warmStart = false;
-    else if (arg === '--strategy') {
+    else if (arg === '--cores') {
+      const v = value(i++, arg);
+      if (v !== '1' && v !== '2') throw new Error(`--cores is 1 or 2, got "${v}".`);
+      options.cores = Number(v);
+    } else if (arg === '--strategy') {
       const st = value(i++, arg);
       if (!STRATEGIES.includes(st))
         throw new Error(`--strategy is one of ${STRATEGIES.join(', ')}, got "${st}".`);
@@ -111,6 +118,7 @@ export async function main(argv: string[]): Promise<number> {
         warmStart: options.warmStart,
         model: options.model,
         strategy: options.strategy,
+        cores: options.cores,
         onProgress: progressPrinter(ref),
       });
     } catch (err) {

@@ -10,6 +10,7 @@ import type { ModelData } from 'highs';
 import { checkRoster } from '../check/checker';
 import { solveMip } from '../solve/run-mip';
 import { solveRoster, type SolveRosterOptions } from '../solve/solve';
+import { sharedSolverPool, TWO_CORE_PORTFOLIO } from '../pool/solver-pool';
 import { bestKnownFor, type BestKnown } from './best-known';
 import { loadInstance, type LoadedInstance } from './curtois-qu';
 import { evaluateBenchmarkRoster } from './evaluate';
@@ -30,6 +31,12 @@ export interface BenchRunOptions {
   model?: 'product' | 'textbook';
   /** The product path's strategy (default: solveRoster's own default, 'auto'). */
   strategy?: SolveRosterOptions['strategy'];
+  /**
+   * 1 (default): one solve on this thread. 2: the two-core portfolio in the solver pool
+   * (TWO_CORE_PORTFOLIO: the solve as asked on one core, fix-and-optimise on the other, handing each
+   * other every better roster).
+   */
+  cores?: number;
 }
 
 interface SolvedRoster {
@@ -65,15 +72,24 @@ async function solveTextbook(loaded: LoadedInstance, options: BenchRunOptions): 
 }
 
 async function solveProduct(loaded: LoadedInstance, options: BenchRunOptions): Promise<SolvedRoster> {
-  const result = await solveRoster(loaded.problem, {
+  const common = {
     timeLimitSeconds: options.timeLimitSeconds,
     mipRelGap: options.mipRelGap,
     randomSeed: options.randomSeed,
-    warmStart: options.warmStart === false ? null : 'heuristic',
+    warmStart: options.warmStart === false ? null : ('heuristic' as const),
     onProgress: options.onProgress,
     explain: false,
     strategy: options.strategy,
-  });
+  };
+  const cores = Math.max(1, Math.floor(options.cores ?? 1));
+  const result =
+    cores === 1
+      ? await solveRoster(loaded.problem, common)
+      : await sharedSolverPool().solveRoster(loaded.problem, {
+          ...common,
+          portfolio: cores,
+          portfolioOptions: TWO_CORE_PORTFOLIO,
+        });
   return { ...result, columns: result.model.columns, rows: result.model.rows };
 }
 
