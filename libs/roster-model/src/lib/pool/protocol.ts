@@ -16,7 +16,13 @@ export type PortableMipOptions = Omit<
 >;
 
 export type WorkerTask =
-  | { kind: 'roster'; problem: RosterProblem; options: PortableRosterOptions }
+  | {
+      kind: 'roster';
+      problem: RosterProblem;
+      options: PortableRosterOptions;
+      /** Send every better roster to the pool and take rosters offered back (portfolio members). */
+      shareRosters?: boolean;
+    }
   | { kind: 'mip'; model: ModelData | EncodedModel; options: PortableMipOptions };
 
 export type WorkerResult = RosterSolveResult | MipRunResult;

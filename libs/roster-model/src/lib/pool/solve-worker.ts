@@ -76,12 +76,17 @@ async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMe
         session,
         cancelFlag,
         onProgress,
-        onRoster: (roster, objective) => send({ type: 'roster', id, roster, objective }),
-        incomingRoster: () => {
-          const offer = offers.get(id);
-          offers.delete(id);
-          return offer?.roster ?? null;
-        },
+        ...(task.shareRosters
+          ? {
+              onRoster: (roster: Roster, objective: number) =>
+                send({ type: 'roster', id, roster, objective }),
+              incomingRoster: () => {
+                const offer = offers.get(id);
+                offers.delete(id);
+                return offer?.roster ?? null;
+              },
+            }
+          : {}),
       });
     } else {
       result = runMip(session, task.model, { ...task.options, cancelFlag, onProgress });

@@ -101,7 +101,7 @@ export const TWO_CORE_PORTFOLIO: PortfolioMemberOptions[] = [
 /** What may differ between the members of a portfolio. */
 export type PortfolioMemberOptions = Pick<
   SolveRosterOptions,
-  'strategy' | 'fixAndOptimiseShare' | 'highsOptions' | 'warmStart'
+  'strategy' | 'fixAndOptimiseShare' | 'fixAndOptimiseSubSeconds' | 'highsOptions' | 'warmStart'
 >;
 
 /** A running task: its result, and switches to stop it gently or at once. */
@@ -269,6 +269,7 @@ export class SolverPool {
         {
           kind: 'roster',
           problem,
+          shareRosters: Boolean(onRoster) || (shareRosters && count > 1),
           options: {
             ...rest,
             randomSeed: baseSeed + i,

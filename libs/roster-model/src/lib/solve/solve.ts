@@ -68,6 +68,8 @@ export interface SolveRosterOptions {
    * first for the rest and fix-and-optimise continues from its best roster.
    */
   fixAndOptimiseShare?: number;
+  /** Time limit of each fix-and-optimise sub-MIP in seconds (default FIX_AND_OPTIMISE_SUB_SECONDS). */
+  fixAndOptimiseSubSeconds?: number;
   /**
    * Every better roster that meets every hard rule, as it is found (the MIP's incumbents and
    * fix-and-optimise's improvements), so a solve on another core can continue from it.
@@ -86,6 +88,12 @@ export interface SolveRosterOptions {
  * the full MIP spends the whole minute in its root (cuts) and finds no roster beyond its first.
  */
 export const AUTO_LARGE_MODEL_X = 2000;
+/**
+ * Time limit of each fix-and-optimise sub-MIP (seconds). Paired 60 s two-core runs of benchmark
+ * instances 8, 10, 11 and 12 (docs/benchmarks.md): 1 s gave the better roster in 4 of 5 pairs
+ * against 3 s (more, smaller neighbourhoods in the same time).
+ */
+export const FIX_AND_OPTIMISE_SUB_SECONDS = 1;
 /** Share of the time for fix-and-optimise in 'auto' on large models. */
 export const AUTO_FIX_AND_OPTIMISE_SHARE = 0.8;
 /**
@@ -266,6 +274,7 @@ async function fixAndOptimisePhase(
   if (best) options.onRoster?.(start.roster, best.objective);
   const result = await fixAndOptimise(model, start.roster, solveSub, {
     timeLimitSeconds: seconds,
+    subTimeLimitSeconds: options.fixAndOptimiseSubSeconds ?? FIX_AND_OPTIMISE_SUB_SECONDS,
     seed: (options.randomSeed ?? 0) + 1,
     signal: stop.signal,
     targetObjective,
