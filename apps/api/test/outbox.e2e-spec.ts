@@ -27,7 +27,6 @@ const mail = (to: string, subject = `Subject for ${to}`) => ({
 describe('outbox: e-mail through a table with retries (real SMTP to the local catcher)', () => {
   let t: TestApp;
   let admin: string;
-  const saved: Record<string, string | undefined> = {};
 
   const outboxRow = async (to: string) =>
     (
@@ -44,20 +43,17 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
       .length;
 
   beforeAll(async () => {
-    // The delivery settings are read from the environment when the app starts.
-    for (const [k, v] of Object.entries(OUTBOX_ENV)) {
-      saved[k] = process.env[k];
-      process.env[k] = v;
-    }
-    t = await startTestApp();
+    // The delivery settings are read with the rest of the configuration when the app starts.
+    t = await startTestApp(OUTBOX_ENV);
+    expect(t.app.get(OutboxDeliveryService).settings).toEqual({
+      maxAttempts: 3,
+      baseDelayMs: 150,
+      maxDelayMs: 600,
+    });
     admin = (await t.login('admin@example.com')).token;
   });
   afterAll(async () => {
     await t?.close();
-    for (const [k, v] of Object.entries(saved)) {
-      if (v === undefined) delete process.env[k];
-      else process.env[k] = v;
-    }
   });
 
   it('sends a message queued outside a transaction before send() returns', async () => {
@@ -205,12 +201,10 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
 
 describe('outbox across a restart', () => {
   it('sends after start the messages a previous process left pending', async () => {
-    const saved = { ...process.env };
-    Object.assign(process.env, OUTBOX_ENV);
     let first: TestApp | null = null;
     let second: TestApp | null = null;
     try {
-      first = await startTestApp();
+      first = await startTestApp(OUTBOX_ENV);
       const dataDir = first.dataDir;
       await first.app.get(MailCatcherService).stop();
       await first.app.get(MailService).send(mail('after.restart@example.org'));
@@ -222,7 +216,7 @@ describe('outbox across a restart', () => {
       // Stop the process without deleting its data directory.
       await first.app.close();
       first = null;
-      second = await startTestApp({}, dataDir);
+      second = await startTestApp(OUTBOX_ENV, dataDir);
       const s = second;
       await until('delivery after restart', async () => {
         const [r] = await s.dataSource.query(`SELECT status FROM outbox_messages WHERE "to" = ?`, [
@@ -241,7 +235,6 @@ describe('outbox across a restart', () => {
     } finally {
       await first?.close();
       await second?.close();
-      process.env = saved;
     }
   });
 });

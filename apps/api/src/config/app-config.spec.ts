@@ -115,6 +115,12 @@ describe('configuration', () => {
     expect(loadConfig({ REFRESH_TTL: '7d' }).refreshTtl).toBe(604800);
   });
 
+  it('reads the lifetime of e-mailed swap links with the other settings', () => {
+    expect(loadConfig({}).swapLinkTtl).toBe(72 * 3600);
+    expect(loadConfig({ SWAP_LINK_TTL: '30m' }).swapLinkTtl).toBe(1800);
+    expect(() => loadConfig({ SWAP_LINK_TTL: 'soon' })).toThrow(/SWAP_LINK_TTL must be a duration/);
+  });
+
   it('creates a development JWT secret once in DATA_DIR and reuses it', () => {
     const first = resolveJwtSecret(loadConfig({ DATA_DIR: dir }));
     const file = join(dir, 'jwt-secret');

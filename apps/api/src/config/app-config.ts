@@ -39,9 +39,22 @@ export class AppConfig {
   /** Login and password-reset attempts allowed per minute per client address and e-mail. */
   readonly loginRateLimit!: number;
   readonly argon2!: { timeCost: number; memoryCost: number; parallelism: number };
+  /** Lifetime in seconds of the e-mailed swap and open-shift decision links (SWAP_LINK_TTL). */
+  readonly swapLinkTtl!: number;
+  /** Delivery of the e-mail outbox: attempts, first retry delay and longest delay (OUTBOX_*). */
+  readonly outbox!: OutboxSettings;
   /** Directory of the built web app, served with an SPA fallback when it exists. */
   readonly webDistDir!: string;
   readonly version!: string;
+}
+
+export interface OutboxSettings {
+  /** Attempts before a message is marked failed (OUTBOX_MAX_ATTEMPTS, default 8). */
+  maxAttempts: number;
+  /** Delay before the first retry; doubled after each failure (OUTBOX_BASE_DELAY_MS, default 5000). */
+  baseDelayMs: number;
+  /** Longest delay between two attempts (OUTBOX_MAX_DELAY_MS, default 15 minutes). */
+  maxDelayMs: number;
 }
 
 export interface SmtpConfig {
@@ -167,6 +180,13 @@ export function loadConfig(env: Env = process.env): AppConfig {
     problems.push(`ADMIN_EMAIL must be an e-mail address (got "${initialAdminEmail}")`);
   }
 
+  const outboxBaseDelayMs = int('OUTBOX_BASE_DELAY_MS', 5000, 1, 3_600_000);
+  const outbox: OutboxSettings = {
+    maxAttempts: int('OUTBOX_MAX_ATTEMPTS', 8, 1, 100),
+    baseDelayMs: outboxBaseDelayMs,
+    maxDelayMs: Math.max(int('OUTBOX_MAX_DELAY_MS', 15 * 60_000, 1, 24 * 3_600_000), outboxBaseDelayMs),
+  };
+
   const repoRoot = findRepoRoot();
   const config: AppConfig = {
     nodeEnv,
@@ -195,6 +215,8 @@ export function loadConfig(env: Env = process.env): AppConfig {
       memoryCost: int('ARGON2_MEMORY_KIB', 19456, 1024, 4194304),
       parallelism: 1,
     },
+    swapLinkTtl: duration('SWAP_LINK_TTL', 72 * 3600),
+    outbox,
     webDistDir: resolve(read('WEB_DIST_DIR') ?? join(repoRoot, 'dist', 'web')),
     version: readVersion(repoRoot),
   };

@@ -2,10 +2,10 @@ import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy }
 import { InjectRepository } from '@nestjs/typeorm';
 import { createTransport, type Transporter } from 'nodemailer';
 import { Repository } from 'typeorm';
-import { AppConfig } from '../config/app-config';
+import { AppConfig, type OutboxSettings } from '../config/app-config';
 import { MailCatcherService } from '../mail/mail-catcher.service';
 import { OutboxMessageEntity } from './outbox-message.entity';
-import { backoffDelayMs, type OutboxSettings, outboxSettings } from './outbox-settings';
+import { backoffDelayMs } from './outbox-settings';
 
 /** Longest sleep of the loop when nothing is due (it also wakes on every new message). */
 const IDLE_POLL_MS = 30_000;
@@ -27,7 +27,8 @@ export function sqliteUtc(date: Date): string {
 @Injectable()
 export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDestroy {
   private readonly logger = new Logger(OutboxDeliveryService.name);
-  readonly settings: OutboxSettings = outboxSettings();
+  /** Attempts and retry delays (AppConfig.outbox, from the OUTBOX_* variables). */
+  readonly settings: OutboxSettings;
   private transporter: Transporter | null = null;
   private running = false;
   private loopDone: Promise<void> | null = null;
@@ -39,7 +40,9 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
     private readonly config: AppConfig,
     private readonly catcher: MailCatcherService,
     @InjectRepository(OutboxMessageEntity) private readonly messages: Repository<OutboxMessageEntity>,
-  ) {}
+  ) {
+    this.settings = config.outbox;
+  }
 
   async onApplicationBootstrap(): Promise<void> {
     // A message still "sending" was claimed by a process that stopped before recording the outcome:

@@ -1,4 +1,5 @@
-import { backoffDelayMs, outboxSettings } from './outbox-settings';
+import { ConfigValidationError, loadConfig } from '../config/app-config';
+import { backoffDelayMs } from './outbox-settings';
 
 describe('outbox settings and backoff', () => {
   it('doubles the delay after each failure and caps it (binary exponential backoff, common practice; RFC 5321 §4.5.4.1 asks for growing retry intervals)', () => {
@@ -8,13 +9,18 @@ describe('outbox settings and backoff', () => {
     ]);
   });
 
-  it('reads the environment and names a bad variable', () => {
-    expect(outboxSettings({})).toEqual({ maxAttempts: 8, baseDelayMs: 5000, maxDelayMs: 900_000 });
-    expect(outboxSettings({ OUTBOX_MAX_ATTEMPTS: '3', OUTBOX_BASE_DELAY_MS: '50' })).toMatchObject({
+  it('reads the OUTBOX_* variables with the other settings and names a bad one', () => {
+    expect(loadConfig({}).outbox).toEqual({ maxAttempts: 8, baseDelayMs: 5000, maxDelayMs: 900_000 });
+    expect(loadConfig({ OUTBOX_MAX_ATTEMPTS: '3', OUTBOX_BASE_DELAY_MS: '50' }).outbox).toMatchObject({
       maxAttempts: 3,
       baseDelayMs: 50,
     });
-    expect(() => outboxSettings({ OUTBOX_MAX_ATTEMPTS: 'lots' })).toThrow(/OUTBOX_MAX_ATTEMPTS/);
-    expect(() => outboxSettings({ OUTBOX_BASE_DELAY_MS: '0' })).toThrow(/OUTBOX_BASE_DELAY_MS/);
+    // The longest delay is never shorter than the first one.
+    expect(loadConfig({ OUTBOX_BASE_DELAY_MS: '9000', OUTBOX_MAX_DELAY_MS: '10' }).outbox.maxDelayMs).toBe(
+      9000,
+    );
+    expect(() => loadConfig({ OUTBOX_MAX_ATTEMPTS: 'lots' })).toThrow(ConfigValidationError);
+    expect(() => loadConfig({ OUTBOX_MAX_ATTEMPTS: 'lots' })).toThrow(/OUTBOX_MAX_ATTEMPTS/);
+    expect(() => loadConfig({ OUTBOX_BASE_DELAY_MS: '0' })).toThrow(/OUTBOX_BASE_DELAY_MS/);
   });
 });

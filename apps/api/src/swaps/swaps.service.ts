@@ -25,7 +25,7 @@ import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { randomToken, sha256 } from '../common/crypto';
 import { assertUnitAccess, canAccessUnit } from '../common/unit-scope';
-import { AppConfig, parseDuration } from '../config/app-config';
+import { AppConfig } from '../config/app-config';
 import { AuditService } from '../audit/audit.service';
 import { localDate } from '../demo/demo-planning';
 import { MailService, type OutgoingMail } from '../mail/mail.service';
@@ -41,9 +41,6 @@ import {
   SwapLinkTokenEntity,
   SwapRequestEntity,
 } from './swap-request.entity';
-
-/** Default lifetime of an e-mailed decision link; SWAP_LINK_TTL (e.g. "72h", "30m", seconds) overrides it. */
-const DEFAULT_LINK_TTL_SECONDS = 72 * 3600;
 
 /** What a decision produced: mails (queued in its transaction), and a refusal to report after the commit. */
 interface Outcome {
@@ -61,6 +58,7 @@ type Actor = Pick<AuthUser, 'id' | 'role' | 'unitIds' | 'organisationId' | 'disp
  */
 @Injectable()
 export class SwapsService {
+  /** Lifetime of an e-mailed decision link (AppConfig.swapLinkTtl, SWAP_LINK_TTL, default 72 h). */
   readonly linkTtlSeconds: number;
 
   constructor(
@@ -70,12 +68,7 @@ export class SwapsService {
     private readonly config: AppConfig,
     private readonly auditTrail: AuditService,
   ) {
-    const raw = process.env['SWAP_LINK_TTL'];
-    const parsed = raw ? parseDuration(raw) : null;
-    if (raw && (parsed === null || parsed <= 0)) {
-      throw new Error(`SWAP_LINK_TTL must be a duration such as 72h, 30m or 900 (got "${raw}")`);
-    }
-    this.linkTtlSeconds = parsed ?? DEFAULT_LINK_TTL_SECONDS;
+    this.linkTtlSeconds = config.swapLinkTtl;
   }
 
   // ---------------------------------------------------------------- reading
