@@ -50,7 +50,9 @@ async function main(): Promise<void> {
   let queue = Promise.resolve();
   port.on('message', (message: PoolMessage) => {
     if (message.type === 'roster') {
-      // Keep only the best offer for the running task; the solve takes it between rounds.
+      // Keep only the best offer for the running task; the solve takes it between rounds. An offer
+      // that arrives after its task has ended is dropped.
+      if (message.id !== runningId) return;
       const current = offers.get(message.id);
       if (!current || message.objective < current.objective) offers.set(message.id, message);
       return;
@@ -63,9 +65,12 @@ async function main(): Promise<void> {
 
 /** Rosters offered by other solves of the same problem, per task id, until the task takes them. */
 const offers = new Map<number, { roster: Roster; objective: number }>();
+/** Id of the task being solved, or null between tasks. */
+let runningId: number | null = null;
 
 async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMessage): Promise<void> {
   const cancelFlag = new Int32Array(cancelBuffer);
+  runningId = id;
   const onProgress = (progress: SolveProgress): void => send({ type: 'progress', id, progress });
   try {
     await session.ensureHealthy();
@@ -96,6 +101,7 @@ async function runTask(session: HighsSession, { id, task, cancelBuffer }: TaskMe
     if (isWasmFailure(err)) session.markBroken();
     send({ type: 'failed', id, error: errorInfo(err), memoryBytes: session.memoryBytes });
   }
+  runningId = null;
   offers.delete(id);
   // Replace a damaged or bloated instance now, while idle, rather than at the start of the next solve.
   try {
