@@ -18,6 +18,9 @@ import { UserEntity } from './user.entity';
 
 @Injectable()
 export class UsersService {
+  /** The signed-in caller per user id (see findActiveAuthUser). */
+  private readonly authUsers: GenerationCache<AuthUser | null>;
+
   constructor(
     @InjectRepository(UserEntity) private readonly users: Repository<UserEntity>,
     private readonly dataSource: DataSource,
@@ -132,11 +135,10 @@ export class UsersService {
     return toUserDto(user);
   }
 
-  /** The caller as the guards see them; null when missing or deactivated. */
   /**
-   * The caller behind a valid token, loaded on every request (a deactivated user is refused at
-   * once). Repeated requests are served from a cache that any write to the data and one second of
-   * age both invalidate.
+   * The caller as the guards see them, behind a valid token; null when missing or deactivated (a
+   * deactivated user is refused at once). Repeated requests are served from a cache that any write
+   * to the data and one second of age both invalidate.
    */
   async findActiveAuthUser(id: string): Promise<AuthUser | null> {
     const found = await this.authUsers.get(id, async () => {
@@ -145,8 +147,6 @@ export class UsersService {
     });
     return found && { ...found, unitIds: [...found.unitIds] };
   }
-
-  private readonly authUsers: GenerationCache<AuthUser | null>;
 
   private async sendInvitation(caller: AuthUser, user: UserEntity, token: string): Promise<void> {
     const org = await this.dataSource
