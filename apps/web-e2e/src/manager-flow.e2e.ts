@@ -1,6 +1,13 @@
 import { PLANNING_ROUTES, type RosterPeriodDto } from '@rotaplex/contracts';
 import { apiCall, apiSignIn } from './support/api';
-import { openBrowser, screenshot, signIn, unnamedControls, type Session } from './support/browser';
+import {
+  openBrowser,
+  openDemoDraft,
+  screenshot,
+  signIn,
+  unnamedControls,
+  type Session,
+} from './support/browser';
 
 // Issue 4, item 5: the manager's whole flow on a demo period, from Generate to Publish (staff
 // reading published shifts in their calendar is my-roster.e2e.ts). It uses the contact
@@ -20,14 +27,7 @@ describe('the contact centre planner generates and publishes the demo period', (
 
   it('generates the demo period and explains the short need', async () => {
     const { page } = browser;
-    await page.goto('/planning/periods');
-    const row = page
-      .getByRole('row')
-      .filter({ hasText: 'Draft' })
-      .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
-      .first();
-    await row.getByRole('link').click();
-    await page.getByRole('heading', { name: /^Planning board: Contact Centre North/ }).waitFor();
+    await openDemoDraft(page, /^Planning board: Contact Centre North/);
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('30');
     await page.getByRole('button', { name: 'Generate' }).click();
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });

@@ -1,4 +1,11 @@
-import { openBrowser, screenshot, signIn, unnamedControls, type Session } from './support/browser';
+import {
+  openBrowser,
+  openDemoDraft,
+  screenshot,
+  signIn,
+  unnamedControls,
+  type Session,
+} from './support/browser';
 
 // Issue 4, item 3: the planning board as the demo manager. The rest check follows the EU Working
 // Time Directive 2003/88/EC, Art. 3 (11 consecutive hours of daily rest), which the demo contracts
@@ -19,15 +26,7 @@ describe('planning board as the demo manager', () => {
 
   it('opens the draft period of the ward from the roster periods list', async () => {
     const { page } = browser;
-    await page.goto('/planning/periods');
-    // The demo's four-week draft (other journeys add periods of their own).
-    const row = page
-      .getByRole('row')
-      .filter({ hasText: 'Draft' })
-      .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
-      .first();
-    await row.getByRole('link').click();
-    await page.getByRole('heading', { name: /^Planning board: / }).waitFor();
+    await openDemoDraft(page, /^Planning board: /);
     await board().waitFor();
     expect(await board().getByRole('columnheader').count()).toBeGreaterThanOrEqual(7 + 2);
     await page.getByText(/Cover against needs/).waitFor();

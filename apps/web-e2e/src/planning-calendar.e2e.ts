@@ -1,6 +1,7 @@
 import {
   eventually,
   openBrowser,
+  openDemoDraft,
   screenshot,
   signIn,
   unnamedControls,
@@ -42,15 +43,7 @@ describe('planning calendar as the demo manager', () => {
   it('sets a cell of the draft period through the dialog (PUT) on the board', async () => {
     const { page } = browser;
     expect(await page.evaluate(() => Intl.DateTimeFormat().resolvedOptions().timeZone)).toBe('Asia/Tokyo');
-    await page.goto('/planning/periods');
-    // The demo's four-week draft (other journeys add periods of their own).
-    const row = page
-      .getByRole('row')
-      .filter({ hasText: 'Draft' })
-      .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
-      .first();
-    await row.getByRole('link').click();
-    await page.getByRole('heading', { name: /^Planning board: Ward 7/ }).waitFor();
+    await openDemoDraft(page, /^Planning board: Ward 7/);
     await cell().waitFor();
     await page.waitForFunction(() => !document.querySelector('button[data-row]:disabled'), undefined, {
       timeout: 60_000,

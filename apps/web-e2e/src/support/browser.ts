@@ -70,6 +70,21 @@ export async function signOut(page: Page): Promise<void> {
   await page.getByRole('heading', { name: 'Sign in to Rotaplex' }).waitFor();
 }
 
+/**
+ * Opens the demo's four-week draft period of the signed-in planner's unit from the roster periods
+ * list (other journeys add periods of their own) and waits for its planning board heading.
+ */
+export async function openDemoDraft(page: Page, heading: RegExp): Promise<void> {
+  await page.goto('/planning/periods');
+  const row = page
+    .getByRole('row')
+    .filter({ hasText: 'Draft' })
+    .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
+    .first();
+  await row.getByRole('link').click();
+  await page.getByRole('heading', { name: heading }).waitFor();
+}
+
 /** Polls until the check returns a value other than undefined (for text that appears later). */
 export async function eventually<T>(
   check: () => Promise<T | undefined>,
