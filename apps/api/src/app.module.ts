@@ -1,5 +1,6 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { ScheduleModule } from '@nestjs/schedule';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
 import { DatabaseErrorFilter } from './common/filters/database-error.filter';
@@ -51,6 +52,8 @@ export class AppModule {
           },
         }),
         WriteGenerationModule,
+        // Time-driven work: expiry of swap requests and their links, outbox retention.
+        ScheduleModule.forRoot(),
         HealthModule,
         MailModule,
         OrganisationModule,

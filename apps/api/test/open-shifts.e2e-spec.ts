@@ -10,6 +10,7 @@ import {
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { addDays } from '../src/roster-periods/roster-periods.service';
+import { SwapRequestEntity } from '../src/swaps/swap-request.entity';
 import { linkToken, nextMailTo } from './support/mailbox';
 import {
   createPeriod,
@@ -152,6 +153,31 @@ describe('open shifts', () => {
     );
     expect(audit).toEqual([{ kind: 'open-shift-claim' }]);
     expect(has(await list(tokens.a), 1, 'L', 'RN')).toBe(false);
+  });
+
+  it('a claim whose day has passed is refused on a direct approval, with no read before', async () => {
+    const created = (await claim('a', 3, 'E', 'RN').expect(201)).body as SwapRequestDto;
+    // Its day moves into the past, as if the period had run on.
+    const row = await t.dataSource.manager.findOneByOrFail(SwapRequestEntity, { id: created.id });
+    await t.dataSource.manager.update(
+      SwapRequestEntity,
+      { id: created.id },
+      { changes: row.changes.split(day(3)).join('2020-01-06'), firstDate: '2020-01-06' },
+    );
+    const res = await t
+      .http()
+      .post(api(S.swapDecide(created.id)))
+      .set(bearer(manager))
+      .send({ decision: 'approve' })
+      .expect(410);
+    expect(res.body.message).toMatch(/expired: its first day \(2020-01-06\) has passed/);
+    expect(await cell('a', 3)).toBeNull();
+    const after = await t
+      .http()
+      .get(api(S.swap(created.id)))
+      .set(bearer(manager))
+      .expect(200);
+    expect(after.body).toMatchObject({ status: 'expired', actions: [] });
   });
 
   it('two claims for the last place approved at once: one succeeds, one is refused', async () => {

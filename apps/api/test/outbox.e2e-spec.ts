@@ -2,6 +2,8 @@ import { type OutboxMessageDto, type Page } from '@rotaplex/contracts';
 import { MailCatcherService } from '../src/mail/mail-catcher.service';
 import { MailService } from '../src/mail/mail.service';
 import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
+import { OutboxMessageEntity } from '../src/outbox/outbox-message.entity';
+import { OutboxRetentionService } from '../src/outbox/outbox-retention.service';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /** Polls until `check` returns a value other than undefined (the outbox delivers in the background). */
@@ -15,7 +17,12 @@ async function until<T>(what: string, check: () => Promise<T | undefined>, timeo
   }
 }
 
-const OUTBOX_ENV = { OUTBOX_MAX_ATTEMPTS: '3', OUTBOX_BASE_DELAY_MS: '150', OUTBOX_MAX_DELAY_MS: '600' };
+const OUTBOX_ENV = {
+  OUTBOX_MAX_ATTEMPTS: '3',
+  OUTBOX_BASE_DELAY_MS: '150',
+  OUTBOX_MAX_DELAY_MS: '600',
+  OUTBOX_RETENTION: '2d',
+};
 
 const mail = (to: string, subject = `Subject for ${to}`) => ({
   to,
@@ -49,6 +56,7 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
       maxAttempts: 3,
       baseDelayMs: 150,
       maxDelayMs: 600,
+      retentionSeconds: 2 * 86_400,
     });
     admin = (await t.login('admin@example.com')).token;
   });
@@ -183,6 +191,39 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
       expect(await outboxRow(to)).toMatchObject({ status: 'sent' });
       expect(await received(to)).toBe(1);
     }
+  });
+
+  it('deletes sent messages once OUTBOX_RETENTION has passed since sending, and keeps the others', async () => {
+    const send = t.app.get(MailService);
+    await send.send(mail('old.sent@example.org'));
+    await send.send(mail('recent.sent@example.org'));
+    const old = await outboxRow('old.sent@example.org');
+    expect(old.status).toBe('sent');
+    // Sent three days ago: beyond the two days of OUTBOX_RETENTION.
+    await t.dataSource
+      .getRepository(OutboxMessageEntity)
+      .update({ id: old.id }, { sentAt: new Date(Date.now() - 3 * 86_400_000) });
+    // A message that failed long ago stays for an admin's retry.
+    const catcher = t.app.get(MailCatcherService);
+    await catcher.stop();
+    try {
+      await send.send(mail('old.failed@example.org'));
+    } finally {
+      await catcher.start();
+    }
+    await t.dataSource
+      .getRepository(OutboxMessageEntity)
+      .update(
+        { to: 'old.failed@example.org' },
+        { status: 'failed', nextAttemptAt: null, createdAt: new Date(Date.now() - 9 * 86_400_000) },
+      );
+    const failed = await t.dataSource.getRepository(OutboxMessageEntity).countBy({ status: 'failed' });
+
+    expect(await t.app.get(OutboxRetentionService).purgeDelivered()).toBe(1);
+    expect(await outboxRow('old.sent@example.org')).toBeUndefined();
+    expect((await outboxRow('recent.sent@example.org')).status).toBe('sent');
+    expect(await t.dataSource.getRepository(OutboxMessageEntity).countBy({ status: 'failed' })).toBe(failed);
+    expect(await t.app.get(OutboxRetentionService).purgeDelivered()).toBe(0);
   });
 
   it('lists the outbox for admins only, newest first, paginated and filtered', async () => {

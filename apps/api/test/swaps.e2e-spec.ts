@@ -11,7 +11,8 @@ import {
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/roster-periods/roster-periods.service';
-import { SwapLinkTokenEntity } from '../src/swaps/swap-request.entity';
+import { SwapExpiryService } from '../src/swaps/swap-expiry.service';
+import { SwapLinkTokenEntity, SwapRequestEntity } from '../src/swaps/swap-request.entity';
 import { linkToken, nextMailTo } from './support/mailbox';
 import {
   createPeriod,
@@ -113,6 +114,24 @@ describe('swaps', () => {
       .send({ decision });
   const byLink = (token: string, decision: string) =>
     t.http().post(api(S.swapLink)).send({ token, decision });
+
+  /** Moves a request's day into the past, as if the period had run on (the fixture a late decision meets). */
+  const moveIntoPast = async (id: string, d: number) => {
+    const row = await em().findOneByOrFail(SwapRequestEntity, { id });
+    await em().update(
+      SwapRequestEntity,
+      { id },
+      { changes: row.changes.split(day(d)).join('2020-01-06'), firstDate: '2020-01-06' },
+    );
+  };
+  const read = async (token: string, id: string) =>
+    (
+      await t
+        .http()
+        .get(api(S.swap(id)))
+        .set(bearer(token))
+        .expect(200)
+    ).body as SwapRequestDto;
 
   /** A: Late on day 0; B: Early on day 0; proposes the same-day swap, B accepts in the app. */
   const acceptedSwap = async (d: number): Promise<SwapRequestDto> => {
@@ -299,26 +318,63 @@ describe('swaps', () => {
     await decide(tokens.d, offer.id, 'decline').expect(200);
   });
 
-  it('a request still pending when its shift has started expires and can no longer be decided', async () => {
+  it('the scheduled expiry marks requests whose day has passed, and only those', async () => {
     await setCell('a', 22, 'E');
     const offer = (
       await propose('a', { kind: 'offer', myDate: day(22), colleagueStaffMemberId: staffId.c }).expect(201)
     ).body as SwapRequestDto;
-    // Move the request's day into the past, as if the period had run on.
-    await em().query(
-      `UPDATE "swap_requests" SET "changes" = replace("changes", ?, '2020-01-06') WHERE "id" = ?`,
-      [day(22), offer.id],
-    );
-    const read = (
-      await t
-        .http()
-        .get(api(S.swap(offer.id)))
-        .set(bearer(tokens.c))
-        .expect(200)
+    await setCell('a', 23, 'E');
+    const later = (
+      await propose('a', { kind: 'offer', myDate: day(23), colleagueStaffMemberId: staffId.d }).expect(201)
     ).body as SwapRequestDto;
-    expect(read.status).toBe('expired');
-    expect(read.actions).toEqual([]);
-    await decide(tokens.c, offer.id, 'accept').expect(410);
+    await mailTo(EMAIL.c, /offers you a shift/);
+    await mailTo(EMAIL.d, /offers you a shift/);
+    await moveIntoPast(offer.id, 22);
+    await t.app.get(SwapExpiryService).expireOverdue();
+    const expired = await read(tokens.c, offer.id);
+    expect(expired).toMatchObject({ status: 'expired', actions: [] });
+    expect(expired.outcome).toMatch(/first day passed before a decision/);
+    expect((await read(tokens.d, later.id)).status).toBe('proposed'); // its day is still to come
+    const refused = await decide(tokens.c, offer.id, 'accept').expect(410);
+    expect(refused.body.message).toMatch(/first day \(2020-01-06\) has passed/);
+    expect(await t.app.get(SwapExpiryService).expireOverdue()).toBe(0); // nothing else is overdue
+    await decide(tokens.d, later.id, 'decline').expect(200);
+  });
+
+  it('an accepted swap whose day has passed is refused on a direct approval, with no read before', async () => {
+    const swap = await acceptedSwap(24);
+    await moveIntoPast(swap.id, 24);
+    const res = await decide(manager, swap.id, 'approve').expect(410);
+    expect(res.body.message).toMatch(/expired: its first day \(2020-01-06\) has passed/);
+    expect(res.body.statusCode).toBe(410);
+    expect(await cell('a', 24)).toBe('L');
+    expect(await cell('b', 24)).toBe('E');
+    expect((await read(tokens.a, swap.id)).status).toBe('expired');
+    await decide(manager, swap.id, 'approve').expect(410);
+  });
+
+  it('an offer whose day has passed is refused through its e-mail link and cannot be cancelled', async () => {
+    await setCell('a', 25, 'E');
+    const offer = (
+      await propose('a', { kind: 'offer', myDate: day(25), colleagueStaffMemberId: staffId.d }).expect(201)
+    ).body as SwapRequestDto;
+    const token = tokenIn(await mailTo(EMAIL.d, /offers you a shift/));
+    await moveIntoPast(offer.id, 25);
+    const res = await byLink(token, 'accept').expect(410);
+    expect(res.body.message).toMatch(/has passed before a decision was made/);
+    expect((await read(tokens.d, offer.id)).status).toBe('expired');
+
+    await setCell('a', 26, 'E');
+    const other = (
+      await propose('a', { kind: 'offer', myDate: day(26), colleagueStaffMemberId: staffId.c }).expect(201)
+    ).body as SwapRequestDto;
+    await moveIntoPast(other.id, 26);
+    await t
+      .http()
+      .post(api(S.swapCancel(other.id)))
+      .set(bearer(tokens.a))
+      .expect(410);
+    expect((await read(tokens.a, other.id)).status).toBe('expired');
   });
 
   it('refuses the wrong role and other units', async () => {

@@ -55,6 +55,8 @@ export interface OutboxSettings {
   baseDelayMs: number;
   /** Longest delay between two attempts (OUTBOX_MAX_DELAY_MS, default 15 minutes). */
   maxDelayMs: number;
+  /** Seconds a sent message is kept (without its body) before it is deleted (OUTBOX_RETENTION, default 30 days). */
+  retentionSeconds: number;
 }
 
 export interface SmtpConfig {
@@ -185,6 +187,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
     maxAttempts: int('OUTBOX_MAX_ATTEMPTS', 8, 1, 100),
     baseDelayMs: outboxBaseDelayMs,
     maxDelayMs: Math.max(int('OUTBOX_MAX_DELAY_MS', 15 * 60_000, 1, 24 * 3_600_000), outboxBaseDelayMs),
+    retentionSeconds: duration('OUTBOX_RETENTION', 30 * 24 * 3600),
   };
 
   const repoRoot = findRepoRoot();

@@ -79,6 +79,31 @@ describe('database migrations', () => {
     }
   });
 
+  it('gives existing swap requests the first day of their changes', async () => {
+    const file = join(dir, 'db.sqlite');
+    const before = MIGRATIONS.findIndex((m) => m.name === 'SwapFirstDate1765281600000');
+    const old = new DataSource({ ...dataSourceOptions(file), migrations: MIGRATIONS.slice(0, before) });
+    await old.initialize();
+    await old.query('PRAGMA foreign_keys = OFF'); // the row alone, without its period and people
+    const changes = JSON.stringify([
+      { staffMemberId: 's1', date: '2030-01-09', before: 'x', after: null },
+      { staffMemberId: 's2', date: '2030-01-08', before: null, after: 'x' },
+    ]);
+    await old.query(
+      `INSERT INTO swap_requests (id, rosterPeriodId, unitId, kind, status, proposerStaffMemberId, changes, version) VALUES ('r1', 'p1', 'u1', 'swap', 'proposed', 's1', ?, 1)`,
+      [changes],
+    );
+    await old.destroy();
+    const ds = await open(file);
+    try {
+      expect(await ds.query(`SELECT id, firstDate, changes FROM swap_requests`)).toEqual([
+        { id: 'r1', firstDate: '2030-01-08', changes },
+      ]);
+    } finally {
+      await ds.destroy();
+    }
+  });
+
   it('turns on WAL and foreign keys', async () => {
     const ds = await open(join(dir, 'db.sqlite'));
     try {

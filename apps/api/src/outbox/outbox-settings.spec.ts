@@ -10,7 +10,15 @@ describe('outbox settings and backoff', () => {
   });
 
   it('reads the OUTBOX_* variables with the other settings and names a bad one', () => {
-    expect(loadConfig({}).outbox).toEqual({ maxAttempts: 8, baseDelayMs: 5000, maxDelayMs: 900_000 });
+    expect(loadConfig({}).outbox).toEqual({
+      maxAttempts: 8,
+      baseDelayMs: 5000,
+      maxDelayMs: 900_000,
+      retentionSeconds: 30 * 86_400,
+    });
+    expect(loadConfig({ OUTBOX_RETENTION: '7d' }).outbox.retentionSeconds).toBe(7 * 86_400);
+    expect(() => loadConfig({ OUTBOX_RETENTION: 'forever' })).toThrow(/OUTBOX_RETENTION/);
+    expect(() => loadConfig({ OUTBOX_RETENTION: '0' })).toThrow(/OUTBOX_RETENTION/);
     expect(loadConfig({ OUTBOX_MAX_ATTEMPTS: '3', OUTBOX_BASE_DELAY_MS: '50' }).outbox).toMatchObject({
       maxAttempts: 3,
       baseDelayMs: 50,

@@ -35,6 +35,7 @@ const list = (values: readonly string[]) => values.map((v) => `'${v}'`).join(', 
 @Check('CHK_swap_requests_kind', `"kind" IN (${list(SWAP_KINDS)})`)
 @Check('CHK_swap_requests_status', `"status" IN (${list(SWAP_STATUSES)})`)
 @Index('IDX_swap_requests_period_status', ['rosterPeriodId', 'status'])
+@Index('IDX_swap_requests_status_first_date', ['status', 'firstDate'])
 export class SwapRequestEntity {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -76,6 +77,13 @@ export class SwapRequestEntity {
   /** JSON array of {@link StoredCellChange}. */
   @Column({ type: 'text' })
   changes!: string;
+
+  /**
+   * The earliest day `changes` touches (YYYY-MM-DD). A request still pending once that day has
+   * passed in the unit's time zone expires (the scheduled sweep, and every decision, check it).
+   */
+  @Column({ type: 'varchar', length: 10 })
+  firstDate!: string;
 
   @Column({ type: 'varchar', length: 500, nullable: true })
   note!: string | null;

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
+import { SwapExpiryService } from './swap-expiry.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';
 import { SwapLinksController, SwapsController } from './swaps.controller';
 import { SwapsService } from './swaps.service';
@@ -13,7 +14,7 @@ import { SwapsService } from './swaps.service';
     MailModule,
   ],
   controllers: [SwapsController, SwapLinksController],
-  providers: [SwapsService],
-  exports: [SwapsService],
+  providers: [SwapsService, SwapExpiryService],
+  exports: [SwapsService, SwapExpiryService],
 })
 export class SwapsModule {}

@@ -29,11 +29,11 @@ import { AppConfig } from '../config/app-config';
 import { AuditService } from '../audit/audit.service';
 import { localDate } from '../demo/demo-planning';
 import { MailService, type OutgoingMail } from '../mail/mail.service';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UserEntity } from '../users/user.entity';
 import { changeDto, evaluateChanges, staleCells } from './swap-evaluation';
+import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.service';
 import { shiftWords, swapMail } from './swap-mails';
 import {
   type StoredCellChange,
@@ -45,7 +45,7 @@ import {
 /** What a decision produced: mails (queued in its transaction), and a refusal to report after the commit. */
 interface Outcome {
   mails: OutgoingMail[];
-  refusal?: { status: 409 | 422; message: string; findings?: SwapPreviewDto };
+  refusal?: { status: 409 | 410 | 422; message: string; findings?: SwapPreviewDto };
 }
 
 type Actor = Pick<AuthUser, 'id' | 'role' | 'unitIds' | 'organisationId' | 'displayName' | 'email'>;
@@ -99,7 +99,6 @@ export class SwapsService {
   }
 
   async list(user: AuthUser, status?: SwapStatus): Promise<SwapRequestDto[]> {
-    await this.expireOverdue();
     const m = this.dataSource.manager;
     const qb = m.createQueryBuilder(SwapRequestEntity, 'r').orderBy('r.createdAt', 'DESC').addOrderBy('r.id');
     if (user.role === 'staff') {
@@ -120,7 +119,6 @@ export class SwapsService {
   }
 
   async get(user: AuthUser, id: string): Promise<SwapRequestDto> {
-    await this.expireOverdue();
     const m = this.dataSource.manager;
     const row = await this.visibleRequest(m, user, id);
     return (await this.toDtos(m, [row], user))[0];
@@ -156,6 +154,7 @@ export class SwapsService {
           colleagueStaffMemberId: colleague.id,
           skillId: null,
           changes: JSON.stringify(changes),
+          firstDate: firstDateOf(changes),
           note: body.note?.trim() || null,
           outcome: null,
           decidedById: null,
@@ -278,6 +277,7 @@ export class SwapsService {
         colleagueStaffMemberId: null,
         skillId,
         changes: JSON.stringify([change]),
+        firstDate: change.date,
         note,
         outcome: null,
         decidedById: null,
@@ -294,17 +294,19 @@ export class SwapsService {
   // ---------------------------------------------------------------- deciding
 
   async cancel(user: AuthUser, id: string): Promise<SwapRequestDto> {
-    const mails: OutgoingMail[] = [];
-    await this.dataSource.transaction(async (em) => {
+    const outcome = await this.dataSource.transaction(async (em): Promise<Outcome> => {
       const row = await this.visibleRequest(em, user, id);
       const me = await em.findOneBy(StaffMemberEntity, { id: row.proposerStaffMemberId, userId: user.id });
       if (!me) throw new ForbiddenException('Only the person who asked can cancel this request');
       if (row.status !== 'proposed' && row.status !== 'accepted') {
         throw new ConflictException(`This request is already ${row.status}`);
       }
+      const input = await this.input.load(row.rosterPeriodId, {}, em);
+      const overdue = await this.expireIfOverdue(em, row, input);
+      if (overdue) return overdue;
       await this.setStatus(em, row, 'cancelled', `Cancelled by ${me.name}`, null);
+      const mails: OutgoingMail[] = [];
       if (row.colleagueStaffMemberId) {
-        const input = await this.input.load(row.rosterPeriodId, {}, em);
         mails.push(
           ...(await this.mailPeople(em, input, [row.colleagueStaffMemberId], `${me.name} cancelled a swap`, [
             `${me.name} cancelled their request: ${summary(input, row)}.`,
@@ -313,7 +315,9 @@ export class SwapsService {
         );
       }
       await this.queue(em, mails);
+      return { mails };
     });
+    await this.finish(outcome);
     return this.get(user, id);
   }
 
@@ -331,7 +335,6 @@ export class SwapsService {
 
   /** What an e-mail link shows before the person confirms. Changes nothing (mail scanners may fetch it). */
   async viewLink(token: string): Promise<SwapLinkViewDto> {
-    await this.expireOverdue();
     const m = this.dataSource.manager;
     const link = await this.validLink(m, token);
     const row = await m.findOneByOrFail(SwapRequestEntity, { id: link.swapRequestId });
@@ -381,6 +384,7 @@ export class SwapsService {
       if (outcome.refusal.status === 422) {
         throw new UnprocessableEntityException({ ...body, findings: outcome.refusal.findings });
       }
+      if (outcome.refusal.status === 410) throw new GoneException(body);
       throw new ConflictException(body);
     }
   }
@@ -391,8 +395,11 @@ export class SwapsService {
     actor: Actor,
     body: SwapDecisionDto,
   ): Promise<Outcome> {
-    if (row.status === 'expired') throw new GoneException('This request has expired');
+    if (row.status === 'expired') throw new GoneException(expiredMessage(row));
     const input = await this.input.load(row.rosterPeriodId, {}, em);
+    // Its day may have passed since the last scheduled sweep: decide nothing, record the expiry.
+    const overdue = await this.expireIfOverdue(em, row, input);
+    if (overdue) return overdue;
     const reason = body.reason?.trim() || null;
     if (body.decision === 'accept' || body.decision === 'decline') {
       const colleague = row.colleagueStaffMemberId
@@ -546,25 +553,18 @@ export class SwapsService {
 
   // ---------------------------------------------------------------- helpers
 
-  /** Marks pending requests whose first changed day has passed as expired. */
-  async expireOverdue(): Promise<void> {
-    const m = this.dataSource.manager;
-    const pending = await m.findBy(SwapRequestEntity, { status: In(['proposed', 'accepted']) });
-    for (const row of pending) {
-      const first = (JSON.parse(row.changes) as StoredCellChange[]).map((c) => c.date).sort()[0];
-      const period = await m.findOneBy(RosterPeriodEntity, { id: row.rosterPeriodId });
-      const unit = period
-        ? await m.query(`SELECT "timeZone" FROM "units" WHERE "id" = ?`, [period.unitId])
-        : [];
-      const tz = (unit as { timeZone: string }[])[0]?.timeZone ?? 'UTC';
-      if (first !== undefined && first < localDate(new Date(), tz)) {
-        await m.update(
-          SwapRequestEntity,
-          { id: row.id, status: row.status },
-          { status: 'expired', outcome: 'Expired: the shift has started before a decision was made' },
-        );
-      }
-    }
+  /**
+   * A pending request whose first day has passed (in the unit's time zone) expires now, in the
+   * caller's transaction; the refusal (410) is reported after the commit.
+   */
+  private async expireIfOverdue(
+    em: EntityManager,
+    row: SwapRequestEntity,
+    input: RosterInput,
+  ): Promise<Outcome | null> {
+    if (!isOverdue(row, this.today(input))) return null;
+    await this.setStatus(em, row, 'expired', EXPIRED_OUTCOME, null);
+    return { mails: [], refusal: { status: 410, message: expiredMessage(row) } };
   }
 
   private today(input: RosterInput): string {
@@ -802,6 +802,11 @@ export class SwapsService {
       };
     });
   }
+}
+
+/** The earliest day a request changes. */
+function firstDateOf(changes: StoredCellChange[]): string {
+  return changes.map((c) => c.date).sort()[0];
 }
 
 function shiftOf(input: RosterInput, id: string | null) {

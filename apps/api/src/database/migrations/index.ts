@@ -5,6 +5,7 @@ import { Publishing1764892800000 } from './1764892800000-publishing';
 import { Requests1764979200000 } from './1764979200000-requests';
 import { CalendarFeed1765065600000 } from './1765065600000-calendar-feed';
 import { Swaps1765152000000 } from './1765152000000-swaps';
+import { SwapFirstDate1765281600000 } from './1765281600000-swap-first-date';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   Requests1764979200000,
   CalendarFeed1765065600000,
   Swaps1765152000000,
+  SwapFirstDate1765281600000,
 ];
