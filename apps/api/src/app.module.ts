@@ -1,4 +1,4 @@
-import { type DynamicModule, Module } from '@nestjs/common';
+import { type DynamicModule, Logger, Module } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { ScheduleModule } from '@nestjs/schedule';
 import { TypeOrmModule } from '@nestjs/typeorm';
@@ -8,6 +8,7 @@ import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { PermissionsGuard } from './common/guards/permissions.guard';
 import { AppConfig } from './config/app-config';
 import { ConfigModule } from './config/config.module';
+import { narrowDataFileModes, prepareDataFiles } from './database/data-files';
 import { dataSourceOptions } from './database/data-source-options';
 import { serialiseTransactions } from './database/serialised-transactions';
 import { WriteGenerationModule } from './database/write-generation';
@@ -46,9 +47,14 @@ export class AppModule {
         TypeOrmModule.forRootAsync({
           useFactory: () => dataSourceOptions(config.databaseFile),
           dataSourceFactory: async (options) => {
+            // Data directory 0700, database file 0600 before SQLite opens it (and its -wal, -shm after).
+            const logger = new Logger('Database');
+            prepareDataFiles(config.databaseFile).forEach((note) => logger.warn(note));
             const dataSource = new DataSource(options!);
             serialiseTransactions(dataSource);
-            return dataSource.initialize();
+            await dataSource.initialize();
+            narrowDataFileModes(config.databaseFile).forEach((note) => logger.warn(note));
+            return dataSource;
           },
         }),
         WriteGenerationModule,

@@ -17,6 +17,9 @@ async function freePort(): Promise<number> {
 }
 
 async function main(): Promise<void> {
+  // Whatever the server creates (data directory, database files, generated JWT secret) is private
+  // to the account it runs as; the database layer sets the modes explicitly as well.
+  process.umask(0o077);
   let config: AppConfig;
   try {
     config = resolveJwtSecret(loadConfig(process.env));

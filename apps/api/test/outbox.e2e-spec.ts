@@ -1,4 +1,7 @@
 import { type OutboxMessageDto, type Page } from '@rotaplex/contracts';
+import { randomUUID } from 'node:crypto';
+import { loadConfig, resolveJwtSecret } from '../src/config/app-config';
+import { MailBodyCipher, outboxBodyContext } from '../src/mail/mail-body-cipher';
 import { MailCatcherService } from '../src/mail/mail-catcher.service';
 import { MailService } from '../src/mail/mail.service';
 import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
@@ -224,6 +227,33 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
     expect((await outboxRow('recent.sent@example.org')).status).toBe('sent');
     expect(await t.dataSource.getRepository(OutboxMessageEntity).countBy({ status: 'failed' })).toBe(failed);
     expect(await t.app.get(OutboxRetentionService).purgeDelivered()).toBe(0);
+  });
+
+  it('stores the body encrypted, clears it once sent, and fails at once a body it cannot decrypt', async () => {
+    await t.app.get(MailService).send(mail('sealed@example.org'));
+    const sent = await t.dataSource.getRepository(OutboxMessageEntity).findOneByOrFail({
+      to: 'sealed@example.org',
+    });
+    expect(sent).toMatchObject({ status: 'sent', body: null });
+
+    // Queued under another JWT_SECRET (the secret changed meanwhile): retrying cannot help.
+    const other = new MailBodyCipher(
+      resolveJwtSecret(loadConfig({ NODE_ENV: 'test', JWT_SECRET: 'another-secret-'.repeat(4) })),
+    );
+    const id = randomUUID();
+    await t.dataSource.getRepository(OutboxMessageEntity).insert({
+      id,
+      to: 'other.key@example.org',
+      subject: 'Sealed elsewhere',
+      body: other.seal(JSON.stringify({ text: 'x', html: 'x' }), outboxBodyContext(id)),
+      status: 'pending',
+      nextAttemptAt: new Date(),
+    });
+    await t.app.get(OutboxDeliveryService).deliverDue();
+    const row = await outboxRow('other.key@example.org');
+    expect(row).toMatchObject({ status: 'failed', attempts: 1, nextAttemptAt: null });
+    expect(row.lastError).toMatch(/cannot be decrypted \(JWT_SECRET changed/);
+    expect(await received('other.key@example.org')).toBe(0);
   });
 
   it('lists the outbox for admins only, newest first, paginated and filtered', async () => {

@@ -5,7 +5,7 @@ import { WEB_PATHS } from '@rotaplex/contracts';
 import { MailCatcherService } from '../src/mail/mail-catcher.service';
 import { MailService } from '../src/mail/mail.service';
 import { DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from '../src/demo/demo-data';
-import { linkToken } from './support/mailbox';
+import { caughtMails, linkToken } from './support/mailbox';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 describe('first start, demo data, mail and the web app', () => {
@@ -85,8 +85,8 @@ describe('first start, demo data, mail and the web app', () => {
       expect(await t.dataSource.query(`SELECT name FROM organisations`)).toEqual([
         { name: 'Fernbrook Care' },
       ]);
-      const [mail] = await t.dataSource.query(`SELECT "to", text FROM mail_messages`);
-      expect(JSON.parse(mail.to)).toEqual(['owner@example.org']);
+      const [mail] = await caughtMails(t);
+      expect(mail.to).toEqual(['owner@example.org']);
       const { token } = linkToken(mail.text, WEB_PATHS.acceptInvitation);
       await t
         .http()
@@ -124,16 +124,19 @@ describe('first start, demo data, mail and the web app', () => {
         text: 'Plain body\nline two',
         html: '<p>HTML <b>body</b></p>',
       });
-      const [row] = await catcherApp.dataSource.query(
-        `SELECT "from", "to", subject, text, html FROM mail_messages`,
-      );
+      const [row] = await caughtMails(catcherApp);
       expect(row).toMatchObject({
         subject: 'Cover for Saturday — night shift',
         html: '<p>HTML <b>body</b></p>',
       });
       expect(row.text.trim()).toBe('Plain body\nline two');
-      expect(JSON.parse(row.to)).toEqual(['someone@example.com']);
+      expect(row.to).toEqual(['someone@example.com']);
       expect(row.from).toMatch(/no-reply@rotaplex\.localhost/);
+      // Stored encrypted: the file holds neither body.
+      const [stored] = await catcherApp.dataSource.query(`SELECT text, html FROM mail_messages`);
+      expect(stored.text).toMatch(/^sealed:v1:/);
+      expect(stored.html).toMatch(/^sealed:v1:/);
+      expect(`${stored.text}${stored.html}`).not.toMatch(/Plain body|HTML/);
     });
 
     it('with SMTP_HOST set, starts no catcher and delivers to that server', async () => {

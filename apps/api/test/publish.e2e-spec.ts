@@ -12,6 +12,7 @@ import {
 } from '@rotaplex/contracts';
 import { MailCatcherService } from '../src/mail/mail-catcher.service';
 import { generate, outboxSettled, type SmallUnit, smallUnit, until } from './publishing-fixture';
+import { caughtMails } from './support/mailbox';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 jest.setTimeout(180_000);
@@ -187,10 +188,7 @@ describe('POST /api/roster-periods/:id/publish', () => {
 
     const byCode = new Map(shifts.map((s) => [s.id, s]));
     for (const person of people) {
-      const mails = (await t.dataSource.query(
-        `SELECT "to", subject, text, html FROM mail_messages WHERE "to" LIKE ?`,
-        [`%"${person.email}"%`],
-      )) as { to: string; subject: string; text: string; html: string }[];
+      const mails = (await caughtMails(t)).filter((m) => m.to.includes(person.email));
       expect(mails).toHaveLength(1);
       const [m] = mails;
       expect(m.subject).toContain('Harbour Desk');

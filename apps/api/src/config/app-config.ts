@@ -247,7 +247,7 @@ export function resolveJwtSecret(config: AppConfig): AppConfig {
   const file = join(config.dataDir, 'jwt-secret');
   let secret = existsSync(file) ? readFileSync(file, 'utf8').trim() : '';
   if (secret.length < JWT_SECRET_MIN_LENGTH) {
-    mkdirSync(config.dataDir, { recursive: true });
+    mkdirSync(config.dataDir, { recursive: true, mode: 0o700 });
     secret = randomBytes(48).toString('base64url');
     writeFileSync(file, `${secret}\n`, { mode: 0o600 });
   }

@@ -4,8 +4,8 @@ import { ENTITIES } from './entities';
 import { MIGRATIONS } from './migrations';
 
 /**
- * TypeORM on better-sqlite3: one file, WAL journal, foreign keys on, schema by migrations only
- * (run at start; `synchronize` is never used, the tests run the same migrations).
+ * TypeORM on better-sqlite3: one file, WAL journal, foreign keys and secure delete on, schema by
+ * migrations only (run at start; `synchronize` is never used, the tests run the same migrations).
  */
 export function dataSourceOptions(databaseFile: string): DataSourceOptions {
   return {
@@ -19,6 +19,8 @@ export function dataSourceOptions(databaseFile: string): DataSourceOptions {
     enableWAL: true,
     prepareDatabase: (db: Database.Database) => {
       db.pragma('foreign_keys = ON');
+      // Deleted and overwritten content is zeroed, not left in free space of the file.
+      db.pragma('secure_delete = ON');
       db.pragma('busy_timeout = 5000');
     },
   };

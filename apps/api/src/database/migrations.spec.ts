@@ -104,11 +104,40 @@ describe('database migrations', () => {
     }
   });
 
-  it('turns on WAL and foreign keys', async () => {
+  it('drops the bodies of sent e-mails and keeps those of unsent ones for sealing at start', async () => {
+    const file = join(dir, 'db.sqlite');
+    const before = MIGRATIONS.findIndex((m) => m.name === 'OutboxSealedBody1765368000000');
+    const old = new DataSource({ ...dataSourceOptions(file), migrations: MIGRATIONS.slice(0, before) });
+    await old.initialize();
+    for (const [id, status] of [
+      ['m1', 'sent'],
+      ['m2', 'pending'],
+    ]) {
+      await old.query(
+        `INSERT INTO outbox_messages (id, "to", subject, text, html, status) VALUES (?, 'a@example.org', 'S', 'T', '<p>H</p>', ?)`,
+        [id, status],
+      );
+    }
+    await old.destroy();
+    const ds = await open(file);
+    try {
+      const rows = (await ds.query(`SELECT id, body FROM outbox_messages ORDER BY id`)) as {
+        id: string;
+        body: string | null;
+      }[];
+      expect(rows[0]).toEqual({ id: 'm1', body: null });
+      expect(JSON.parse(rows[1].body!)).toEqual({ text: 'T', html: '<p>H</p>' });
+    } finally {
+      await ds.destroy();
+    }
+  });
+
+  it('turns on WAL, foreign keys and secure delete', async () => {
     const ds = await open(join(dir, 'db.sqlite'));
     try {
       expect(await ds.query('PRAGMA journal_mode')).toEqual([{ journal_mode: 'wal' }]);
       expect(await ds.query('PRAGMA foreign_keys')).toEqual([{ foreign_keys: 1 }]);
+      expect(await ds.query('PRAGMA secure_delete')).toEqual([{ secure_delete: 1 }]);
       await expect(
         ds.query(
           `INSERT INTO units (id, organisationId, name, timeZone) VALUES ('u1', 'missing', 'X', 'UTC')`,

@@ -1,5 +1,7 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
 import { WEB_PATHS } from '@rotaplex/contracts';
+import { chmodSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { DataSource } from 'typeorm';
 import { OneTimeTokensService } from '../auth/one-time-tokens.service';
 import { PasswordService } from '../auth/password.service';
@@ -15,8 +17,12 @@ import { seedDemoPlanning } from './demo-planning';
 /**
  * On the first start (no organisation yet): with SEED_DEMO, the invented demo organisation and its
  * people; otherwise an empty organisation (ORGANISATION_NAME) and, with ADMIN_EMAIL, an invitation
- * for the first admin (the link is also written to the log).
+ * for the first admin (the link is also written to DATA_DIR/first-admin-invitation.txt, mode 0600,
+ * never to the log).
  */
+/** File in DATA_DIR that holds the first admin's invitation link. */
+export const FIRST_ADMIN_LINK_FILE = 'first-admin-invitation.txt';
+
 @Injectable()
 export class FirstRunService implements OnApplicationBootstrap {
   private readonly logger = new Logger(FirstRunService.name);
@@ -91,7 +97,17 @@ export class FirstRunService implements OnApplicationBootstrap {
       return;
     }
     const link = `${this.config.publicUrl}${WEB_PATHS.acceptInvitation}?token=${encodeURIComponent(created.token)}`;
-    this.logger.log(`First admin ${created.admin.email} invited; set the password at ${link}`);
+    // The link is a working secret: never in the log. Besides the e-mail, it goes to a file in the
+    // data directory that only this account can read (beside the JWT secret), for a server whose
+    // mail does not arrive yet.
+    const file = join(this.config.dataDir, FIRST_ADMIN_LINK_FILE);
+    writeFileSync(file, `${link}\n`, { mode: 0o600 });
+    chmodSync(file, 0o600);
+    this.logger.log(
+      `First admin ${created.admin.email} invited: the invitation link was e-mailed` +
+        `${this.config.smtp ? '' : ' (no SMTP_HOST: to the local mail catcher)'} and written to ${file} ` +
+        '(readable only by this account; single use, delete the file once used)',
+    );
     try {
       await this.mail.send({
         to: created.admin.email,
@@ -105,7 +121,7 @@ export class FirstRunService implements OnApplicationBootstrap {
       });
     } catch (err) {
       this.logger.error(
-        `The first admin's invitation could not be e-mailed (${(err as Error).message}); use the link above.`,
+        `The first admin's invitation could not be e-mailed (${(err as Error).message}); the link is in ${file}.`,
       );
     }
   }

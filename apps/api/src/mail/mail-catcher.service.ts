@@ -1,10 +1,12 @@
 import { Injectable, Logger, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { simpleParser } from 'mailparser';
+import { randomUUID } from 'node:crypto';
 import { type AddressInfo } from 'node:net';
 import { SMTPServer } from 'smtp-server';
-import { Repository } from 'typeorm';
+import { Like, Not, Repository } from 'typeorm';
 import { AppConfig } from '../config/app-config';
+import { mailboxBodyContext, MailBodyCipher, SEALED_PREFIX, UnreadableBodyError } from './mail-body-cipher';
 import { MailMessageEntity } from './mail-message.entity';
 
 const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;
@@ -13,6 +15,7 @@ const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;
  * The local mail catcher: an SMTP server on the loopback interface that stores every message it
  * receives, so that someone trying Rotaplex locally can open invitation and approval links from
  * the mailbox page. Started only when no SMTP_HOST is configured; nothing leaves the machine.
+ * Bodies are stored encrypted (MailBodyCipher), like the outbox's: they carry working links.
  */
 @Injectable()
 export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
@@ -22,6 +25,7 @@ export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
 
   constructor(
     private readonly config: AppConfig,
+    private readonly cipher: MailBodyCipher,
     @InjectRepository(MailMessageEntity) private readonly messages: Repository<MailMessageEntity>,
   ) {}
 
@@ -36,8 +40,44 @@ export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
   }
 
   async onModuleInit(): Promise<void> {
+    await this.sealPlainBodies();
     if (!this.enabled) return;
     await this.start();
+  }
+
+  /** The text and HTML of a caught message (a placeholder when it was sealed under another key). */
+  readBodies(m: MailMessageEntity): { text: string; html: string | null } {
+    try {
+      return {
+        text: this.cipher.open(m.text, mailboxBodyContext(m.id, 'text')),
+        html: m.html === null ? null : this.cipher.open(m.html, mailboxBodyContext(m.id, 'html')),
+      };
+    } catch (err) {
+      if (!(err instanceof UnreadableBodyError)) throw err;
+      return { text: `(This message cannot be shown: ${err.message}.)`, html: null };
+    }
+  }
+
+  /** Encrypts bodies caught before bodies were sealed. */
+  private async sealPlainBodies(): Promise<void> {
+    const plain = await this.messages.find({
+      select: { id: true, text: true, html: true },
+      where: { text: Not(Like(`${SEALED_PREFIX}%`)) },
+    });
+    if (!plain.length) return;
+    await this.messages.manager.transaction(async (em) => {
+      for (const m of plain) {
+        await em.update(
+          MailMessageEntity,
+          { id: m.id },
+          {
+            text: this.cipher.seal(m.text, mailboxBodyContext(m.id, 'text')),
+            html: m.html === null ? null : this.cipher.seal(m.html, mailboxBodyContext(m.id, 'html')),
+          },
+        );
+      }
+    });
+    this.logger.log(`Encrypted the bodies of ${plain.length} caught message(s)`);
   }
 
   /** Whether the catcher is accepting mail now. */
@@ -65,17 +105,20 @@ export class MailCatcherService implements OnModuleInit, OnApplicationShutdown {
           .then((mail) => {
             const from =
               mail.from?.text ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : '') ?? '';
-            return this.messages.save(
-              this.messages.create({
-                messageId: mail.messageId ?? null,
-                from: from.slice(0, 500),
-                to,
-                subject: (mail.subject ?? '(no subject)').slice(0, 1000),
-                text: mail.text ?? '',
-                html: typeof mail.html === 'string' ? mail.html : null,
-                receivedAt: new Date(),
-              }),
-            );
+            const id = randomUUID();
+            return this.messages.insert({
+              id,
+              messageId: mail.messageId ?? null,
+              from: from.slice(0, 500),
+              to,
+              subject: (mail.subject ?? '(no subject)').slice(0, 1000),
+              text: this.cipher.seal(mail.text ?? '', mailboxBodyContext(id, 'text')),
+              html:
+                typeof mail.html === 'string'
+                  ? this.cipher.seal(mail.html, mailboxBodyContext(id, 'html'))
+                  : null,
+              receivedAt: new Date(),
+            });
           })
           // The SMTP reply is sent only after the message is stored, so a sender that got its
           // "250 OK" can read the message from the mailbox straight away.

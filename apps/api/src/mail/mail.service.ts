@@ -4,6 +4,7 @@ import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager } from 'typeorm';
 import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
 import { OutboxDeliveryService } from '../outbox/outbox-delivery.service';
+import { MailBodyCipher, outboxBodyContext } from './mail-body-cipher';
 
 export interface OutgoingMail {
   to: string;
@@ -26,12 +27,16 @@ const MAX_SUBJECT_LENGTH = 1000;
  * in that transaction (it exists only if the change commits) and delivered after the commit.
  * Without `em` the message is queued at once and a first delivery attempt is made before `send`
  * returns (a failure is not thrown: the message stays in the outbox and is retried).
+ *
+ * The body is stored encrypted (MailBodyCipher): e-mails carry working links, and a copy of the
+ * database file must not yield one. It is decrypted at send time and cleared once sent.
  */
 @Injectable()
 export class MailService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly delivery: OutboxDeliveryService,
+    private readonly cipher: MailBodyCipher,
   ) {}
 
   async send(mail: OutgoingMail, em?: EntityManager): Promise<void> {
@@ -44,8 +49,7 @@ export class MailService {
       id,
       to,
       subject: mail.subject.slice(0, MAX_SUBJECT_LENGTH),
-      text: mail.text,
-      html: mail.html,
+      body: this.cipher.seal(JSON.stringify({ text: mail.text, html: mail.html }), outboxBodyContext(id)),
       status: 'pending',
       attempts: 0,
       nextAttemptAt: new Date(),

@@ -18,6 +18,7 @@ export class MailboxQueryDto extends PageQueryDto {
   @IsIn(['asc', 'desc'])
   override order: 'asc' | 'desc' = 'desc';
 }
+import { MailCatcherService } from './mail-catcher.service';
 import { MailMessageEntity } from './mail-message.entity';
 import { MailMessageResponse, MailPageResponse } from './dto/mail-message-response.dto';
 
@@ -28,6 +29,7 @@ import { MailMessageResponse, MailPageResponse } from './dto/mail-message-respon
 export class MailboxController {
   constructor(
     @InjectRepository(MailMessageEntity) private readonly messages: Repository<MailMessageEntity>,
+    private readonly catcher: MailCatcherService,
   ) {}
 
   @Get()
@@ -57,7 +59,7 @@ export class MailboxController {
   async get(@Param('id', ParseUUIDPipe) id: string): Promise<MailMessageDto> {
     const m = await this.messages.findOneBy({ id });
     if (!m) throw new NotFoundException('Message not found');
-    return { ...toSummary(m), text: m.text, html: m.html };
+    return { ...toSummary(m), ...this.catcher.readBodies(m) };
   }
 }
 

@@ -1,8 +1,9 @@
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { createTransport, type Transporter } from 'nodemailer';
-import { Repository } from 'typeorm';
+import { Like, Not, Repository } from 'typeorm';
 import { AppConfig, type OutboxSettings } from '../config/app-config';
+import { MailBodyCipher, outboxBodyContext, SEALED_PREFIX } from '../mail/mail-body-cipher';
 import { MailCatcherService } from '../mail/mail-catcher.service';
 import { OutboxMessageEntity } from './outbox-message.entity';
 import { backoffDelayMs } from './outbox-settings';
@@ -39,12 +40,14 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
   constructor(
     private readonly config: AppConfig,
     private readonly catcher: MailCatcherService,
+    private readonly cipher: MailBodyCipher,
     @InjectRepository(OutboxMessageEntity) private readonly messages: Repository<OutboxMessageEntity>,
   ) {
     this.settings = config.outbox;
   }
 
   async onApplicationBootstrap(): Promise<void> {
+    await this.sealPlainBodies();
     // A message still "sending" was claimed by a process that stopped before recording the outcome:
     // whether the server got it is unknown, so it is sent again (at least once across a crash).
     const left = await this.messages.update(
@@ -64,6 +67,28 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
     await Promise.allSettled([...this.inFlight]);
     this.transporter?.close();
     this.transporter = null;
+  }
+
+  /**
+   * Encrypts bodies still stored in clear (messages queued before bodies were sealed, which the
+   * migration kept as JSON for unsent messages only).
+   */
+  private async sealPlainBodies(): Promise<void> {
+    const plain = await this.messages.find({
+      select: { id: true, body: true },
+      where: { body: Not(Like(`${SEALED_PREFIX}%`)) },
+    });
+    if (!plain.length) return;
+    await this.messages.manager.transaction(async (em) => {
+      for (const m of plain) {
+        await em.update(
+          OutboxMessageEntity,
+          { id: m.id },
+          { body: this.cipher.seal(m.body!, outboxBodyContext(m.id)) },
+        );
+      }
+    });
+    this.logger.log(`Encrypted the bodies of ${plain.length} message(s) queued before bodies were sealed`);
   }
 
   /** Asks the loop to look for due messages now (new message, or a retry by an admin). */
@@ -163,13 +188,23 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
       .execute();
     if (claim.affected !== 1) return false;
     const m = await this.messages.findOneByOrFail({ id });
+    let body: { text: string; html: string };
+    try {
+      body = JSON.parse(this.cipher.open(m.body ?? '', outboxBodyContext(m.id))) as typeof body;
+    } catch (err) {
+      // Retrying cannot help (another key, or changed bytes): give up at once, say why.
+      const message = (err as Error).message;
+      await this.messages.update({ id }, { status: 'failed', nextAttemptAt: null, lastError: message });
+      this.logger.error(`"${m.subject}" to ${m.to} not sent: ${message}`);
+      return false;
+    }
     try {
       await this.transport().sendMail({
         from: this.config.mailFrom,
         to: m.to,
         subject: m.subject,
-        text: m.text,
-        html: m.html,
+        text: body.text,
+        html: body.html,
         // Stable per outbox row, so a receiver can spot a copy sent again after a crash.
         messageId: `<${m.id}@outbox.rotaplex>`,
       });
@@ -190,7 +225,11 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
       );
       return false;
     }
-    await this.messages.update({ id }, { status: 'sent', sentAt: new Date(), nextAttemptAt: null });
+    // The body (with its links) is not kept once sent; the row stays listed until OUTBOX_RETENTION.
+    await this.messages.update(
+      { id },
+      { status: 'sent', sentAt: new Date(), nextAttemptAt: null, body: null },
+    );
     this.logger.log(`Sent "${m.subject}" to ${m.to}`);
     return true;
   }

@@ -3,7 +3,8 @@ import { Check, Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn 
 
 /**
  * One e-mail the product sends. Written by MailService.send (in the caller's transaction when it
- * gives one), delivered by the outbox loop with retries and exponential backoff.
+ * gives one), delivered by the outbox loop with retries and exponential backoff. The body is
+ * stored encrypted and cleared after delivery; a sent row is deleted after OUTBOX_RETENTION.
  */
 @Entity('outbox_messages')
 @Check('CHK_outbox_messages_status', `"status" IN (${OUTBOX_STATUSES.map((s) => `'${s}'`).join(', ')})`)
@@ -18,11 +19,12 @@ export class OutboxMessageEntity {
   @Column({ type: 'varchar', length: 1000 })
   subject!: string;
 
-  @Column({ type: 'text' })
-  text!: string;
-
-  @Column({ type: 'text' })
-  html!: string;
+  /**
+   * The text and HTML bodies as JSON, sealed by MailBodyCipher (AES-256-GCM, bound to the row id):
+   * they carry working links. Null once the message was sent.
+   */
+  @Column({ type: 'text', nullable: true })
+  body!: string | null;
 
   @Column({ type: 'varchar', length: 16, default: 'pending' })
   status!: OutboxStatus;

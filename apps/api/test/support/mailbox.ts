@@ -1,4 +1,6 @@
 import { type MailMessageDto, type MailMessageSummaryDto, type Page } from '@rotaplex/contracts';
+import { MailCatcherService } from '../../src/mail/mail-catcher.service';
+import { MailMessageEntity } from '../../src/mail/mail-message.entity';
 import { api, bearer, type TestApp } from './test-app';
 
 /** Reads the newest message to `to` through the admin mailbox API (the catcher received it over SMTP). */
@@ -62,4 +64,22 @@ export async function nextMailTo(
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error(`no mail to ${to} matching ${subject}`);
+}
+
+/**
+ * Every message the local catcher kept, oldest first, with its bodies decrypted by the catcher
+ * (they are stored sealed, see MailBodyCipher).
+ */
+export async function caughtMails(
+  t: Pick<TestApp, 'app' | 'dataSource'>,
+): Promise<{ id: string; from: string; to: string[]; subject: string; text: string; html: string | null }[]> {
+  const rows = await t.dataSource.getRepository(MailMessageEntity).find({ order: { receivedAt: 'ASC' } });
+  const catcher = t.app.get(MailCatcherService);
+  return rows.map((m) => ({
+    id: m.id,
+    from: m.from,
+    to: m.to,
+    subject: m.subject,
+    ...catcher.readBodies(m),
+  }));
 }

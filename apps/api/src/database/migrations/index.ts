@@ -6,6 +6,7 @@ import { Requests1764979200000 } from './1764979200000-requests';
 import { CalendarFeed1765065600000 } from './1765065600000-calendar-feed';
 import { Swaps1765152000000 } from './1765152000000-swaps';
 import { SwapFirstDate1765281600000 } from './1765281600000-swap-first-date';
+import { OutboxSealedBody1765368000000 } from './1765368000000-outbox-sealed-body';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
 export const MIGRATIONS = [
@@ -17,4 +18,5 @@ export const MIGRATIONS = [
   CalendarFeed1765065600000,
   Swaps1765152000000,
   SwapFirstDate1765281600000,
+  OutboxSealedBody1765368000000,
 ];
