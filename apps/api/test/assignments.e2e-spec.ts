@@ -1,5 +1,8 @@
 import {
   type AssignmentGridDto,
+  type AuditEntryDto,
+  type Page,
+  PUBLISHING_ROUTES as PUB,
   REST_RULE_WARNING,
   type RosterPeriodDto,
   type ShiftTypeDto,
@@ -58,31 +61,100 @@ describe('/api/roster-periods/:id/assignments', () => {
     expect(g.check.terms.coverUnderMin).toBeGreaterThan(0);
   });
 
-  it('answers a manual edit with the checker violations, a rest-rule one carrying the fatigue warning', async () => {
+  const audit = async () =>
+    (
+      await t
+        .http()
+        .get(api(PUB.audit(period.id)))
+        .set(bearer(manager))
+        .expect(200)
+    ).body as Page<AuditEntryDto>;
+
+  it('keeps an edit that breaks the rest rule only with a reason, which lands in the audit trail', async () => {
     const g = await grid();
     const person = g.rows[0].staffMemberId;
     const [d1, d2] = [g.dates[2], g.dates[3]];
     expect((await edit({ staffMemberId: person, date: d1, shiftTypeId: shifts.L.id })).status).toBe(200);
-    const res = await edit({ staffMemberId: person, date: d2, shiftTypeId: shifts.E.id });
+    // Late 14:30-22:30 then Early 07:00 leaves 8 h 30 min of rest, under the 11 consecutive hours of
+    // daily rest of the demo contracts (EU Working Time Directive 2003/88/EC, Art. 3).
+    const refused = await edit({ staffMemberId: person, date: d2, shiftTypeId: shifts.E.id });
+    expect(refused.status).toBe(422);
+    expect(refused.body.message.join(' ')).toMatch(/only 8 h 30 min of rest between L on .* and E on/);
+    expect(refused.body.message.join(' ')).toMatch(/give the reason \(overrideReason\)/);
+    expect(cell(await grid(), person, d2)).toEqual({ shiftTypeId: null, pinned: false });
+    for (const overrideReason of ['   ', 'x'.repeat(501)]) {
+      const bad = await edit({ staffMemberId: person, date: d2, shiftTypeId: shifts.E.id, overrideReason });
+      expect(bad.status).toBe(overrideReason.trim() ? 400 : 422);
+      expect(JSON.stringify(bad.body.message)).toMatch(/overrideReason/);
+    }
+    expect((await audit()).total).toBe(0);
+
+    const reason = 'Agreed with the nurse: swaps her Thursday for a long weekend';
+    const res = await edit({
+      staffMemberId: person,
+      date: d2,
+      shiftTypeId: shifts.E.id,
+      overrideReason: reason,
+    });
     expect(res.status).toBe(200);
     const after = res.body as AssignmentGridDto;
     expect(cell(after, person, d2)).toEqual({ shiftTypeId: shifts.E.id, pinned: false });
-    // Late 14:30-22:30 then Early 07:00 leaves 8 h 30 min of rest, under the 11 consecutive hours of
-    // daily rest of the demo contracts (EU Working Time Directive 2003/88/EC, Art. 3).
     const rest = after.check.violations.filter((v) => v.rule === 'minRest' && v.staffMemberId === person);
     expect(rest).toHaveLength(1);
     expect(rest[0].dates).toEqual([d1, d2]);
     expect(rest[0].warning).toBe(REST_RULE_WARNING);
+    expect(rest[0].warning).toMatch(/Local law and collective agreements/);
+    expect(rest[0].message).toMatch(/only 8 h 30 min of rest between L on .* and E on .* at least 11 h/);
     expect(rest[0].message).toContain(d1);
     expect(rest[0].message).not.toContain(shifts.L.id); // shift codes, not ids, in the words
+    const trail = await audit();
+    expect(trail.total).toBe(1);
+    expect(trail.items[0]).toMatchObject({
+      kind: 'manual-edit',
+      before: { staffMemberId: person, date: d2, shiftTypeId: null },
+      after: { staffMemberId: person, date: d2, shiftTypeId: shifts.E.id, rules: ['minRest'], reason },
+    });
+    expect(trail.items[0].summary).toContain(`Reason: ${reason}`);
 
-    // Undo: a day off again clears the finding.
+    // Undo: a day off again clears the finding, and needs no reason.
     const undone = (await edit({ staffMemberId: person, date: d2, shiftTypeId: null }).expect(200))
       .body as AssignmentGridDto;
     expect(undone.check.violations.filter((v) => v.rule === 'minRest' && v.staffMemberId === person)).toEqual(
       [],
     );
     await edit({ staffMemberId: person, date: d1, shiftTypeId: null }).expect(200);
+    expect((await audit()).total).toBe(1);
+  });
+
+  it('refuses outright a shift that overlaps the one before or after, whatever the reason', async () => {
+    const g = await grid();
+    const person = g.rows[2].staffMemberId;
+    const [d1, d2] = [g.dates[1], g.dates[2]];
+    await edit({ staffMemberId: person, date: d1, shiftTypeId: shifts.N.id }).expect(200);
+    // The demo Night runs 22:00-07:30 and the Early starts at 07:00: they overlap by half an hour.
+    for (const overrideReason of [undefined, 'Short of staff']) {
+      const res = await edit({ staffMemberId: person, date: d2, shiftTypeId: shifts.E.id, overrideReason });
+      expect(res.status).toBe(422);
+      const words = res.body.message.join(' ');
+      expect(words).toMatch(/overlap by 30 min/);
+      expect(words).not.toMatch(/-0 h/);
+    }
+    // The same pair entered the other way round (the Early first, then the Night before it).
+    await edit({ staffMemberId: person, date: d1, shiftTypeId: null }).expect(200);
+    await edit({ staffMemberId: person, date: d2, shiftTypeId: shifts.E.id }).expect(200);
+    const reverse = await edit({
+      staffMemberId: person,
+      date: d1,
+      shiftTypeId: shifts.N.id,
+      overrideReason: 'x',
+    });
+    expect(reverse.status).toBe(422);
+    expect(reverse.body.message.join(' ')).toMatch(/overlap by 30 min/);
+    const now = await grid();
+    expect(cell(now, person, d1)).toEqual({ shiftTypeId: null, pinned: false });
+    expect(cell(now, person, d2)).toEqual({ shiftTypeId: shifts.E.id, pinned: false });
+    await edit({ staffMemberId: person, date: d2, shiftTypeId: null }).expect(200);
+    expect((await audit()).items.filter((e) => e.summary.includes('overlap'))).toEqual([]);
   });
 
   it('refuses bad cells naming the field, and callers without access', async () => {

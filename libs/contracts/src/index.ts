@@ -9,3 +9,4 @@ export * from './lib/reports';
 export * from './lib/requests';
 export * from './lib/publishing';
 export * from './lib/my-roster';
+export * from './lib/guard-rails';

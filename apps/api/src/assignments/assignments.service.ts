@@ -1,12 +1,20 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  Injectable,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import {
   type AssignmentGridDto,
+  hoursAndMinutes,
+  OVERRIDE_REASON_RULES,
   REST_RULE_WARNING,
   type RosterCheckDto,
   type RosterViolationDto,
 } from '@rotaplex/contracts';
-import { checkRoster, type Roster, type Violation } from '@rotaplex/roster-model';
+import { checkRoster, restMinutes, type Roster, type Violation } from '@rotaplex/roster-model';
 import { DataSource, type EntityManager } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
@@ -21,6 +29,7 @@ export class AssignmentsService {
     private readonly dataSource: DataSource,
     private readonly periods: RosterPeriodsService,
     private readonly input: RosterInputService,
+    private readonly audit: AuditService,
     writes: WriteGeneration,
   ) {
     this.grids = new GenerationCache(writes);
@@ -38,7 +47,13 @@ export class AssignmentsService {
     return this.grids.get(periodId, () => this.gridOf(periodId));
   }
 
-  /** Saves one cell (a shift or a day off) of a draft and answers with the checker's findings for the edited roster. */
+  /**
+   * Saves one cell (a shift or a day off) of a draft and answers with the checker's findings for the
+   * edited roster. A shift that overlaps the person's shift of the day before or after is refused
+   * (422) whatever the reason. An edit that breaks a rule of OVERRIDE_REASON_RULES for the person,
+   * which the roster did not break before, needs `overrideReason` (422 without it); the edit, the
+   * findings and the reason then go into the audit trail in the same transaction.
+   */
   async editCell(user: AuthUser, periodId: string, body: AssignmentCellDto): Promise<AssignmentGridDto> {
     await this.periods.get(user, periodId);
     await this.dataSource.transaction(async (em) => {
@@ -48,27 +63,61 @@ export class AssignmentsService {
       if (body.shiftTypeId !== null && !input.shiftTypes.some((s) => s.id === body.shiftTypeId)) {
         throw new BadRequestException(["shiftTypeId must be a shift type of the period's unit, or null"]);
       }
-      const existing = await em.findOneBy(AssignmentEntity, {
-        rosterPeriodId: periodId,
-        staffMemberId: body.staffMemberId,
-        date: body.date,
-      });
+      const all = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+      const existing =
+        all.find((r) => r.staffMemberId === body.staffMemberId && r.date === body.date) ?? null;
+      const before = rosterOf(input, all);
+      const day = input.dates.indexOf(body.date);
+      const after: Roster = { ...before, [body.staffMemberId]: [...before[body.staffMemberId]] };
+      after[body.staffMemberId][day] = body.shiftTypeId;
+      if (body.shiftTypeId !== null) assertNoOverlap(input, after, body.staffMemberId, day);
+      const broken = newOverrideFindings(input, before, after, body.staffMemberId);
+      const reason = body.overrideReason?.trim() ?? '';
+      if (broken.length > 0 && reason === '') {
+        throw new UnprocessableEntityException([
+          ...broken.map((v) => v.message),
+          'This edit breaks a rule of the contract. To keep it, give the reason (overrideReason); it is kept in the audit trail.',
+        ]);
+      }
       // A manual edit keeps the cell's pin; an unpinned day off is stored as no row.
       const pinned = existing?.pinned ?? false;
       if (body.shiftTypeId === null && !pinned) {
         if (existing) await em.remove(existing);
-        return;
+      } else {
+        const row =
+          existing ??
+          em.create(AssignmentEntity, {
+            rosterPeriodId: periodId,
+            staffMemberId: body.staffMemberId,
+            date: body.date,
+          });
+        row.shiftTypeId = body.shiftTypeId;
+        row.pinned = pinned;
+        await em.save(row);
       }
-      const row =
-        existing ??
-        em.create(AssignmentEntity, {
+      if (broken.length > 0) {
+        const name = input.staff.find((s) => s.id === body.staffMemberId)?.name ?? body.staffMemberId;
+        await this.audit.record(em, {
           rosterPeriodId: periodId,
-          staffMemberId: body.staffMemberId,
-          date: body.date,
+          actorUserId: user.id,
+          kind: 'manual-edit',
+          summary:
+            `Kept an edit for ${name} on ${body.date} that breaks ${broken.length} rule(s): ` +
+            `${broken.map((v) => v.message).join('; ')}. Reason: ${reason}`,
+          before: {
+            staffMemberId: body.staffMemberId,
+            date: body.date,
+            shiftTypeId: existing?.shiftTypeId ?? null,
+          },
+          after: {
+            staffMemberId: body.staffMemberId,
+            date: body.date,
+            shiftTypeId: body.shiftTypeId,
+            rules: broken.map((v) => v.rule),
+            reason,
+          },
         });
-      row.shiftTypeId = body.shiftTypeId;
-      row.pinned = pinned;
-      await em.save(row);
+      }
     });
     return this.gridOf(periodId);
   }
@@ -156,13 +205,60 @@ export function rosterOf(
 export function checkDto(input: RosterInput, roster: Roster): RosterCheckDto {
   const result = checkRoster(input.problem, roster);
   return {
-    violations: result.violations.map((v) => violationDto(input, v)),
+    violations: result.violations.map((v) => violationDto(input, v, roster)),
     terms: { ...result.terms },
     objective: result.objective,
   };
 }
 
-function violationDto(input: RosterInput, v: Violation): RosterViolationDto {
+/**
+ * Findings of OVERRIDE_REASON_RULES for one person that the edited roster has and the roster before
+ * did not (same rule and days), in the period's words.
+ */
+function newOverrideFindings(
+  input: RosterInput,
+  before: Roster,
+  after: Roster,
+  personId: string,
+): RosterViolationDto[] {
+  const rules: readonly string[] = OVERRIDE_REASON_RULES;
+  const key = (v: Violation) => `${v.rule}|${v.days.join(',')}`;
+  const mine = (roster: Roster) =>
+    checkRoster(input.problem, roster).violations.filter(
+      (v) => v.personId === personId && rules.includes(v.rule),
+    );
+  const had = new Set(mine(before).map(key));
+  return mine(after)
+    .filter((v) => !had.has(key(v)))
+    .map((v) => violationDto(input, v, after));
+}
+
+/**
+ * Refuses (422) a shift that overlaps the person's shift on a nearby day: the rest between them is
+ * negative, which no rule or reason can allow. Measured in real time in the unit's zone.
+ */
+function assertNoOverlap(input: RosterInput, roster: Roster, personId: string, day: number): void {
+  const days = roster[personId];
+  const byId = new Map(input.shiftTypes.map((s) => [s.id, s]));
+  const name = input.staff.find((s) => s.id === personId)?.name ?? personId;
+  for (let d = Math.max(0, day - 2); d <= Math.min(days.length - 1, day + 2); d++) {
+    if (d === day) continue;
+    const [first, second] = d < day ? [d, day] : [day, d];
+    const a = byId.get(days[first] ?? '');
+    const b = byId.get(days[second] ?? '');
+    if (!a || !b) continue;
+    const rest = restMinutes(input.problem, first, a, second, b);
+    if (rest >= 0) continue;
+    throw new UnprocessableEntityException([
+      `${name}: ${a.name} (${a.code}) on ${input.dates[first]} ends at ${a.end}, after ${b.name} (${b.code}) ` +
+        `on ${input.dates[second]} starts at ${b.start}: the shifts overlap by ${hoursAndMinutes(-rest)}. ` +
+        'Nobody can work two shifts at once, so this edit is not saved; change or remove the other shift first.',
+    ]);
+  }
+}
+
+function violationDto(input: RosterInput, v: Violation, roster: Roster): RosterViolationDto {
+  if (v.rule === 'minRest') return restViolationDto(input, v, roster);
   let message = v.message.replace(/\bday (\d+)\b/g, (all, d: string) => input.dates[Number(d)] ?? all);
   for (const s of input.shiftTypes) message = message.split(s.id).join(s.code);
   return {
@@ -170,8 +266,32 @@ function violationDto(input: RosterInput, v: Violation): RosterViolationDto {
     staffMemberId: v.personId,
     dates: v.days.map((d) => input.dates[d]).filter((d): d is string => d !== undefined),
     message,
-    warning: v.rule === 'minRest' ? REST_RULE_WARNING : null,
+    warning: null,
   };
+}
+
+/**
+ * A rest finding in the API's own words: the rest in hours and minutes, and an overlap (negative
+ * rest) named as an overlap, never as "-0 h 30 min" of rest.
+ */
+function restViolationDto(input: RosterInput, v: Violation, roster: Roster): RosterViolationDto {
+  const [d1, d2] = v.days;
+  const byId = new Map(input.shiftTypes.map((s) => [s.id, s]));
+  const a = byId.get(roster[v.personId]?.[d1] ?? '');
+  const b = byId.get(roster[v.personId]?.[d2] ?? '');
+  const name = input.staff.find((s) => s.id === v.personId)?.name ?? v.personId;
+  const limit = input.problem.people.find((p) => p.id === v.personId)?.contract.minRestMinutes;
+  const dates = [input.dates[d1], input.dates[d2]].filter((d): d is string => d !== undefined);
+  let message = v.message;
+  if (a && b) {
+    const rest = restMinutes(input.problem, d1, a, d2, b);
+    const between = `${a.code} on ${input.dates[d1]} and ${b.code} on ${input.dates[d2]}`;
+    const least = limit ? ` (the contract asks for at least ${hoursAndMinutes(limit)})` : '';
+    if (rest < 0) message = `${name}: ${between} overlap by ${hoursAndMinutes(-rest)}${least}`;
+    else if (rest === 0) message = `${name}: no rest at all between ${between}${least}`;
+    else message = `${name}: only ${hoursAndMinutes(rest)} of rest between ${between}${least}`;
+  }
+  return { rule: v.rule, staffMemberId: v.personId, dates, message, warning: REST_RULE_WARNING };
 }
 
 function assertDraft(input: RosterInput): void {

@@ -6,7 +6,13 @@ import {
   NotFoundException,
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { CONTRACT_RULE_FIELDS, type ContractDto, type ContractRules } from '@rotaplex/contracts';
+import {
+  CONTRACT_RULE_FIELDS,
+  contractCautions,
+  type ContractDto,
+  type ContractRules,
+  GUARD_RAIL_DEFERRAL,
+} from '@rotaplex/contracts';
 import { Brackets, DataSource, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
@@ -159,5 +165,13 @@ function assertConsistent(r: ContractRules): void {
 }
 
 export function toContractDto(c: ContractEntity): ContractDto {
-  return { id: c.id, unitId: c.unitId, name: c.name, ...rulesOf(c) };
+  const rules = rulesOf(c);
+  const cautions = contractCautions(rules);
+  return {
+    id: c.id,
+    unitId: c.unitId,
+    name: c.name,
+    ...rules,
+    cautions: cautions.length ? [...cautions, GUARD_RAIL_DEFERRAL] : [],
+  };
 }

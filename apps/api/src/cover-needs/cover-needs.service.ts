@@ -6,9 +6,12 @@ import {
   type CoverOverrideDto,
   type CsvImportResult,
   type CsvRowError,
+  GUARD_RAIL_DEFERRAL,
+  type CoverMinimumRow,
+  loweredToZeroCautions,
   WEEKDAY_NAMES,
 } from '@rotaplex/contracts';
-import { DataSource, type EntityManager, Repository } from 'typeorm';
+import { DataSource, type EntityManager, IsNull, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { SkillEntity } from '../skills/skill.entity';
@@ -71,8 +74,16 @@ export class CoverNeedsService {
       seen.add(key);
     });
     if (errors.length) throw new BadRequestException(errors);
+    const before = await this.pattern.findBy({ unitId });
     await this.dataSource.transaction((em) => this.writePattern(em, unitId, rows));
-    return this.get(user, unitId);
+    const cautions = withDeferral(
+      loweredToZeroCautions(
+        before.map((r) => ({ ...r, day: r.weekday })),
+        rows.map((r) => ({ ...r, day: r.weekday })),
+        needLabel(refs, (day) => `on ${WEEKDAY_NAMES[Number(day)]}`),
+      ),
+    );
+    return { ...(await this.get(user, unitId)), cautions };
   }
 
   /** Adds an override, replacing one with the same date, shift type and skill. */
@@ -85,11 +96,24 @@ export class CoverNeedsService {
     if (body.skillId !== null && !refs.skillIds.has(body.skillId)) errors.push('skillId must be a skill');
     if (body.target < body.min) errors.push('target must be at least min');
     if (errors.length) throw new BadRequestException(errors);
+    // What the date asked for before: its own override, or else the weekly pattern's row.
+    const weekday = new Date(`${body.date}T00:00:00Z`).getUTCDay();
+    const same = { unitId, shiftTypeId: body.shiftTypeId, skillId: body.skillId ?? IsNull() };
+    const earlier =
+      (await this.overrides.findOneBy({ ...same, date: body.date })) ??
+      (await this.pattern.findOneBy({ ...same, weekday }));
     const saved = await this.dataSource.transaction(async (em) => {
       const [row] = await this.writeOverrides(em, unitId, [body]);
       return row;
     });
-    return toOverrideDto(saved);
+    const cautions = withDeferral(
+      loweredToZeroCautions(
+        earlier ? [{ ...body, min: earlier.min, day: body.date }] : [],
+        [{ ...body, day: body.date }],
+        needLabel(refs, (day) => `on ${String(day)}`),
+      ),
+    );
+    return { ...toOverrideDto(saved), cautions };
   }
 
   async removeOverride(user: AuthUser, unitId: string, id: string): Promise<void> {
@@ -233,6 +257,25 @@ export class CoverNeedsService {
       skillByCode: new Map(skills.map((s) => [s.code, s])),
     };
   }
+}
+
+/** "Night (N) on Sat, skill RN": a cover need in a manager's words. */
+function needLabel(
+  refs: { shiftByCode: Map<string, ShiftTypeEntity>; skillByCode: Map<string, SkillEntity> },
+  when: (day: number | string) => string,
+): (row: CoverMinimumRow) => string {
+  const shifts = new Map([...refs.shiftByCode.values()].map((s) => [s.id, s]));
+  const skills = new Map([...refs.skillByCode.values()].map((s) => [s.id, s]));
+  return (row) => {
+    const st = shifts.get(row.shiftTypeId);
+    const skill = row.skillId === null ? '' : `, skill ${skills.get(row.skillId)?.code ?? row.skillId}`;
+    return `${st ? `${st.name} (${st.code})` : 'A shift'} ${when(row.day)}${skill}`;
+  };
+}
+
+/** The cautions, closed by the deferral to local law and agreements when there are any. */
+function withDeferral(cautions: string[]): string[] {
+  return cautions.length ? [...cautions, GUARD_RAIL_DEFERRAL] : [];
 }
 
 /** A YYYY-MM-DD string that names a real calendar date (not 2026-02-30). */

@@ -1,6 +1,11 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { type ShiftTypeDto, shiftLengthMinutes } from '@rotaplex/contracts';
+import {
+  GUARD_RAIL_DEFERRAL,
+  type ShiftTypeDto,
+  shiftLengthMinutes,
+  shiftTypeCautions,
+} from '@rotaplex/contracts';
 import { DataSource, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { UnitsService } from '../units/units.service';
@@ -101,5 +106,11 @@ export function toShiftTypeDto(s: ShiftTypeEntity): ShiftTypeDto {
     paidMinutes: s.paidMinutes,
     colour: s.colour,
     night: s.night,
+    cautions: cautionsOf(s),
   };
+}
+
+function cautionsOf(s: Pick<ShiftTypeEntity, 'start' | 'end'>): string[] {
+  const cautions = shiftTypeCautions(s);
+  return cautions.length ? [...cautions, GUARD_RAIL_DEFERRAL] : [];
 }

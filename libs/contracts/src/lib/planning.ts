@@ -48,6 +48,8 @@ export interface ShiftTypeDto {
   colour: ShiftColour;
   /** Night shift or not; null: derived from the times (see {@link isNightByTimes}). */
   night: boolean | null;
+  /** Guard-rail cautions (a shift over 12 hours; see shiftTypeCautions), in every answer of the API. */
+  cautions?: string[];
 }
 
 export interface CreateShiftTypeRequest {
@@ -140,6 +142,8 @@ export interface ContractDto extends ContractRules {
   /** The unit the contract belongs to, or null for the whole organisation. */
   unitId: string | null;
   name: string;
+  /** Limits beyond the working-time presets (see contractCautions), in every answer of the API. */
+  cautions?: string[];
 }
 
 export type CreateContractRequest = { unitId?: string | null; name: string } & Partial<ContractRules>;
@@ -347,6 +351,8 @@ export interface CoverPatternRowDto {
 /** A need for one date that replaces the pattern's row with the same shift type and skill. */
 export interface CoverOverrideDto {
   id: string;
+  /** After a write: the caution when this override sets a minimum of 0 where the pattern had one. */
+  cautions?: string[];
   /** "YYYY-MM-DD". */
   date: string;
   shiftTypeId: string;
@@ -359,6 +365,8 @@ export interface CoverNeedsDto {
   unitId: string;
   pattern: CoverPatternRowDto[];
   overrides: CoverOverrideDto[];
+  /** After a write: minimums that were above 0 and are now 0 (see loweredToZeroCautions). */
+  cautions?: string[];
 }
 
 export interface ReplaceCoverPatternRequest {

@@ -123,8 +123,25 @@ export interface RosterViolationDto {
 
 /** Shown beside any rest-rule violation (PRODUCT.md: overriding a rest rule carries a fatigue risk). */
 export const REST_RULE_WARNING =
-  'Fatigue risk: this leaves less rest than the contract requires. Overriding a rest rule carries a fatigue ' +
-  'risk; check it with the person and local rules before you keep it.';
+  'Fatigue risk: this leaves less rest than the contract requires, and tired staff make more mistakes. ' +
+  'Local law and collective agreements decide what rest is allowed; check it with the person before you keep it.';
+
+/**
+ * Hard rules whose breach by a manual edit needs a written reason (kept in the audit trail): the
+ * working-time limits that protect rest and health, and work on a day of leave or unavailability.
+ * The other rules (minimum hours and runs, shifts per type, weekends, which a short period scales
+ * down to 0) are reported as findings on the board and before publishing, but need no reason.
+ */
+export const OVERRIDE_REASON_RULES = [
+  'minRest',
+  'forbiddenSuccession',
+  'maxConsecutiveWorkDays',
+  'maxConsecutiveNights',
+  'maxPaidMinutes',
+  'absence',
+] as const;
+
+export const OVERRIDE_REASON_MAX_LENGTH = 500;
 
 export interface AssignmentCellDto {
   /** Shift type id, or null for a day off. */
@@ -159,6 +176,11 @@ export interface AssignmentCellRequest {
   date: string;
   /** Shift type id, or null for a day off. */
   shiftTypeId: string | null;
+  /**
+   * Why the edit may break a rule of OVERRIDE_REASON_RULES; without it such an edit is refused (422).
+   * Kept in the audit trail. An edit whose shifts overlap is refused whatever the reason.
+   */
+  overrideReason?: string;
 }
 
 export type PinCellRequest = Pick<AssignmentCellRequest, 'staffMemberId' | 'date'>;

@@ -7,7 +7,8 @@ import {
   type RosterCheckDto,
   type RosterViolationDto,
 } from '@rotaplex/contracts';
-import { IsUUID, Matches, ValidateIf } from 'class-validator';
+import { OVERRIDE_REASON_MAX_LENGTH } from '@rotaplex/contracts';
+import { IsOptional, IsString, IsUUID, Matches, MaxLength, ValidateIf } from 'class-validator';
 
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
 
@@ -26,6 +27,18 @@ export class AssignmentCellDto extends PinCellDto implements AssignmentCellReque
   @ValidateIf((_o, v) => v !== null)
   @IsUUID('all', { message: 'shiftTypeId must be a shift type id or null' })
   shiftTypeId!: string | null;
+
+  @ApiProperty({
+    required: false,
+    maxLength: OVERRIDE_REASON_MAX_LENGTH,
+    description: 'Why an edit that breaks a rest or working-time rule is kept; kept in the audit trail',
+  })
+  @IsOptional()
+  @IsString({ message: 'overrideReason must be text' })
+  @MaxLength(OVERRIDE_REASON_MAX_LENGTH, {
+    message: `overrideReason must be at most ${OVERRIDE_REASON_MAX_LENGTH} characters`,
+  })
+  overrideReason?: string;
 }
 
 class ViolationResponse implements RosterViolationDto {

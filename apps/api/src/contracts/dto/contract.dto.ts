@@ -138,6 +138,11 @@ export class ContractResponse extends ContractRulesResponse implements ContractD
   @ApiProperty({ format: 'uuid' }) id!: string;
   @ApiProperty({ format: 'uuid', nullable: true, type: String }) unitId!: string | null;
   @ApiProperty() name!: string;
+  @ApiProperty({
+    type: [String],
+    description: 'Limits beyond the working-time presets, each naming its risk (empty: within them)',
+  })
+  cautions!: string[];
 }
 
 export class ContractPresetResponse implements ContractPresetDto {

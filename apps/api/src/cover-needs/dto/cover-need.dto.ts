@@ -92,12 +92,24 @@ export class CoverOverrideResponse implements CoverOverrideDto {
   @ApiProperty({ format: 'uuid', nullable: true, type: String }) skillId!: string | null;
   @ApiProperty() min!: number;
   @ApiProperty() target!: number;
+  @ApiProperty({
+    type: [String],
+    required: false,
+    description: 'After a write: the caution when a minimum above 0 became 0',
+  })
+  cautions?: string[];
 }
 
 export class CoverNeedsResponse implements CoverNeedsDto {
   @ApiProperty({ format: 'uuid' }) unitId!: string;
   @ApiProperty({ type: [CoverPatternRowResponse] }) pattern!: CoverPatternRowResponse[];
   @ApiProperty({ type: [CoverOverrideResponse] }) overrides!: CoverOverrideResponse[];
+  @ApiProperty({
+    type: [String],
+    required: false,
+    description: 'After a write: minimums above 0 that became 0, each with its caution',
+  })
+  cautions?: string[];
 }
 
 export { DATE as DATE_PATTERN };

@@ -84,4 +84,6 @@ export class ShiftTypeResponse implements ShiftTypeDto {
   @ApiProperty() paidMinutes!: number;
   @ApiProperty({ enum: SHIFT_COLOURS }) colour!: ShiftColour;
   @ApiProperty({ type: Boolean, nullable: true }) night!: boolean | null;
+  @ApiProperty({ type: [String], description: 'Guard-rail cautions, e.g. a shift longer than 12 hours' })
+  cautions!: string[];
 }
