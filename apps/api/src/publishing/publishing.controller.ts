@@ -6,20 +6,36 @@ import {
   ApiProduces,
   ApiProperty,
   ApiTags,
+  ApiUnprocessableEntityResponse,
 } from '@nestjs/swagger';
 import {
   AUDIT_KINDS,
   type AuditEntryDto,
   type AuditKind,
   type Page,
+  type BelowMinimumShiftDto,
+  type PublishCheckDto,
+  PUBLISH_REASON_MAX_LENGTH,
   type PublishRequest,
   type PublishResultDto,
+  type RosterViolationDto,
+  type UnhonouredLeaveDto,
   REPAIR_TIME_LIMIT_MAX_SECONDS,
   REPAIR_TIME_LIMIT_MIN_SECONDS,
   type RepairRequest,
   type SolveRunStartedDto,
 } from '@rotaplex/contracts';
-import { IsInt, Max, Min } from 'class-validator';
+import {
+  IsBoolean,
+  IsInt,
+  IsOptional,
+  IsString,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  ValidateIf,
+} from 'class-validator';
 import { type Response } from 'express';
 import { ApiErrorResponse } from '../common/api-error.dto';
 import { type AuthUser } from '../common/auth-user';
@@ -34,6 +50,70 @@ export class PublishDto implements PublishRequest {
   @IsInt({ message: 'version must be a whole number' })
   @Min(1, { message: 'version must be at least 1' })
   version!: number;
+
+  @ApiProperty({
+    required: false,
+    description:
+      'Must be true to publish a roster with shifts below minimum cover (a reason is then required)',
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'acknowledgeBelowMinimum must be true or false' })
+  acknowledgeBelowMinimum?: boolean;
+
+  @ApiProperty({
+    required: false,
+    maxLength: PUBLISH_REASON_MAX_LENGTH,
+    description: 'Why the roster is published below minimum cover; kept in the audit trail',
+  })
+  @ValidateIf((o: PublishDto) => o.acknowledgeBelowMinimum === true || o.reason !== undefined)
+  @IsString({ message: 'reason must be text saying why the roster is published below minimum cover' })
+  @Matches(/\S/, { message: 'reason must say why the roster is published below minimum cover' })
+  @MaxLength(PUBLISH_REASON_MAX_LENGTH, {
+    message: `reason must be at most ${PUBLISH_REASON_MAX_LENGTH} characters`,
+  })
+  reason?: string;
+}
+
+class BelowMinimumShiftResponse implements BelowMinimumShiftDto {
+  @ApiProperty() date!: string;
+  @ApiProperty({ format: 'uuid' }) shiftTypeId!: string;
+  @ApiProperty() shiftCode!: string;
+  @ApiProperty() shiftName!: string;
+  @ApiProperty({ type: String, nullable: true }) skillId!: string | null;
+  @ApiProperty({ type: String, nullable: true }) skillCode!: string | null;
+  @ApiProperty() min!: number;
+  @ApiProperty() onShift!: number;
+  @ApiProperty({ description: 'Nobody of the required skill is on the shift' }) none!: boolean;
+  @ApiProperty({ type: [String] }) reasons!: string[];
+}
+
+class FindingResponse implements RosterViolationDto {
+  @ApiProperty() rule!: string;
+  @ApiProperty() staffMemberId!: string;
+  @ApiProperty({ type: [String] }) dates!: string[];
+  @ApiProperty() message!: string;
+  @ApiProperty({ nullable: true, type: String }) warning!: string | null;
+}
+
+class UnhonouredLeaveResponse implements UnhonouredLeaveDto {
+  @ApiProperty() staffMemberId!: string;
+  @ApiProperty() name!: string;
+  @ApiProperty() date!: string;
+  @ApiProperty() shiftTypeId!: string;
+  @ApiProperty() shiftCode!: string;
+}
+
+export class PublishCheckResponse implements PublishCheckDto {
+  @ApiProperty({ format: 'uuid' }) rosterPeriodId!: string;
+  @ApiProperty() version!: number;
+  @ApiProperty() shifts!: number;
+  @ApiProperty() people!: number;
+  @ApiProperty({ type: [BelowMinimumShiftResponse] }) belowMinimum!: BelowMinimumShiftResponse[];
+  @ApiProperty({ type: [FindingResponse] }) ruleFindings!: FindingResponse[];
+  @ApiProperty({ type: [UnhonouredLeaveResponse] }) unhonouredLeave!: UnhonouredLeaveResponse[];
+  @ApiProperty({ type: [String] }) cautions!: string[];
+  @ApiProperty({ type: [String] }) blockers!: string[];
+  @ApiProperty() needsAcknowledgement!: boolean;
 }
 
 export class RepairDto implements RepairRequest {
@@ -86,6 +166,18 @@ export class AuditPageResponse implements Page<AuditEntryDto> {
 export class PublishingController {
   constructor(private readonly publishing: PublishingService) {}
 
+  @Get(':id/publish-check')
+  @ApiOkResponse({
+    type: PublishCheckResponse,
+    description: 'Shifts below minimum cover, rule findings, unhonoured leave and cautions before publishing',
+  })
+  publishCheck(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+  ): Promise<PublishCheckDto> {
+    return this.publishing.publishCheck(user, id);
+  }
+
   @Post(':id/publish')
   @HttpCode(200)
   @ApiOkResponse({ type: PublishResultResponse })
@@ -93,12 +185,16 @@ export class PublishingController {
     description: 'Stale version, not a draft, or a solve is running',
     type: ApiErrorResponse,
   })
+  @ApiUnprocessableEntityResponse({
+    description: 'No shifts at all, or shifts below minimum cover without acknowledgement and reason',
+    type: ApiErrorResponse,
+  })
   publish(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseUUIDPipe) id: string,
     @Body() body: PublishDto,
   ): Promise<PublishResultDto> {
-    return this.publishing.publish(user, id, body.version);
+    return this.publishing.publish(user, id, body);
   }
 
   @Post(':id/repair')

@@ -1,8 +1,10 @@
-import { ConflictException, Injectable } from '@nestjs/common';
+import { ConflictException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import {
   ACTIVE_SOLVE_RUN_STATUSES,
   type AuditEntryDto,
   type Page,
+  type PublishCheckDto,
+  type PublishRequest,
   type PublishResultDto,
   type RosterCellChangeDto,
   type SolveRunStartedDto,
@@ -11,12 +13,13 @@ import { type Roster } from '@rotaplex/roster-model';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager, In } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
-import { rosterOf, saveSolvedRoster } from '../assignments/assignments.service';
+import { checkDto, rosterOf, saveSolvedRoster } from '../assignments/assignments.service';
 import { AuditEntryEntity } from '../audit/audit-entry.entity';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { type PageQueryDto, toPage } from '../common/pagination';
 import { AppConfig } from '../config/app-config';
+import { ContractEntity } from '../contracts/contract.entity';
 import { MailService } from '../mail/mail.service';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
@@ -25,6 +28,7 @@ import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { type SolveRunMode, SolveRunsService } from '../solve-runs/solve-runs.service';
 import { toCsv } from '../staff/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
+import { belowMinimum, settingCautions, unhonouredLeave } from './publish-check';
 import { formatShiftTimes, type MailShift, rosterMail } from './roster-mail';
 
 /** Publishing a draft roster, repairing a published one, and the period's audit trail and export. */
@@ -41,11 +45,52 @@ export class PublishingService {
   ) {}
 
   /**
+   * What publishing the period's roster as it stands would publish: shifts below minimum cover
+   * (worst first, with the roster model's reasons), the checker's rule findings, shifts on approved
+   * leave and cautions on the settings used; and whether it can be published.
+   */
+  async publishCheck(user: AuthUser, periodId: string): Promise<PublishCheckDto> {
+    await this.periods.get(user, periodId); // 404 / 403 by unit
+    const em = this.dataSource.manager;
+    const input = await this.input.load(periodId);
+    const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const roster = rosterOf(input, rows);
+    const cells = publishedCells(input, rows);
+    const contractIds = [...new Set(input.staff.flatMap((s) => (s.contractId ? [s.contractId] : [])))];
+    const contracts = new Map(
+      (contractIds.length ? await em.findBy(ContractEntity, { id: In(contractIds) }) : []).map((c) => [
+        c.id,
+        c,
+      ]),
+    );
+    const short = belowMinimum(input, roster, true);
+    const blockers: string[] = [];
+    if (input.period.status !== 'draft')
+      blockers.push(`Only a draft can be published; this period is ${input.period.status}.`);
+    if (cells.length === 0) blockers.push(EMPTY_ROSTER);
+    return {
+      rosterPeriodId: periodId,
+      version: input.period.version,
+      shifts: cells.length,
+      people: new Set(cells.map((c) => c.staffMemberId)).size,
+      belowMinimum: short,
+      ruleFindings: checkDto(input, roster).violations,
+      unhonouredLeave: unhonouredLeave(input, roster),
+      cautions: settingCautions(input, roster, contracts),
+      blockers,
+      needsAcknowledgement: short.length > 0,
+    };
+  }
+
+  /**
    * Publishes a draft: status, snapshot, audit entry and one e-mail per person with an e-mail
    * address (their own shifts only), all in one transaction. 409 when the version is stale, the
-   * period is not a draft or a solve is running.
+   * period is not a draft or a solve is running; 422 when the roster has no shifts, or has shifts
+   * below minimum cover and the request does not acknowledge them with a reason (kept in the audit
+   * entry).
    */
-  async publish(user: AuthUser, periodId: string, version: number): Promise<PublishResultDto> {
+  async publish(user: AuthUser, periodId: string, request: PublishRequest): Promise<PublishResultDto> {
+    const { version } = request;
     await this.periods.get(user, periodId); // 404 / 403 by unit
     return this.dataSource.transaction(async (em) => {
       const period = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
@@ -69,6 +114,17 @@ export class PublishingService {
       const input = await this.input.load(periodId, {}, em);
       const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
       const cells = publishedCells(input, rows);
+      if (cells.length === 0) throw new UnprocessableEntityException(EMPTY_ROSTER);
+      const short = belowMinimum(input, rosterOf(input, rows), false);
+      const reason = request.reason?.trim() ?? '';
+      if (short.length > 0 && (request.acknowledgeBelowMinimum !== true || reason === '')) {
+        throw new UnprocessableEntityException(
+          `${short.length} ${short.length === 1 ? 'shift is' : 'shifts are'} below minimum cover ` +
+            `(worst: ${short[0].shiftName} on ${short[0].date}, ${short[0].onShift} of ${short[0].min}` +
+            `${short[0].skillCode ? ` ${short[0].skillCode}` : ''}). To publish anyway, acknowledge it ` +
+            '(acknowledgeBelowMinimum) and give the reason (reason); it is kept in the audit trail.',
+        );
+      }
       const publishedAt = new Date();
       const updated = await em
         .createQueryBuilder()
@@ -90,7 +146,11 @@ export class PublishingService {
         rosterPeriodId: periodId,
         actorUserId: user.id,
         kind: 'publish',
-        summary: `Published the roster: ${cells.length} shift(s) for ${people} person(s)`,
+        summary:
+          `Published the roster: ${cells.length} shift(s) for ${people} person(s)` +
+          (short.length > 0
+            ? `, with ${short.length} shift(s) below minimum cover acknowledged. Reason: ${reason}`
+            : ''),
         before: null,
         after: cells,
       });
@@ -298,6 +358,9 @@ export class PublishingService {
     return sent;
   }
 }
+
+const EMPTY_ROSTER =
+  'The roster has no shifts: there is nothing to publish. Generate a roster or enter shifts first.';
 
 /** The worked cells of a roster's rows (active people of the period only). */
 function publishedCells(input: RosterInput, rows: AssignmentEntity[]): PublishedCell[] {

@@ -3,6 +3,7 @@
  * repairing a roster period, and the audit trail of changes to published rosters. Plain types
  * shared by the API and the web app.
  */
+import type { RosterViolationDto } from './solving';
 
 // ---------------------------------------------------------------- outbox
 
@@ -47,6 +48,62 @@ export interface AuditEntryDto {
 export interface PublishRequest {
   /** The period's version as last read (optimistic lock). */
   version: number;
+  /** Required (true) when any shift is below its minimum cover; then `reason` is required too. */
+  acknowledgeBelowMinimum?: boolean;
+  /** Why the roster is published below minimum cover; kept in the audit entry of the publish. */
+  reason?: string;
+}
+
+export const PUBLISH_REASON_MAX_LENGTH = 500;
+
+/** A shift of the roster below its minimum cover (one cover need: date, shift type, skill). */
+export interface BelowMinimumShiftDto {
+  date: string;
+  shiftTypeId: string;
+  shiftCode: string;
+  shiftName: string;
+  /** Skill the counted people must have, or null for anyone. */
+  skillId: string | null;
+  skillCode: string | null;
+  min: number;
+  /** People on the shift who count towards the need. */
+  onShift: number;
+  /** Nobody of the required skill (or nobody at all) is on the shift: the most serious case. */
+  none: boolean;
+  /** Why it is short, in plain words (from the roster model's explanations). */
+  reasons: string[];
+}
+
+/** A shift on a day of approved leave. */
+export interface UnhonouredLeaveDto {
+  staffMemberId: string;
+  name: string;
+  date: string;
+  shiftTypeId: string;
+  shiftCode: string;
+}
+
+/**
+ * What a manager should see before publishing: shifts below minimum cover (worst first: none of the
+ * required skill, then the largest shortfall), the checker's rule findings, approved leave the
+ * roster does not honour, and cautions on the settings it uses.
+ */
+export interface PublishCheckDto {
+  rosterPeriodId: string;
+  /** The period's version the check was made on (send it with the publish). */
+  version: number;
+  /** Worked shifts on the roster (0: nothing to publish). */
+  shifts: number;
+  people: number;
+  belowMinimum: BelowMinimumShiftDto[];
+  ruleFindings: RosterViolationDto[];
+  unhonouredLeave: UnhonouredLeaveDto[];
+  /** Settings the roster uses beyond the guard rails (contracts outside the presets, long shifts). */
+  cautions: string[];
+  /** Why it cannot be published at all (an empty roster, not a draft); empty when it can. */
+  blockers: string[];
+  /** Publishing needs acknowledgeBelowMinimum and a reason. */
+  needsAcknowledgement: boolean;
 }
 
 export interface PublishResultDto {
@@ -80,6 +137,7 @@ export const PUBLISHING_ROUTES = {
   outbox: '/outbox',
   outboxRetry: (id: string) => `/outbox/${e(id)}/retry`,
   publish: (periodId: string) => `/roster-periods/${e(periodId)}/publish`,
+  publishCheck: (periodId: string) => `/roster-periods/${e(periodId)}/publish-check`,
   repair: (periodId: string) => `/roster-periods/${e(periodId)}/repair`,
   audit: (periodId: string) => `/roster-periods/${e(periodId)}/audit`,
   export: (periodId: string) => `/roster-periods/${e(periodId)}/export`,

@@ -1,0 +1,125 @@
+import {
+  type BelowMinimumShiftDto,
+  contractCautions,
+  type ContractRules,
+  shiftTypeCautions,
+  type UnhonouredLeaveDto,
+} from '@rotaplex/contracts';
+import { explainUnmetNeeds, type Roster } from '@rotaplex/roster-model';
+import { type RosterInput } from '../roster-input/roster-input.service';
+
+/** Explanations are worked out for at most this many shifts below minimum (the rest are listed bare). */
+const EXPLAINED_SHIFTS = 40;
+
+/**
+ * Shifts of a roster below their minimum cover, worst first: none of the required skill on the
+ * shift, then the largest shortfall, then by date. A person counts towards every need whose skill
+ * they have (the roster model's rule). With `explain`, each carries the roster model's reasons.
+ */
+export function belowMinimum(input: RosterInput, roster: Roster, explain: boolean): BelowMinimumShiftDto[] {
+  const { problem } = input;
+  const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
+  const skillsOf = new Map(problem.people.map((p) => [p.id, new Set(p.skills)]));
+  const out: (BelowMinimumShiftDto & { day: number })[] = [];
+  for (const need of problem.coverNeeds) {
+    if (need.min <= 0) continue;
+    let onShift = 0;
+    for (const [personId, days] of Object.entries(roster)) {
+      if (days[need.day] !== need.shiftTypeId) continue;
+      if (need.skillId === null || skillsOf.get(personId)?.has(need.skillId)) onShift++;
+    }
+    if (onShift >= need.min) continue;
+    const st = shiftById.get(need.shiftTypeId);
+    out.push({
+      day: need.day,
+      date: input.dates[need.day],
+      shiftTypeId: need.shiftTypeId,
+      shiftCode: st?.code ?? need.shiftTypeId,
+      shiftName: st?.name ?? need.shiftTypeId,
+      skillId: need.skillId,
+      skillCode: need.skillId === null ? null : (problem.skillNames?.[need.skillId] ?? need.skillId),
+      min: need.min,
+      onShift,
+      none: onShift === 0,
+      reasons: [],
+    });
+  }
+  out.sort(
+    (a, b) =>
+      Number(b.none) - Number(a.none) ||
+      b.min - b.onShift - (a.min - a.onShift) ||
+      a.date.localeCompare(b.date) ||
+      a.shiftCode.localeCompare(b.shiftCode),
+  );
+  if (explain && out.length > 0) {
+    const worst = out.slice(0, EXPLAINED_SHIFTS);
+    const wanted = new Set(worst.map((s) => `${s.day}|${s.shiftTypeId}|${s.skillId}`));
+    const needs = problem.coverNeeds.filter((n) => wanted.has(`${n.day}|${n.shiftTypeId}|${n.skillId}`));
+    const explained = explainUnmetNeeds({ ...problem, coverNeeds: needs }, roster, undefined, {
+      maxCostChecksPerNeed: 10,
+    });
+    const reasons = new Map(explained.map((e) => [`${e.day}|${e.shiftTypeId}|${e.skillId}`, e.reasons]));
+    for (const s of worst) {
+      // The first reason restates the count, which the list shows already.
+      s.reasons = (reasons.get(`${s.day}|${s.shiftTypeId}|${s.skillId}`) ?? []).slice(1);
+    }
+  }
+  return out.map(({ day: _day, ...rest }) => rest);
+}
+
+/** Shifts on days of approved leave, by date then name. */
+export function unhonouredLeave(input: RosterInput, roster: Roster): UnhonouredLeaveDto[] {
+  const staffById = new Map(input.staff.map((s) => [s.id, s]));
+  const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
+  const out: UnhonouredLeaveDto[] = [];
+  const seen = new Set<string>();
+  for (const a of input.problem.absences) {
+    if (a.kind !== 'leave') continue;
+    const shiftTypeId = roster[a.personId]?.[a.day] ?? null;
+    const key = `${a.personId}|${a.day}`;
+    if (shiftTypeId === null || seen.has(key)) continue;
+    if (a.shiftTypeIds && !a.shiftTypeIds.includes(shiftTypeId)) continue;
+    seen.add(key);
+    out.push({
+      staffMemberId: a.personId,
+      name: staffById.get(a.personId)?.name ?? a.personId,
+      date: input.dates[a.day],
+      shiftTypeId,
+      shiftCode: shiftById.get(shiftTypeId)?.code ?? shiftTypeId,
+    });
+  }
+  return out.sort((a, b) => a.date.localeCompare(b.date) || a.name.localeCompare(b.name));
+}
+
+/**
+ * Cautions on the settings a roster uses: the contracts of people with shifts on it that go beyond
+ * the working-time presets, and shift types on it longer than 12 hours.
+ */
+export function settingCautions(
+  input: RosterInput,
+  roster: Roster,
+  contracts: Map<string, { name: string } & ContractRules>,
+): string[] {
+  const out: string[] = [];
+  const working = input.staff.filter((s) => (roster[s.id] ?? []).some((c) => c !== null));
+  const byContract = new Map<string, string[]>();
+  for (const s of working) {
+    if (s.contractId === null) continue;
+    byContract.set(s.contractId, [...(byContract.get(s.contractId) ?? []), s.name]);
+  }
+  for (const [id, names] of byContract) {
+    const c = contracts.get(id);
+    if (!c) continue;
+    const cautions = contractCautions(c);
+    if (cautions.length === 0) continue;
+    const who =
+      names.length <= 3 ? names.join(', ') : `${names.slice(0, 3).join(', ')} and ${names.length - 3} more`;
+    out.push(`Contract "${c.name}" (${who}) is outside the working-time presets. ${cautions.join(' ')}`);
+  }
+  const used = new Set(Object.values(roster).flatMap((days) => days.filter((d): d is string => d !== null)));
+  for (const st of input.shiftTypes) {
+    if (!used.has(st.id)) continue;
+    for (const c of shiftTypeCautions(st)) out.push(`${st.name} (${st.code}): ${c}`);
+  }
+  return out;
+}
