@@ -8,11 +8,12 @@ import {
   ApiTags,
 } from '@nestjs/swagger';
 import { type ClaimOpenShiftDto, type OpenShiftDto, type SwapRequestDto } from '@rotaplex/contracts';
-import { IsOptional, IsString, IsUUID, Matches, MaxLength, ValidateIf } from 'class-validator';
+import { IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
 import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { OpenShiftsService } from './open-shifts.service';
+import { IsIsoDate } from '../common/decorators/is-iso-date.decorator';
 
 export class OpenShiftQuery {
   @ApiPropertyOptional({ format: 'uuid' })
@@ -27,7 +28,7 @@ export class ClaimOpenShiftBody implements ClaimOpenShiftDto {
   rosterPeriodId!: string;
 
   @ApiProperty({ example: '2027-01-04' })
-  @Matches(/^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, { message: 'date must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   date!: string;
 
   @ApiProperty({ format: 'uuid' })

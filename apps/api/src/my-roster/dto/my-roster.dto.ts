@@ -8,17 +8,15 @@ import {
   SHIFT_COLOURS,
   type ShiftColour,
 } from '@rotaplex/contracts';
-import { Matches } from 'class-validator';
-
-const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 
 export class MyRosterQueryDto implements MyRosterQuery {
   @ApiProperty({ example: '2027-01-04', description: 'First day, YYYY-MM-DD' })
-  @Matches(DATE, { message: 'from must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   from!: string;
 
   @ApiProperty({ example: '2027-01-31', description: 'Last day, YYYY-MM-DD (at most 100 days after from)' })
-  @Matches(DATE, { message: 'to must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   to!: string;
 }
 

@@ -37,15 +37,14 @@ import {
   IsOptional,
   IsString,
   IsUUID,
-  Matches,
   Max,
   MaxLength,
   Min,
   ValidateNested,
 } from 'class-validator';
 import { PageQueryDto } from '../../common/pagination';
+import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 
-export const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
 const oneOf = (field: string, values: readonly string[]) => ({
   message: `${field} must be one of ${values.join(', ')}`,
 });
@@ -81,7 +80,7 @@ export class CreateDateRequestDto implements CreateDateRequestRequest {
   rosterPeriodId!: string;
 
   @ApiProperty({ example: '2030-01-08' })
-  @Matches(DATE, { message: 'date must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   date!: string;
 
   @ApiProperty({ enum: DATE_REQUEST_KINDS })
@@ -105,7 +104,7 @@ export class CreateDateRequestDto implements CreateDateRequestRequest {
 export class UpdateDateRequestDto implements UpdateDateRequestRequest {
   @ApiPropertyOptional({ example: '2030-01-08' })
   @IsOptional()
-  @Matches(DATE, { message: 'date must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   date?: string;
 
   @ApiPropertyOptional({ enum: DATE_REQUEST_KINDS })
@@ -151,11 +150,11 @@ export class CreateLeaveDto implements CreateLeaveRequest {
   staffMemberId?: string;
 
   @ApiProperty({ example: '2030-01-08' })
-  @Matches(DATE, { message: 'startDate must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   startDate!: string;
 
   @ApiProperty({ example: '2030-01-10', description: 'Last day of leave (inclusive)' })
-  @Matches(DATE, { message: 'endDate must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   endDate!: string;
 
   @ApiProperty({ enum: LEAVE_TYPES })

@@ -9,9 +9,8 @@ import {
   type RosterPeriodStatus,
   type UpdateRosterPeriodRequest,
 } from '@rotaplex/contracts';
-import { IsIn, IsInt, IsOptional, IsUUID, Matches, Max, Min } from 'class-validator';
-
-const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+import { IsIn, IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
+import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 
 export class CreateRosterPeriodDto implements CreateRosterPeriodRequest {
   @ApiProperty({ format: 'uuid' })
@@ -19,7 +18,7 @@ export class CreateRosterPeriodDto implements CreateRosterPeriodRequest {
   unitId!: string;
 
   @ApiProperty({ example: '2027-01-04', description: 'First day, YYYY-MM-DD' })
-  @Matches(DATE, { message: 'startDate must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   startDate!: string;
 
   @ApiProperty({ minimum: ROSTER_PERIOD_MIN_DAYS, maximum: ROSTER_PERIOD_MAX_DAYS, example: 28 })
@@ -32,7 +31,7 @@ export class CreateRosterPeriodDto implements CreateRosterPeriodRequest {
 export class UpdateRosterPeriodDto implements UpdateRosterPeriodRequest {
   @ApiPropertyOptional({ example: '2027-01-04' })
   @IsOptional()
-  @Matches(DATE, { message: 'startDate must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   startDate?: string;
 
   @ApiPropertyOptional({ minimum: ROSTER_PERIOD_MIN_DAYS, maximum: ROSTER_PERIOD_MAX_DAYS })

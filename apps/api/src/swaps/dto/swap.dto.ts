@@ -6,9 +6,8 @@ import {
   type SwapLinkDecisionDto,
   type SwapStatus,
 } from '@rotaplex/contracts';
-import { IsIn, IsOptional, IsString, IsUUID, Length, Matches, MaxLength } from 'class-validator';
-
-const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+import { IsIn, IsOptional, IsString, IsUUID, Length, MaxLength } from 'class-validator';
+import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 
 export class ProposeSwapBody implements ProposeSwapDto {
   @ApiProperty({ enum: ['swap', 'offer'], description: 'swap: exchange shifts; offer: give my shift away' })
@@ -20,7 +19,7 @@ export class ProposeSwapBody implements ProposeSwapDto {
   rosterPeriodId!: string;
 
   @ApiProperty({ example: '2027-01-04', description: 'My working day to give or exchange' })
-  @Matches(DATE, { message: 'myDate must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   myDate!: string;
 
   @ApiProperty({ format: 'uuid' })
@@ -29,7 +28,7 @@ export class ProposeSwapBody implements ProposeSwapDto {
 
   @ApiPropertyOptional({ example: '2027-01-06', description: "Swap only: the colleague's day I take" })
   @IsOptional()
-  @Matches(DATE, { message: 'theirDate must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   theirDate?: string;
 
   @ApiPropertyOptional({ maxLength: 500 })
