@@ -1,8 +1,10 @@
 import {
+  type Page,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
   SOLVING_ROUTES as R,
   type SolveRunDto,
+  type SolveRunSummaryDto,
 } from '@rotaplex/contracts';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -134,8 +136,8 @@ describe('solve runs', () => {
         .get(api(R.periodSolveRuns(period.id)))
         .set(bearer(manager))
         .expect(200)
-    ).body as SolveRunDto[];
-    expect(runs).toEqual([]);
+    ).body as Page<SolveRunSummaryDto>;
+    expect(runs).toMatchObject({ items: [], total: 0 });
   });
 
   it('answers 202 at once, refuses a second active run, streams progress and saves a roster the checker accepts', async () => {
@@ -230,8 +232,8 @@ describe('solve runs', () => {
         .get(api(R.periodSolveRuns(week.id)))
         .set(bearer(manager))
         .expect(200)
-    ).body as SolveRunDto[];
-    expect(list.map((r) => r.id)).toContain(id);
+    ).body as Page<SolveRunSummaryDto>;
+    expect(list.items.map((r) => r.id)).toContain(id);
   }, 120_000);
 
   it('cancels a running solve and keeps the best roster found so far', async () => {

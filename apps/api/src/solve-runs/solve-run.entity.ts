@@ -1,5 +1,7 @@
 import {
+  SOLVE_RUN_MODES,
   SOLVE_RUN_STATUSES,
+  type SolveRunModeName,
   type SolveProgressDto,
   type SolveRunResultDto,
   type SolveRunStatus,
@@ -21,6 +23,7 @@ import { UserEntity } from '../users/user.entity';
 /** One generation of a period's roster by the solver: queued, running, then finished, failed or cancelled. */
 @Entity('solve_runs')
 @Check('CHK_solve_runs_status', `"status" IN (${SOLVE_RUN_STATUSES.map((s) => `'${s}'`).join(', ')})`)
+@Check('CHK_solve_runs_mode', `"mode" IN (${SOLVE_RUN_MODES.map((m) => `'${m}'`).join(', ')})`)
 @Index('IDX_solve_runs_period_status', ['rosterPeriodId', 'status'])
 export class SolveRunEntity {
   @PrimaryGeneratedColumn('uuid')
@@ -35,6 +38,10 @@ export class SolveRunEntity {
 
   @Column({ type: 'varchar', length: 16, default: 'queued' })
   status!: SolveRunStatus;
+
+  /** Generate a draft or repair a published roster; stored so a restart still knows it. */
+  @Column({ type: 'varchar', length: 16, default: 'generate' })
+  mode!: SolveRunModeName;
 
   @Column({ type: 'varchar', nullable: true })
   requestedById!: string | null;

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Req, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query, Req, Res } from '@nestjs/common';
 import {
   ApiAcceptedResponse,
   ApiConflictResponse,
@@ -7,12 +7,24 @@ import {
   ApiProduces,
   ApiTags,
 } from '@nestjs/swagger';
-import { type SolveRunDto, type SolveRunEventName, type SolveRunStartedDto } from '@rotaplex/contracts';
+import {
+  type Page,
+  type SolveRunDto,
+  type SolveRunEventName,
+  type SolveRunStartedDto,
+  type SolveRunSummaryDto,
+} from '@rotaplex/contracts';
 import { type Request, type Response } from 'express';
 import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { SolveRunResponse, SolveRunStartedResponse, StartSolveRunDto } from './dto/solve-run.dto';
+import {
+  SolveRunListQuery,
+  SolveRunPageResponse,
+  SolveRunResponse,
+  SolveRunStartedResponse,
+  StartSolveRunDto,
+} from './dto/solve-run.dto';
 import { SolveRunsService } from './solve-runs.service';
 
 const ENDED = ['finished', 'failed', 'cancelled'];
@@ -40,9 +52,16 @@ export class SolveRunsController {
 
   @Get('roster-periods/:id/solve-runs')
   @RequirePermissions('rosters:plan')
-  @ApiOkResponse({ type: [SolveRunResponse] })
-  list(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SolveRunDto[]> {
-    return this.runs.list(user, id);
+  @ApiOkResponse({
+    type: SolveRunPageResponse,
+    description: "The period's runs, newest first, without results",
+  })
+  list(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Query() query: SolveRunListQuery,
+  ): Promise<Page<SolveRunSummaryDto>> {
+    return this.runs.list(user, id, query);
   }
 
   @Get('solve-runs/:id')

@@ -9,11 +9,14 @@ import {
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   ACTIVE_SOLVE_RUN_STATUSES,
+  type Page,
   type SolveProgressDto,
   type SolveRunDto,
+  type SolveRunModeName,
   type SolveRunEventName,
   type SolveRunResultDto,
   type SolveRunStartedDto,
+  type SolveRunSummaryDto,
 } from '@rotaplex/contracts';
 import { EventEmitter } from 'node:events';
 import { type Roster } from '@rotaplex/roster-model';
@@ -43,9 +46,12 @@ const PROGRESS_WRITE_MS = 1000;
  * A run that does something other than generating a draft (e.g. repairing a published roster):
  * it adjusts the model's input before the solve and saves the roster itself at the end, in the
  * transaction that records the run's outcome (throwing there fails the run and saves nothing).
- * Kept in memory only: a queued or running run does not survive a restart anyway.
+ * The run's row stores the mode's name; the behaviour stays in memory (a queued or running run
+ * does not survive a restart anyway).
  */
 export interface SolveRunMode {
+  /** Stored on the run (default repair, the only mode besides generate). */
+  name?: Exclude<SolveRunModeName, 'generate'>;
   /** Period statuses the mode starts on (generate: draft). */
   periodStatuses: readonly string[];
   prepare(input: RosterInput): Promise<void>;
@@ -135,6 +141,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
         em.create(SolveRunEntity, {
           rosterPeriodId: periodId,
           status: 'queued',
+          mode: mode ? (mode.name ?? 'repair') : 'generate',
           requestedById: user.id,
           timeLimitSeconds: body.timeLimitSeconds,
           // Only the weights given (DTO instances carry undefined class fields).
@@ -153,13 +160,24 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     return { id: run.id };
   }
 
-  async list(user: AuthUser, periodId: string): Promise<SolveRunDto[]> {
+  /** A page of the period's runs, newest first, without their results (GET one run for that). */
+  async list(
+    user: AuthUser,
+    periodId: string,
+    query: { page: number; pageSize: number },
+  ): Promise<Page<SolveRunSummaryDto>> {
     await this.periods.get(user, periodId);
-    const rows = await this.runs.find({
-      where: { rosterPeriodId: periodId },
-      order: { createdAt: 'DESC', id: 'ASC' },
-    });
-    return rows.map(toSolveRunDto);
+    // createdAt has whole seconds: runs of the same second come in the order they were inserted.
+    const [rows, total] = await this.runs
+      .createQueryBuilder('run')
+      .select(SUMMARY_COLUMNS.map((c) => `run.${c}`))
+      .where('run.rosterPeriodId = :periodId', { periodId })
+      .orderBy('run.createdAt', 'DESC')
+      .addOrderBy('run.rowid', 'DESC')
+      .offset((query.page - 1) * query.pageSize)
+      .limit(query.pageSize)
+      .getManyAndCount();
+    return { items: rows.map(toSolveRunSummaryDto), total, page: query.page, pageSize: query.pageSize };
   }
 
   async get(user: AuthUser, id: string): Promise<SolveRunDto> {
@@ -247,7 +265,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       const run = await this.runs.findOneBy({ id });
       if (!run || run.status !== 'queued') return;
       const input = await this.input.load(run.rosterPeriodId, run.weights);
-      await this.modes.get(id)?.prepare(input);
+      if (run.mode !== 'generate') await this.modeOf(run).prepare(input);
       const startedAt = new Date();
       await this.runs.update({ id }, { status: 'running', startedAt });
       this.emit(id, 'status', toSolveRunDto({ ...run, status: 'running', startedAt }));
@@ -312,10 +330,9 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
         );
         return;
       }
-      const mode = this.modes.get(id);
-      if (mode) {
-        const run = await em.findOneByOrFail(SolveRunEntity, { id });
-        await mode.save(em, input, result.roster, run);
+      const run = await em.findOneByOrFail(SolveRunEntity, { id });
+      if (run.mode !== 'generate') {
+        await this.modeOf(run).save(em, input, result.roster, run);
         await em.update(
           SolveRunEntity,
           { id },
@@ -355,6 +372,13 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       // The database is gone (shutting down): the next start marks the run failed.
       this.logger.error(`Could not mark solve run ${id} failed: ${String(err)}`);
     }
+  }
+
+  /** The behaviour of a run's stored mode (held by this process since the run started). */
+  private modeOf(run: SolveRunEntity): SolveRunMode {
+    const mode = this.modes.get(run.id);
+    if (!mode) throw new Error(`the ${run.mode} run was started by an earlier server process`);
+    return mode;
   }
 
   private emit(id: string, event: SolveRunEventName, data: unknown): void {
@@ -397,19 +421,39 @@ function summaryOf(input: RosterInput, result: PoolSolveResult): SolveRunResultD
   };
 }
 
-export function toSolveRunDto(r: SolveRunEntity): SolveRunDto {
+/** Every column but the result (lists leave it out). */
+const SUMMARY_COLUMNS = [
+  'id',
+  'rosterPeriodId',
+  'status',
+  'mode',
+  'requestedById',
+  'timeLimitSeconds',
+  'weights',
+  'progress',
+  'errorMessage',
+  'createdAt',
+  'startedAt',
+  'finishedAt',
+] as const satisfies readonly (keyof SolveRunEntity)[];
+
+export function toSolveRunSummaryDto(r: Omit<SolveRunEntity, 'result'>): SolveRunSummaryDto {
   return {
     id: r.id,
     rosterPeriodId: r.rosterPeriodId,
     status: r.status,
+    mode: r.mode,
     requestedById: r.requestedById,
     timeLimitSeconds: r.timeLimitSeconds,
     weights: r.weights,
     progress: r.progress,
-    result: r.result,
     errorMessage: r.errorMessage,
     createdAt: r.createdAt.toISOString(),
     startedAt: r.startedAt ? r.startedAt.toISOString() : null,
     finishedAt: r.finishedAt ? r.finishedAt.toISOString() : null,
   };
+}
+
+export function toSolveRunDto(r: SolveRunEntity): SolveRunDto {
+  return { ...toSolveRunSummaryDto(r), result: r.result };
 }

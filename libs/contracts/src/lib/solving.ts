@@ -83,10 +83,16 @@ export interface SolveRunResultDto {
   terms: Record<string, number> | null;
 }
 
+/** What a run does: generate a draft's roster, or repair a published one (fewest changes). */
+export const SOLVE_RUN_MODES = ['generate', 'repair'] as const;
+export type SolveRunModeName = (typeof SOLVE_RUN_MODES)[number];
+
 export interface SolveRunDto {
   id: string;
   rosterPeriodId: string;
   status: SolveRunStatus;
+  /** Stored with the run, so it is known after a restart. */
+  mode: SolveRunModeName;
   /** User who started the run (null when that user was deleted). */
   requestedById: string | null;
   timeLimitSeconds: number;
@@ -99,6 +105,12 @@ export interface SolveRunDto {
   startedAt: string | null;
   finishedAt: string | null;
 }
+
+/**
+ * A run in the list of a period's runs (GET /roster-periods/:id/solve-runs, newest first, paged):
+ * everything but the result, which GET /solve-runs/:id gives.
+ */
+export type SolveRunSummaryDto = Omit<SolveRunDto, 'result'>;
 
 /**
  * Server-sent events of GET /solve-runs/:id/events (read with fetch and the Authorization header;

@@ -7,6 +7,7 @@ import { CalendarFeed1765065600000 } from './1765065600000-calendar-feed';
 import { Swaps1765152000000 } from './1765152000000-swaps';
 import { SwapFirstDate1765281600000 } from './1765281600000-swap-first-date';
 import { OutboxSealedBody1765368000000 } from './1765368000000-outbox-sealed-body';
+import { SolveRunMode1765454400000 } from './1765454400000-solve-run-mode';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
 export const MIGRATIONS = [
@@ -19,4 +20,5 @@ export const MIGRATIONS = [
   Swaps1765152000000,
   SwapFirstDate1765281600000,
   OutboxSealedBody1765368000000,
+  SolveRunMode1765454400000,
 ];

@@ -1,19 +1,24 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, OmitType, PickType } from '@nestjs/swagger';
 import {
+  type Page,
+  SOLVE_RUN_MODES,
   SOLVE_RUN_STATUSES,
   SOLVE_TIME_LIMIT_MAX_SECONDS,
   SOLVE_TIME_LIMIT_MIN_SECONDS,
   SOLVE_WEIGHT_MAX,
   type SolveProgressDto,
   type SolveRunDto,
+  type SolveRunModeName,
   type SolveRunResultDto,
   type SolveRunStartedDto,
   type SolveRunStatus,
+  type SolveRunSummaryDto,
   type SolveWeights,
   type StartSolveRunRequest,
 } from '@rotaplex/contracts';
 import { Type } from 'class-transformer';
 import { IsInt, IsNumber, IsObject, IsOptional, Max, Min, ValidateNested } from 'class-validator';
+import { PageQueryDto } from '../../common/pagination';
 
 const weight = () => {
   const decorators = [
@@ -72,6 +77,7 @@ export class SolveRunResponse implements SolveRunDto {
   @ApiProperty({ format: 'uuid' }) id!: string;
   @ApiProperty({ format: 'uuid' }) rosterPeriodId!: string;
   @ApiProperty({ enum: SOLVE_RUN_STATUSES }) status!: SolveRunStatus;
+  @ApiProperty({ enum: SOLVE_RUN_MODES }) mode!: SolveRunModeName;
   @ApiProperty({ nullable: true, type: String }) requestedById!: string | null;
   @ApiProperty() timeLimitSeconds!: number;
   @ApiProperty({ type: SolveWeightsDto }) weights!: SolveWeights;
@@ -88,3 +94,17 @@ export class SolveRunResponse implements SolveRunDto {
   @ApiProperty({ nullable: true, type: String }) startedAt!: string | null;
   @ApiProperty({ nullable: true, type: String }) finishedAt!: string | null;
 }
+
+export class SolveRunSummaryResponse
+  extends OmitType(SolveRunResponse, ['result'] as const)
+  implements SolveRunSummaryDto {}
+
+export class SolveRunPageResponse implements Page<SolveRunSummaryDto> {
+  @ApiProperty({ type: [SolveRunSummaryResponse] }) items!: SolveRunSummaryResponse[];
+  @ApiProperty() total!: number;
+  @ApiProperty() page!: number;
+  @ApiProperty() pageSize!: number;
+}
+
+/** page (from 1) and pageSize (1 to MAX_PAGE_SIZE, default 20); the runs come newest first. */
+export class SolveRunListQuery extends PickType(PageQueryDto, ['page', 'pageSize'] as const) {}

@@ -14,6 +14,7 @@ import {
   type SolveProgressDto,
   type SolveRunDto,
   type SolveRunStartedDto,
+  type SolveRunSummaryDto,
   type StaffMemberDto,
 } from '@rotaplex/contracts';
 import { api, apiRequest, buildUrl, refreshSession } from '@/api/client';
@@ -41,11 +42,24 @@ export const assignmentsQuery = (periodId: string) =>
       api.get<AssignmentGridDto>(SOLVING_ROUTES.assignments(periodId), undefined, signal),
   });
 
+/**
+ * The period's latest solve run with its result (the board shows only that one), as a list of at
+ * most one: the run list is paged and leaves results out, so the latest run is read by its id.
+ */
 export const solveRunsQuery = (periodId: string) =>
   queryOptions({
     queryKey: boardKeys.runs(periodId),
-    queryFn: ({ signal }) =>
-      api.get<SolveRunDto[]>(SOLVING_ROUTES.periodSolveRuns(periodId), undefined, signal),
+    queryFn: async ({ signal }): Promise<SolveRunDto[]> => {
+      const newest = await api.get<Page<SolveRunSummaryDto>>(
+        SOLVING_ROUTES.periodSolveRuns(periodId),
+        { page: 1, pageSize: 1 },
+        signal,
+      );
+      const latest = newest.items[0];
+      return latest
+        ? [await api.get<SolveRunDto>(SOLVING_ROUTES.solveRun(latest.id), undefined, signal)]
+        : [];
+    },
   });
 
 /**
