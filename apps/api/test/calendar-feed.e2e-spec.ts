@@ -7,6 +7,7 @@ import {
   type StaffMemberDto,
 } from '@rotaplex/contracts';
 import ICAL from 'ical.js';
+import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import {
   createPeriod,
   findUnit,
@@ -241,6 +242,53 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
       sequence: removed.sequence + 1,
       start: '2030-04-02T06:00:00.000Z',
     });
+  });
+
+  it('reads without queueing behind an open transaction, sees only committed shifts, and writes only on a change', async () => {
+    const { url } = (await t.http().get(api(M.myCalendarFeed)).set(bearer(staff))).body as CalendarFeedDto;
+    const before = (await readFeed(url)).events;
+    const uid = uidOf(robin.id, '2030-03-28');
+    const stored = () =>
+      t.dataSource.query(`SELECT sequence, changedAt FROM calendar_feed_events WHERE uid = ?`, [uid]);
+    const row = await stored();
+
+    // Another writer holds a transaction open (all other queries of the main connection wait for
+    // it) and has changed Robin's Early of 28 March to a Night, not yet committed.
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    let changed!: () => void;
+    const changing = new Promise<void>((resolve) => (changed = resolve));
+    const writer = t.dataSource.transaction(async (em) => {
+      await em.update(
+        AssignmentEntity,
+        { rosterPeriodId: period.id, staffMemberId: robin.id, date: '2030-03-28' },
+        { shiftTypeId: shifts.N.id },
+      );
+      changed();
+      await held;
+    });
+    await changing;
+    // A safety net only: a read that queued behind the writer would never end while it is held.
+    const queued = new Promise<'queued'>((resolve) => setTimeout(() => resolve('queued'), 20_000));
+    const during = await Promise.race([readFeed(url), queued]);
+    release();
+    await writer;
+    expect(during).not.toBe('queued');
+    const seen = (during as Awaited<ReturnType<typeof readFeed>>).events;
+    expect(seen.get(uid)).toMatchObject({
+      summary: before.get(uid)!.summary,
+      sequence: before.get(uid)!.sequence,
+    });
+    // Nothing changed for the feed, so nothing was written.
+    expect(await stored()).toEqual(row);
+
+    // Once committed, the next read records the change (one transaction) and shows it.
+    const after = (await readFeed(url)).events.get(uid)!;
+    expect(after).toMatchObject({
+      summary: 'Night, Ward 7 Acute Medicine',
+      sequence: before.get(uid)!.sequence + 1,
+    });
+    expect((await stored())[0].sequence).toBe(after.sequence);
   });
 
   it('leaves draft rosters out', async () => {

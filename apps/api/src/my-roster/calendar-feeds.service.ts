@@ -6,6 +6,7 @@ import { DataSource, type EntityManager } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { sha256 } from '../common/crypto';
 import { AppConfig } from '../config/app-config';
+import { ReadConnection } from '../database/read-connection';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UserEntity } from '../users/user.entity';
 import { CalendarFeedEntity, CalendarFeedEventEntity } from './calendar-feed.entity';
@@ -43,6 +44,10 @@ export function feedContent(s: PublishedShift): FeedEventContent {
  * gets SEQUENCE + 1, a shift that is gone is sent as STATUS:CANCELLED with SEQUENCE + 1. So swaps,
  * repairs and edits made anywhere in the API show up in the feed without calling this service; a
  * module that wants the table current at once may call {@link CalendarFeedsService.sync}.
+ *
+ * Calendar programs poll the feed; almost every read finds nothing changed. A read therefore runs
+ * on the read-only connection (it does not queue behind, or hold up, the writers) and takes a
+ * write transaction only when what the feed says really changes.
  */
 @Injectable()
 export class CalendarFeedsService {
@@ -52,6 +57,7 @@ export class CalendarFeedsService {
 
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly reads: ReadConnection,
     config: AppConfig,
   ) {
     if (!config.jwtSecret) throw new Error('The server secret is not resolved');
@@ -77,6 +83,8 @@ export class CalendarFeedsService {
 
   /** The caller's feed URL, creating the feed on first use. */
   async url(user: AuthUser, origin: string): Promise<CalendarFeedDto> {
+    const existing = await this.reads.manager.findOne(CalendarFeedEntity, { where: { userId: user.id } });
+    if (existing) return this.urlOf(existing, origin);
     return this.dataSource.transaction(async (em) => {
       const repo = em.getRepository(CalendarFeedEntity);
       const feed =
@@ -99,14 +107,16 @@ export class CalendarFeedsService {
   async render(token: string): Promise<string> {
     const notFound = new NotFoundException('No calendar feed at this address');
     if (!TOKEN_FORMAT.test(token)) throw notFound;
-    return this.dataSource.transaction(async (em) => {
-      const feed = await em.findOne(CalendarFeedEntity, { where: { tokenHash: sha256(token) } });
-      if (!feed) throw notFound;
-      const user = await em.findOne(UserEntity, { where: { id: feed.userId } });
-      if (!user || !user.active) throw notFound;
-      const events = await this.sync(feed.userId, em);
-      return writeCalendar(`Rotaplex roster (${user.displayName})`, events);
-    });
+    const read = this.reads.manager;
+    const feed = await read.findOne(CalendarFeedEntity, { where: { tokenHash: sha256(token) } });
+    if (!feed) throw notFound;
+    const user = await read.findOne(UserEntity, { where: { id: feed.userId } });
+    if (!user || !user.active) throw notFound;
+    const title = `Rotaplex roster (${user.displayName})`;
+    const seen = await this.compare(feed.userId, read);
+    if (seen.changed.length === 0) return writeCalendar(title, seen.events);
+    // Something changed since the last read: record it, comparing again inside the transaction.
+    return writeCalendar(title, await this.sync(feed.userId));
   }
 
   /**
@@ -115,6 +125,19 @@ export class CalendarFeedsService {
    */
   async sync(userId: string, em?: EntityManager): Promise<FeedEvent[]> {
     if (!em) return this.dataSource.transaction((tx) => this.sync(userId, tx));
+    const { events, changed } = await this.compare(userId, em);
+    if (changed.length) await em.getRepository(CalendarFeedEventEntity).save(changed, { chunk: 100 });
+    return events;
+  }
+
+  /**
+   * What the feed should list now, and the rows of calendar_feed_events that must change for it
+   * (new, changed or cancelled events, already updated in memory, not saved).
+   */
+  private async compare(
+    userId: string,
+    em: EntityManager,
+  ): Promise<{ events: FeedEvent[]; changed: CalendarFeedEventEntity[] }> {
     const records = await em.find(StaffMemberEntity, { where: { userId }, select: { id: true } });
     const shifts = await publishedShifts(em, { staffMemberIds: records.map((r) => r.id) });
     const current = new Map(shifts.map((s) => [feedUid(s.staffMemberId, s.date), feedContent(s)]));
@@ -155,9 +178,7 @@ export class CalendarFeedsService {
       Object.assign(last, { sequence: last.sequence + 1, cancelled: true, changedAt: now });
       changed.push(last);
     }
-    if (changed.length) await repo.save(changed, { chunk: 100 });
-
-    return [...known.values()]
+    const events = [...known.values()]
       .map((e) => ({
         uid: e.uid,
         sequence: e.sequence,
@@ -167,5 +188,6 @@ export class CalendarFeedsService {
         content: JSON.parse(e.content) as FeedEventContent,
       }))
       .sort((a, b) => a.content.start.localeCompare(b.content.start) || a.uid.localeCompare(b.uid));
+    return { events, changed };
   }
 }

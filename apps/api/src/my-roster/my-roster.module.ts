@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { ReadConnectionModule } from '../database/read-connection';
 import { CalendarFeedEntity, CalendarFeedEventEntity } from './calendar-feed.entity';
 import { CalendarFeedsController } from './calendar-feeds.controller';
 import { CalendarFeedsService } from './calendar-feeds.service';
@@ -8,7 +9,7 @@ import { MyRosterService } from './my-roster.service';
 
 /** My roster (published shifts of me and my units) and the personal iCalendar feed. */
 @Module({
-  imports: [TypeOrmModule.forFeature([CalendarFeedEntity, CalendarFeedEventEntity])],
+  imports: [TypeOrmModule.forFeature([CalendarFeedEntity, CalendarFeedEventEntity]), ReadConnectionModule],
   controllers: [MyRosterController, CalendarFeedsController],
   providers: [MyRosterService, CalendarFeedsService],
   exports: [CalendarFeedsService],
