@@ -1,4 +1,4 @@
-import { Logger, ValidationPipe } from '@nestjs/common';
+import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { type NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, type OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
@@ -10,6 +10,8 @@ import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AppModule } from './app.module';
+import { useBodyLimits } from './common/http/body-limits';
+import { AppValidationPipe } from './common/pipes/app-validation.pipe';
 import { AppConfig } from './config/app-config';
 
 export interface CreateAppOptions {
@@ -27,6 +29,8 @@ export async function createApp(
     bufferLogs: false,
     // Errors reach the caller (main exits with a message; tests fail) instead of exiting the process.
     abortOnError: false,
+    // configureApp installs the JSON parser with its own size, depth and content-type checks.
+    bodyParser: false,
   });
   configureApp(app, config);
   await app.init();
@@ -36,15 +40,7 @@ export async function createApp(
 /** Everything main and the tests share: prefix, validation, security headers, cookies, OpenAPI, web app. */
 export function configureApp(app: NestExpressApplication, config: AppConfig): OpenAPIObject {
   app.setGlobalPrefix(API_PREFIX.replace(/^\//, ''));
-  app.useGlobalPipes(
-    new ValidationPipe({
-      whitelist: true,
-      forbidNonWhitelisted: true,
-      transform: true,
-      // Messages name the field first ("email must be an e-mail address").
-      validationError: { target: false, value: false },
-    }),
-  );
+  app.useGlobalPipes(new AppValidationPipe());
   const https = config.publicUrl?.startsWith('https:') ?? false;
   app.use(
     helmet({
@@ -86,6 +82,7 @@ export function configureApp(app: NestExpressApplication, config: AppConfig): Op
       .addCookieAuth(REFRESH_COOKIE)
       .build(),
   );
+  useBodyLimits(app, API_PREFIX, document);
   SwaggerModule.setup(`${API_PREFIX.replace(/^\//, '')}/docs`, app, document, {
     jsonDocumentUrl: `${API_PREFIX.replace(/^\//, '')}/docs-json`,
     customSiteTitle: 'Rotaplex API',
