@@ -1,4 +1,4 @@
-import { Body, Controller, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post, Req, Res, UnauthorizedException, UseGuards } from '@nestjs/common';
 import {
   ApiAcceptedResponse,
   ApiBadRequestResponse,
@@ -17,6 +17,7 @@ import { ApiErrorResponse } from '../common/api-error.dto';
 import { AuthThrottlerGuard } from './auth-throttler.guard';
 import { TokenResponseDto } from './dto/token-response.dto';
 import { AuthService, type SessionTokens } from './auth.service';
+import { SignInAddressLimiter } from './sign-in-address-limiter';
 import {
   AcceptInvitationDto,
   ConfirmPasswordResetDto,
@@ -33,6 +34,7 @@ export class AuthController {
   constructor(
     private readonly auth: AuthService,
     private readonly config: AppConfig,
+    private readonly addressLimiter: SignInAddressLimiter,
   ) {}
 
   @Post('login')
@@ -46,10 +48,22 @@ export class AuthController {
   })
   @ApiTooManyRequestsResponse({
     type: ApiErrorResponse,
-    description: 'Too many attempts for this e-mail from this address',
+    description:
+      'Too many attempts for this e-mail (from this address or from any), or too many failed sign-ins from this address; Retry-After says when to try again',
   })
-  async login(@Body() body: LoginDto, @Res({ passthrough: true }) res: Response): Promise<TokenResponse> {
-    return this.answer(res, await this.auth.login(body.email, body.password));
+  async login(
+    @Body() body: LoginDto,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<TokenResponse> {
+    const address = req.ip ?? 'unknown';
+    this.addressLimiter.assertAllowed(address, res);
+    try {
+      return this.answer(res, await this.auth.login(body.email, body.password));
+    } catch (err) {
+      if (err instanceof UnauthorizedException) this.addressLimiter.recordFailure(address);
+      throw err;
+    }
   }
 
   @Post('refresh')

@@ -8,11 +8,12 @@ import { MailModule } from '../mail/mail.module';
 import { OrganisationModule } from '../organisation/organisation.module';
 import { UserEntity } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
-import { AuthThrottlerGuard } from './auth-throttler.guard';
+import { authThrottlers, AuthThrottlerGuard } from './auth-throttler.guard';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JWT_AUDIENCE, JWT_ISSUER, JwtStrategy } from './jwt.strategy';
 import { MeController } from './me.controller';
+import { SignInAddressLimiter } from './sign-in-address-limiter';
 import { TokensModule } from './tokens.module';
 
 @Module({
@@ -34,7 +35,7 @@ import { TokensModule } from './tokens.module';
     ThrottlerModule.forRootAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => ({
-        throttlers: [{ name: 'auth', ttl: 60_000, limit: config.loginRateLimit }],
+        throttlers: authThrottlers(config.loginRateLimit),
         errorMessage: 'Too many attempts: wait a minute and try again',
       }),
     }),
@@ -44,6 +45,6 @@ import { TokensModule } from './tokens.module';
     MailModule,
   ],
   controllers: [AuthController, MeController],
-  providers: [AuthService, JwtStrategy, AuthThrottlerGuard],
+  providers: [AuthService, JwtStrategy, AuthThrottlerGuard, SignInAddressLimiter],
 })
 export class AuthModule {}
