@@ -1,5 +1,7 @@
 import {
+  MAX_PAGE_SIZE,
   type OpenShiftDto,
+  type Page,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
   type ShiftTypeDto,
@@ -81,15 +83,22 @@ describe('open shifts', () => {
         date: day(d),
       })
     )?.shiftTypeId ?? null;
-  const list = async (token: string) =>
-    (
-      await t
-        .http()
-        .get(api(S.openShifts))
-        .query({ rosterPeriodId: period.id })
-        .set(bearer(token))
-        .expect(200)
-    ).body as OpenShiftDto[];
+  const page = (token: string, query: Record<string, unknown>) =>
+    t
+      .http()
+      .get(api(S.openShifts))
+      .query({ rosterPeriodId: period.id, ...query })
+      .set(bearer(token));
+  /** Every open shift of the period the caller sees, read page by page. */
+  const list = async (token: string) => {
+    const all: OpenShiftDto[] = [];
+    for (let n = 1; ; n++) {
+      const body = (await page(token, { page: n, pageSize: MAX_PAGE_SIZE }).expect(200))
+        .body as Page<OpenShiftDto>;
+      all.push(...body.items);
+      if (body.items.length === 0 || all.length >= body.total) return all;
+    }
+  };
   const has = (items: OpenShiftDto[], d: number, code: string, skillCode: string) =>
     items.some((o) => o.date === day(d) && o.shiftCode === code && o.skillCode === skillCode);
   const claim = (who: Who, d: number, code: string, skillCode: string) =>
@@ -199,5 +208,51 @@ describe('open shifts', () => {
     expect(results.find((r) => r.status === 409)!.body.message).toMatch(/filled meanwhile/);
     const filled = [await cell('b', 4), await cell('c', 4)].filter((x) => x !== null);
     expect(filled).toEqual([shift['N'].id]);
+  });
+  it('pages by date, then shift and skill; page and pageSize are bounded', async () => {
+    const all = await list(manager);
+    expect(all.length).toBeGreaterThan(10);
+    const keys = all.map((o) => `${o.date}|${o.unitId}|${o.shiftCode}|${o.skillCode ?? ''}`);
+    expect(keys).toEqual([...keys].sort());
+    const first = (await page(manager, { pageSize: 5 }).expect(200)).body as Page<OpenShiftDto>;
+    const second = (await page(manager, { page: 2, pageSize: 5 }).expect(200)).body as Page<OpenShiftDto>;
+    expect([first.total, first.page, first.pageSize, second.page]).toEqual([all.length, 1, 5, 2]);
+    expect([...first.items, ...second.items]).toEqual(all.slice(0, 10));
+    const defaults = (await page(manager, {}).expect(200)).body as Page<OpenShiftDto>;
+    expect([defaults.items.length, defaults.pageSize]).toEqual([Math.min(20, all.length), 20]);
+    for (const [query, field] of [
+      [{ page: 0 }, 'page'],
+      [{ page: 'last' }, 'page'],
+      [{ pageSize: 0 }, 'pageSize'],
+      [{ pageSize: MAX_PAGE_SIZE + 1 }, 'pageSize'],
+      [{ order: 'desc' }, 'order'],
+    ] as const) {
+      const res = await page(manager, query).expect(400);
+      expect(JSON.stringify(res.body.message)).toContain(field);
+    }
+  });
+
+  it('the list is kept until the next write: a shift given or taken away shows at once', async () => {
+    const late = (items: OpenShiftDto[]) =>
+      items.find((o) => o.date === day(6) && o.shiftCode === 'L' && o.skillCode === 'RN');
+    const before = late(await list(manager))!;
+    expect(before.short).toBeGreaterThan(0);
+    expect(late(await list(tokens.b))).toBeDefined(); // b may claim it
+    expect(late(await list(manager))).toEqual(before); // read again, nothing written
+
+    // A write through an entity (as every cell change is): b now works that Late.
+    await setCell('b', 6, 'L');
+    const after = late(await list(manager));
+    if (before.short === 1) expect(after).toBeUndefined();
+    else expect(after?.short).toBe(before.short - 1);
+    expect((await list(tokens.b)).some((o) => o.date === day(6))).toBe(false); // b works that day
+
+    await t.dataSource.manager.delete(AssignmentEntity, {
+      rosterPeriodId: period.id,
+      staffMemberId: staffId.b,
+      date: day(6),
+    });
+    expect(late(await list(manager))).toEqual(before);
+    expect(late(await list(tokens.b))).toBeDefined();
   });
 });

@@ -1,6 +1,6 @@
 import { type RosterProblem } from '@rotaplex/roster-model';
 import { type RosterInput } from '../roster-input/roster-input.service';
-import { evaluateChanges, staleCells } from './swap-evaluation';
+import { ClaimCheck, evaluateChanges, staleCells } from './swap-evaluation';
 
 /**
  * The swap findings with the real checker on a small invented roster. Rules: 11 h daily rest
@@ -46,8 +46,8 @@ const input = {
     { id: 'b', name: 'B' },
   ],
   shiftTypes: [
-    { id: 'E', code: 'E' },
-    { id: 'L', code: 'L' },
+    { id: 'E', code: 'E', name: 'Early', start: '07:00', end: '15:00' },
+    { id: 'L', code: 'L', name: 'Late', start: '14:30', end: '22:30' },
   ],
 } as unknown as RosterInput;
 const row = (staffMemberId: string, day: number, shiftTypeId: string) => ({
@@ -101,5 +101,50 @@ describe('staleCells', () => {
         { staffMemberId: 'b', date: DATES[1], before: null, after: 'E' },
       ]).map((c) => c.staffMemberId + c.date),
     ).toEqual(['b' + DATES[0]]);
+  });
+});
+
+describe('ClaimCheck', () => {
+  it('answers as evaluateChanges does for every free cell, shift and person of a roster', () => {
+    // A: a Late on day 0 (rest), seven days in a row from day 1 (already one over the limit);
+    // B: an Early on day 2 and a Late on day 5.
+    const rows = [
+      row('a', 0, 'L'),
+      ...[1, 2, 3, 4, 5, 6, 7].map((d) => row('a', d, 'E')),
+      row('b', 2, 'E'),
+      row('b', 5, 'L'),
+    ];
+    const check = new ClaimCheck(input, rows);
+    let blocked = 0;
+    let allowed = 0;
+    for (const person of ['a', 'b']) {
+      for (const date of DATES) {
+        for (const shift of ['E', 'L']) {
+          const before = rows.find((r) => r.staffMemberId === person && r.date === date)?.shiftTypeId ?? null;
+          const expected = evaluateChanges(input, rows, [
+            { staffMemberId: person, date, before, after: shift },
+          ]).blocked;
+          expect([person, date, shift, check.blocked(person, date, shift)]).toEqual([
+            person,
+            date,
+            shift,
+            expected,
+          ]);
+          if (expected) blocked++;
+          else allowed++;
+        }
+      }
+    }
+    // Both answers occur, so the comparison means something.
+    expect(blocked).toBeGreaterThan(0);
+    expect(allowed).toBeGreaterThan(0);
+  });
+
+  it('blocks a person, day or shift the roster does not know', () => {
+    const check = new ClaimCheck(input, []);
+    expect(check.blocked('nobody', DATES[0], 'E')).toBe(true);
+    expect(check.blocked('a', '2031-01-01', 'E')).toBe(true);
+    expect(check.blocked('a', DATES[0], 'X')).toBe(true);
+    expect(check.blocked('a', DATES[0], 'E')).toBe(false);
   });
 });

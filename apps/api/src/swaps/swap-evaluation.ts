@@ -1,5 +1,13 @@
 import { type SwapCellChangeDto, type SwapPreviewDto } from '@rotaplex/contracts';
-import { type CheckResult, checkRoster, type Roster } from '@rotaplex/roster-model';
+import {
+  type CheckResult,
+  checkRoster,
+  type Grid,
+  ProblemIndex,
+  type Roster,
+  RULES,
+  type Violation,
+} from '@rotaplex/roster-model';
 import { type AssignmentEntity } from '../assignments/assignment.entity';
 import { checkDto, rosterOf } from '../assignments/assignments.service';
 import { type RosterInput } from '../roster-input/roster-input.service';
@@ -82,4 +90,49 @@ export function changeDto(
 export function staleCells(rows: Cell[], changes: StoredCellChange[]): StoredCellChange[] {
   const current = new Map(rows.map((r) => [`${r.staffMemberId}|${r.date}`, r.shiftTypeId]));
   return changes.filter((c) => (current.get(`${c.staffMemberId}|${c.date}`) ?? null) !== c.before);
+}
+
+/**
+ * `evaluateChanges(...).blocked` for one person taking one more shift, asked of that person's row
+ * alone: every hard rule is about one person at a time, so no one else's violations can change.
+ * Built once per roster (one ProblemIndex, one grid) and asked many times, as the open-shift list
+ * does for every open need and person.
+ */
+export class ClaimCheck {
+  private readonly index: ProblemIndex;
+  private readonly grid: Grid;
+  private readonly before = new Map<number, Map<string, number>>();
+
+  constructor(
+    private readonly input: RosterInput,
+    rows: Cell[],
+  ) {
+    this.index = new ProblemIndex(input.problem);
+    this.grid = this.index.toGrid(rosterOf(input, rows)).grid;
+  }
+
+  /** Whether the person working `shiftTypeId` on `date` (instead of their current cell) breaks a rule anew. */
+  blocked(staffMemberId: string, date: string, shiftTypeId: string): boolean {
+    const p = this.index.personIndex.get(staffMemberId);
+    const d = this.input.dates.indexOf(date);
+    const s = this.index.shiftIndex.get(shiftTypeId);
+    if (p === undefined || d < 0 || s === undefined) return true;
+    let had = this.before.get(p);
+    if (!had) {
+      had = new Map<string, number>();
+      for (const v of this.violations(p, this.grid[p]))
+        had.set(key(v), Math.max(had.get(key(v)) ?? 0, v.amount ?? 1));
+      this.before.set(p, had);
+    }
+    const row = [...this.grid[p]];
+    row[d] = s;
+    return this.violations(p, row).some((v) => {
+      const was = had.get(key(v));
+      return was === undefined || (v.amount ?? 1) > was;
+    });
+  }
+
+  private violations(p: number, row: readonly number[]): Violation[] {
+    return RULES.flatMap((rule) => rule.checkPerson(this.index, p, row));
+  }
 }

@@ -1,7 +1,8 @@
-import { queryOptions } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import {
   type ClaimOpenShiftDto,
   type OpenShiftDto,
+  type Page,
   PLANNING_ROUTES,
   type ProposeSwapDto,
   type RosterPeriodDto,
@@ -48,10 +49,16 @@ export const swapOptionsQuery = (periodId: string) =>
     enabled: periodId !== '',
   });
 
-export const openShiftsQuery = () =>
+/** Open shifts on this many to a page (the server allows 1 to MAX_PAGE_SIZE). */
+export const OPEN_SHIFTS_PAGE_SIZE = 20;
+
+/** One page of the open shifts the caller sees, by date. */
+export const openShiftsQuery = (page = 1) =>
   queryOptions({
-    queryKey: swapKeys.openShifts(),
-    queryFn: ({ signal }) => api.get<OpenShiftDto[]>(SWAP_ROUTES.openShifts, undefined, signal),
+    queryKey: [...swapKeys.openShifts(), page] as const,
+    queryFn: ({ signal }) =>
+      api.get<Page<OpenShiftDto>>(SWAP_ROUTES.openShifts, { page, pageSize: OPEN_SHIFTS_PAGE_SIZE }, signal),
+    placeholderData: keepPreviousData,
   });
 
 /** What an e-mailed link decides (no sign-in; reading it changes nothing). */
