@@ -20,6 +20,8 @@ interface Operation {
   props: Record<string, boolean>;
   ownBodyType: boolean;
   paged: boolean;
+  /** Names of the documented query parameters. */
+  query: string[];
 }
 interface SchemaObject {
   $ref?: string;
@@ -69,6 +71,7 @@ function operations(doc: OpenApiDoc): Operation[] {
         props: propsOf(content['application/json']?.schema),
         ownBodyType: Object.keys(content).some((t) => t !== 'application/json'),
         paged: (op.parameters ?? []).some((p) => p.in === 'query' && p.name === 'page'),
+        query: (op.parameters ?? []).filter((p) => p.in === 'query').map((p) => p.name),
       });
     }
   }
@@ -173,6 +176,32 @@ describe('bad input is a 4xx with a clear message, and changes nothing', () => {
       }
       expect(failures).toEqual([]);
     });
+
+    it('answers wrong-typed body fields and query parameters with a 4xx, never a 5xx', async () => {
+      const WRONG: unknown[] = [{}, 1e308, 'x'.repeat(5000), true, [{}]];
+      const failures: string[] = [];
+      let probed = 0;
+      for (const op of ops) {
+        for (const field of Object.keys(op.props)) {
+          for (const value of WRONG) {
+            const res = await probe(op, (r) => r.send({ [field]: value }));
+            probed++;
+            if (res.status >= 500)
+              failures.push(`${op.key} ${field}: ${JSON.stringify(value)} → ${res.status}`);
+          }
+        }
+        for (const name of op.query) {
+          for (const value of [HUGE_PAGE, '-1', 'x', '1e308', ['a', 'b']]) {
+            const res = await probe(op, (r) => r.query({ [name]: value }));
+            probed++;
+            if (res.status >= 500)
+              failures.push(`${op.key} ?${name}=${JSON.stringify(value)} → ${res.status}`);
+          }
+        }
+      }
+      expect(failures).toEqual([]);
+      expect(probed).toBeGreaterThan(500);
+    }, 120_000);
 
     it('answers a page number beyond the last possible one with 400 on paged lists, and no 5xx anywhere', async () => {
       const failures: string[] = [];
