@@ -8,9 +8,8 @@ import {
   type RosterViolationDto,
 } from '@rotaplex/contracts';
 import { OVERRIDE_REASON_MAX_LENGTH } from '@rotaplex/contracts';
-import { IsOptional, IsString, IsUUID, Matches, MaxLength, ValidateIf } from 'class-validator';
-
-const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+import { IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
+import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 
 export class PinCellDto implements PinCellRequest {
   @ApiProperty({ format: 'uuid' })
@@ -18,7 +17,7 @@ export class PinCellDto implements PinCellRequest {
   staffMemberId!: string;
 
   @ApiProperty({ example: '2027-01-04', description: 'A day of the period, YYYY-MM-DD' })
-  @Matches(DATE, { message: 'date must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   date!: string;
 }
 

@@ -14,12 +14,12 @@ import {
   IsInt,
   IsOptional,
   IsUUID,
-  Matches,
   Max,
   Min,
   ValidateIf,
   ValidateNested,
 } from 'class-validator';
+import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
 
@@ -65,7 +65,7 @@ export class ReplaceCoverPatternDto implements ReplaceCoverPatternRequest {
 
 export class CreateCoverOverrideDto extends NeedFieldsDto implements CreateCoverOverrideRequest {
   @ApiProperty({ example: '2026-12-25' })
-  @Matches(DATE, { message: 'date must be a date YYYY-MM-DD' })
+  @IsIsoDate()
   date!: string;
 }
 
