@@ -22,10 +22,12 @@ interface Operation {
   paged: boolean;
   /** Names of the documented query parameters. */
   query: string[];
+  /** Body fields and query parameters documented as dates (format date or a YYYY-MM-DD example). */
+  dates: { name: string; in: 'body' | 'query' }[];
 }
 interface SchemaObject {
   $ref?: string;
-  properties?: Record<string, SchemaObject & { nullable?: boolean }>;
+  properties?: Record<string, SchemaObject & { nullable?: boolean; format?: string; example?: unknown }>;
   allOf?: SchemaObject[];
 }
 interface OpenApiDoc {
@@ -34,7 +36,12 @@ interface OpenApiDoc {
     Record<
       string,
       {
-        parameters?: { name: string; in: string }[];
+        parameters?: {
+          name: string;
+          in: string;
+          example?: unknown;
+          schema?: { example?: unknown; format?: string };
+        }[];
         requestBody?: { content: Record<string, { schema?: SchemaObject }> };
       }
     >
@@ -58,6 +65,17 @@ function operations(doc: OpenApiDoc): Operation[] {
     );
     return Object.assign({}, ...(schema?.allOf ?? []).map(propsOf), own) as Record<string, boolean>;
   };
+  const isDate = (d: { format?: string; example?: unknown } | undefined) =>
+    d?.format === 'date' || (typeof d?.example === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(d.example));
+  const bodyDates = (s: SchemaObject | undefined): string[] => {
+    const schema = resolve(s);
+    return [
+      ...(schema?.allOf ?? []).flatMap(bodyDates),
+      ...Object.entries(schema?.properties ?? {})
+        .filter(([, v]) => isDate(v))
+        .map(([k]) => k),
+    ];
+  };
   const out: Operation[] = [];
   for (const [path, ops] of Object.entries(doc.paths)) {
     if (path.startsWith('/api/docs')) continue;
@@ -72,6 +90,12 @@ function operations(doc: OpenApiDoc): Operation[] {
         ownBodyType: Object.keys(content).some((t) => t !== 'application/json'),
         paged: (op.parameters ?? []).some((p) => p.in === 'query' && p.name === 'page'),
         query: (op.parameters ?? []).filter((p) => p.in === 'query').map((p) => p.name),
+        dates: [
+          ...bodyDates(content['application/json']?.schema).map((name) => ({ name, in: 'body' as const })),
+          ...(op.parameters ?? [])
+            .filter((p) => p.in === 'query' && (isDate(p) || isDate(p.schema)))
+            .map((p) => ({ name: p.name, in: 'query' as const })),
+        ],
       });
     }
   }
@@ -202,6 +226,33 @@ describe('bad input is a 4xx with a clear message, and changes nothing', () => {
       expect(failures).toEqual([]);
       expect(probed).toBeGreaterThan(500);
     }, 120_000);
+
+    it('answers an impossible date (2026-02-30) with 400 naming the field, in every body and query', async () => {
+      const failures: string[] = [];
+      const probed: string[] = [];
+      for (const op of ops) {
+        for (const d of op.dates) {
+          const res = await probe(op, (r) =>
+            d.in === 'body' ? r.send({ [d.name]: '2026-02-30' }) : r.query({ [d.name]: '2026-02-30' }),
+          );
+          probed.push(`${op.key} ${d.name}`);
+          if (
+            res.status !== 400 ||
+            !JSON.stringify(res.body.message).includes(`${d.name} must be a real calendar date`)
+          )
+            failures.push(`${op.key} ${d.name} → ${res.status} ${JSON.stringify(res.body.message)}`);
+        }
+      }
+      expect(failures).toEqual([]);
+      expect(probed).toEqual(
+        expect.arrayContaining([
+          'POST /api/open-shifts/claims date',
+          'PUT /api/roster-periods/:id/assignments/cell date',
+          'POST /api/leave endDate',
+          'GET /api/me/shifts from',
+        ]),
+      );
+    });
 
     it('answers a page number beyond the last possible one with 400 on paged lists, and no 5xx anywhere', async () => {
       const failures: string[] = [];
