@@ -250,7 +250,7 @@ function assertNoOverlap(input: RosterInput, roster: Roster, personId: string, d
     const rest = restMinutes(input.problem, first, a, second, b);
     if (rest >= 0) continue;
     throw new UnprocessableEntityException([
-      `${name}: ${a.name} (${a.code}) on ${input.dates[first]} ends at ${a.end}, after ${b.name} (${b.code}) ` +
+      `${name}: ${a.name} (${a.code}) on ${input.dates[first]} runs until ${a.end} and ${b.name} (${b.code}) ` +
         `on ${input.dates[second]} starts at ${b.start}: the shifts overlap by ${hoursAndMinutes(-rest)}. ` +
         'Nobody can work two shifts at once, so this edit is not saved; change or remove the other shift first.',
     ]);
