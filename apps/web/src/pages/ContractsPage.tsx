@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import {
+  Badge,
   Button,
   Menu,
   MenuItem,
@@ -14,7 +15,7 @@ import {
   TableRow,
 } from '@fluentui/react-components';
 import { AddRegular, DeleteRegular, DocumentBulletListRegular, EditRegular } from '@fluentui/react-icons';
-import type { ContractDto, ContractPresetDto } from '@rotaplex/contracts';
+import { type ContractDto, type ContractPresetDto, contractCautions } from '@rotaplex/contracts';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useCurrentUser } from '@/features/auth/hooks/useCurrentUser';
 import {
@@ -117,13 +118,27 @@ export function ContractsPage() {
               <TableBody>
                 {list.map((c) => {
                   const mayWrite = c.unitId !== null || isAdmin;
+                  const cautions = contractCautions(c);
                   return (
                     <TableRow key={c.id}>
-                      <TableCell>{c.name}</TableCell>
+                      <TableCell>
+                        {c.name}
+                        {cautions.length > 0 && (
+                          <>
+                            {' '}
+                            <Badge appearance="tint" color="warning" title={cautions.join(' ')}>
+                              Outside the presets
+                            </Badge>
+                          </>
+                        )}
+                      </TableCell>
                       <TableCell>
                         {c.unitId === null ? 'Whole organisation' : (unitName.get(c.unitId) ?? 'A unit')}
                       </TableCell>
-                      <TableCell className={styles.muted}>{describeRules(c)}</TableCell>
+                      <TableCell className={styles.muted}>
+                        {describeRules(c)}
+                        {cautions.length > 0 && ` ${cautions.join(' ')}`}
+                      </TableCell>
                       <TableCell>
                         <RowActions
                           name={c.name}

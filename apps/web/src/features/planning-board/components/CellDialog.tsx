@@ -10,11 +10,19 @@ import {
   Field,
   MessageBar,
   MessageBarBody,
+  MessageBarTitle,
   Select,
+  Textarea,
 } from '@fluentui/react-components';
 import { PinOffRegular, PinRegular } from '@fluentui/react-icons';
-import type { AssignmentCellDto, RosterViolationDto, ShiftTypeDto } from '@rotaplex/contracts';
-import { errorText } from '@/api/errors';
+import {
+  type AssignmentCellDto,
+  GUARD_RAIL_DEFERRAL,
+  OVERRIDE_REASON_MAX_LENGTH,
+  type RosterViolationDto,
+  type ShiftTypeDto,
+} from '@rotaplex/contracts';
+import { ApiRequestError, errorText } from '@/api/errors';
 import { formatDay } from '../utils/days';
 import { ViolationList } from './ViolationsPanel';
 
@@ -25,7 +33,8 @@ export interface CellDialogProps {
   shiftTypes: ShiftTypeDto[];
   /** The checker's findings for this person that include this date. */
   violations: RosterViolationDto[];
-  onSave: (shiftTypeId: string | null) => Promise<unknown>;
+  /** Saves the cell; `overrideReason` keeps an edit that breaks a rest or working-time rule. */
+  onSave: (shiftTypeId: string | null, overrideReason?: string) => Promise<unknown>;
   onPin: (pinned: boolean) => Promise<unknown>;
   onClose: () => void;
   /** Shows the cell without Save or Pin (a published period, or while the solver works), saying why. */
@@ -34,7 +43,11 @@ export interface CellDialogProps {
 
 const OFF = '';
 
-/** Changes one cell of the board; the checker's findings for the cell show at once after a change. */
+/**
+ * Changes one cell of the board; the checker's findings for the cell show at once after a change.
+ * An edit the server refuses because it breaks a rest or working-time rule shows what it breaks and
+ * the caution, and can be kept with a written reason (recorded in the audit trail).
+ */
 export function CellDialog({
   name,
   date,
@@ -49,11 +62,23 @@ export function CellDialog({
   const [value, setValue] = useState(cell.shiftTypeId ?? OFF);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  /** The rules an edit would break, as the server words them, while it waits for a reason. */
+  const [breaks, setBreaks] = useState<string[] | null>(null);
+  const [reason, setReason] = useState('');
   const run = (action: () => Promise<unknown>) => {
     setBusy(true);
     setError(null);
     action()
-      .catch((e: unknown) => setError(errorText(e)))
+      .then(() => setBreaks(null))
+      .catch((e: unknown) => {
+        if (
+          e instanceof ApiRequestError &&
+          e.status === 422 &&
+          e.messages.some((m) => /overrideReason/.test(m))
+        ) {
+          setBreaks(e.messages.filter((m) => !/overrideReason/.test(m)));
+        } else setError(errorText(e));
+      })
       .finally(() => setBusy(false));
   };
   const changed = value !== (cell.shiftTypeId ?? OFF);
@@ -68,7 +93,10 @@ export function CellDialog({
             <Field label="Shift">
               <Select
                 value={value}
-                onChange={(_, d) => setValue(d.value)}
+                onChange={(_, d) => {
+                  setValue(d.value);
+                  setBreaks(null);
+                }}
                 disabled={busy || readOnly !== null}
               >
                 <option value={OFF}>Day off</option>
@@ -94,6 +122,30 @@ export function CellDialog({
                 <MessageBarBody>{error}</MessageBarBody>
               </MessageBar>
             )}
+            {breaks && (
+              <MessageBar intent="warning" layout="multiline">
+                <MessageBarBody>
+                  <MessageBarTitle>This edit breaks a rule of the contract</MessageBarTitle>
+                  <ul aria-label="Rules this edit breaks">
+                    {breaks.map((m) => (
+                      <li key={m}>{m}</li>
+                    ))}
+                  </ul>
+                  Short rest and long runs of work raise the risk of fatigue and mistakes.{' '}
+                  {GUARD_RAIL_DEFERRAL} To keep the edit, say why; the reason goes into the audit trail.
+                </MessageBarBody>
+              </MessageBar>
+            )}
+            {breaks && (
+              <Field label="Reason for keeping this edit" required>
+                <Textarea
+                  value={reason}
+                  maxLength={OVERRIDE_REASON_MAX_LENGTH}
+                  onChange={(_, d) => setReason(d.value)}
+                  disabled={busy}
+                />
+              </Field>
+            )}
             {violations.length > 0 ? (
               <ViolationList violations={violations} label="Rule findings for this cell" />
             ) : (
@@ -110,13 +162,23 @@ export function CellDialog({
                 >
                   {cell.pinned ? 'Unpin' : 'Pin'}
                 </Button>
-                <Button
-                  appearance="primary"
-                  disabled={busy || !changed}
-                  onClick={() => run(() => onSave(value || null))}
-                >
-                  Save shift
-                </Button>
+                {breaks ? (
+                  <Button
+                    appearance="primary"
+                    disabled={busy || reason.trim() === ''}
+                    onClick={() => run(() => onSave(value || null, reason.trim()))}
+                  >
+                    Keep with this reason
+                  </Button>
+                ) : (
+                  <Button
+                    appearance="primary"
+                    disabled={busy || !changed}
+                    onClick={() => run(() => onSave(value || null))}
+                  >
+                    Save shift
+                  </Button>
+                )}
               </>
             )}
             <Button onClick={onClose}>Close</Button>

@@ -251,9 +251,14 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
           violations={grid.data.check.violations.filter(
             (v) => v.staffMemberId === open.staffMemberId && v.dates.includes(open.date),
           )}
-          onSave={async (shiftTypeId) =>
+          onSave={async (shiftTypeId, overrideReason) =>
             store(
-              await editCell(period.id, { staffMemberId: open.staffMemberId, date: open.date, shiftTypeId }),
+              await editCell(period.id, {
+                staffMemberId: open.staffMemberId,
+                date: open.date,
+                shiftTypeId,
+                ...(overrideReason ? { overrideReason } : {}),
+              }),
             )
           }
           onPin={async (pinned) =>

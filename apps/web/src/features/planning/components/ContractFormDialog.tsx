@@ -16,6 +16,8 @@ import {
 } from '@fluentui/react-components';
 import {
   CONTRACT_PRESETS,
+  contractCautions,
+  GUARD_RAIL_DEFERRAL,
   type ContractDto,
   type ContractPresetDto,
   type ContractRules,
@@ -93,6 +95,7 @@ export function ContractFormDialog({
   const parsed = rulesFromInputs(inputs);
   const perTypeParsed = parsePerTypeLimits(perType);
   const loosened = loosenedRestRules(parsed.rules, baseline);
+  const outside = contractCautions(parsed.rules);
   const loosenedFields = new Set(loosened.map((r) => r.field));
   const baselineName = contract
     ? 'the saved rules'
@@ -209,6 +212,19 @@ export function ContractFormDialog({
                           ? 'the preset'
                           : 'the EU Working Time Directive preset'
                     }. Shorter rest and longer runs of work raise the risk of fatigue and error; check local law and agreements first.`}
+                  </MessageBarBody>
+                </MessageBar>
+              )}
+              {outside.length > 0 && (
+                <MessageBar intent="warning" layout="multiline">
+                  <MessageBarBody>
+                    <MessageBarTitle>Outside the working-time presets</MessageBarTitle>
+                    <ul aria-label="Limits outside the working-time presets">
+                      {outside.map((text) => (
+                        <li key={text}>{text}</li>
+                      ))}
+                    </ul>
+                    {GUARD_RAIL_DEFERRAL}
                   </MessageBarBody>
                 </MessageBar>
               )}

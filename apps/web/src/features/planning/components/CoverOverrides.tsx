@@ -74,7 +74,9 @@ export function CoverOverrides({ unitId, overrides, shiftTypes, skills }: CoverO
       }),
     onSuccess: async (saved) => {
       await queryClient.invalidateQueries({ queryKey: planningKeys.coverNeeds(unitId) });
-      notify(`Saved the need for ${saved.date}`);
+      // A minimum lowered to 0 on this date: say so, with the caution's own words.
+      if (saved.cautions?.length) notify(`Saved the need for ${saved.date}. ${saved.cautions[0]}`, 'warning');
+      else notify(`Saved the need for ${saved.date}`);
       setMin('');
       setTarget('');
     },

@@ -10,13 +10,21 @@ import {
   mergeClasses,
   MessageBar,
   MessageBarBody,
+  MessageBarTitle,
   Select,
   Spinner,
   Subtitle2,
   tokens,
 } from '@fluentui/react-components';
 import { AddRegular, CopyRegular, SaveRegular } from '@fluentui/react-icons';
-import { WEEKDAY_NAMES, type CoverNeedsDto, type ShiftTypeDto, type SkillDto } from '@rotaplex/contracts';
+import {
+  GUARD_RAIL_DEFERRAL,
+  loweredToZeroCautions,
+  WEEKDAY_NAMES,
+  type CoverNeedsDto,
+  type ShiftTypeDto,
+  type SkillDto,
+} from '@rotaplex/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
@@ -110,6 +118,18 @@ export function CoverPatternGrid({ unitId, needs, shiftTypes, skills }: CoverPat
   const skillById = new Map(skills.map((s) => [s.id, s]));
   const { rows, errors } = patternFromGrid(lines);
   const errorCount = Object.keys(errors).length;
+  // Minimums above 0 in the saved pattern that these edits set to 0 (or drop): shown before saving.
+  const lowered = dirty
+    ? loweredToZeroCautions(
+        needs.pattern.map((r) => ({ ...r, day: r.weekday })),
+        rows.map((r) => ({ ...r, day: r.weekday })),
+        (r) => {
+          const shift = shiftById.get(r.shiftTypeId);
+          const skill = r.skillId ? `, skill ${skillById.get(r.skillId)?.code ?? 'unknown'}` : '';
+          return `${shift ? `${shift.name} (${shift.code})` : 'A shift'} on ${WEEKDAY_NAMES[Number(r.day)]}${skill}`;
+        },
+      )
+    : [];
 
   const change = (next: CoverLine[]) => {
     setLines(next);
@@ -123,7 +143,12 @@ export function CoverPatternGrid({ unitId, needs, shiftTypes, skills }: CoverPat
       setLines(gridFromPattern(saved.pattern, order));
       setDirty(false);
       setShowErrors(false);
-      notify('Saved the weekly cover pattern');
+      notify(
+        saved.cautions?.length
+          ? 'Saved the weekly cover pattern: some shifts no longer have a minimum cover'
+          : 'Saved the weekly cover pattern',
+        saved.cautions?.length ? 'warning' : 'success',
+      );
     },
   });
 
@@ -305,6 +330,20 @@ export function CoverPatternGrid({ unitId, needs, shiftTypes, skills }: CoverPat
             `${errorCount} cell${errorCount === 1 ? ' needs' : 's need'} correcting before the pattern can be saved.`,
           ]}
         />
+      )}
+      {lowered.length > 0 && (
+        <MessageBar intent="warning" layout="multiline">
+          <MessageBarBody>
+            <MessageBarTitle>Minimum cover removed</MessageBarTitle>
+            <ul aria-label="Minimums lowered to 0">
+              {lowered.slice(0, 6).map((text) => (
+                <li key={text}>{text}</li>
+              ))}
+              {lowered.length > 6 && <li>and {lowered.length - 6} more.</li>}
+            </ul>
+            {GUARD_RAIL_DEFERRAL}
+          </MessageBarBody>
+        </MessageBar>
       )}
       <ErrorBanner error={save.error} />
       <div className={styles.actions}>

@@ -9,12 +9,21 @@ import {
   Field,
   Input,
   makeStyles,
+  MessageBar,
+  MessageBarBody,
+  MessageBarTitle,
   Radio,
   RadioGroup,
   Select,
   tokens,
 } from '@fluentui/react-components';
-import { SHIFT_COLOURS, type ShiftColour, type ShiftTypeDto } from '@rotaplex/contracts';
+import {
+  GUARD_RAIL_DEFERRAL,
+  SHIFT_COLOURS,
+  type ShiftColour,
+  shiftTypeCautions,
+  type ShiftTypeDto,
+} from '@rotaplex/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { formErrors } from '@/api/errors';
 import { ErrorBanner } from '@/ui/ErrorBanner';
@@ -154,6 +163,14 @@ export function ShiftTypeFormDialog({
                   {summary.crossesMidnight ? ', ends the next day' : ''}
                   {summary.nightByTimes ? '; counts as a night shift by its times' : ''}.
                 </Caption1>
+              )}
+              {summary && shiftTypeCautions({ start, end }).length > 0 && (
+                <MessageBar intent="warning" layout="multiline">
+                  <MessageBarBody>
+                    <MessageBarTitle>Long shift</MessageBarTitle>
+                    {shiftTypeCautions({ start, end }).join(' ')} {GUARD_RAIL_DEFERRAL}
+                  </MessageBarBody>
+                </MessageBar>
               )}
               <Field
                 label="Paid minutes"

@@ -2,6 +2,7 @@ import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import {
   type AuditEntryDto,
   type Page,
+  type PublishCheckDto,
   PUBLISHING_ROUTES,
   type PublishResultDto,
   type SolveRunStartedDto,
@@ -19,7 +20,18 @@ export const DEFAULT_AUDIT_PAGE: AuditPageParams = { page: 1, pageSize: 25 };
 export const publishingKeys = {
   audit: (periodId: string, params: AuditPageParams) => ['audit', periodId, params] as const,
   auditAll: (periodId: string) => ['audit', periodId] as const,
+  check: (periodId: string, version: number) => ['publish-check', periodId, version] as const,
 };
+
+/** What publishing the period would publish (shortfalls, findings, leave, cautions), always fresh. */
+export const publishCheckQuery = (periodId: string, version: number) =>
+  queryOptions({
+    queryKey: publishingKeys.check(periodId, version),
+    queryFn: ({ signal }) =>
+      api.get<PublishCheckDto>(PUBLISHING_ROUTES.publishCheck(periodId), undefined, signal),
+    staleTime: 0,
+    gcTime: 0,
+  });
 
 /** The audit trail of a period, newest first. */
 export const auditQuery = (periodId: string, params: AuditPageParams) =>
@@ -34,8 +46,15 @@ export const auditQuery = (periodId: string, params: AuditPageParams) =>
     placeholderData: keepPreviousData,
   });
 
-export const publishPeriod = (periodId: string, version: number) =>
-  api.post<PublishResultDto>(PUBLISHING_ROUTES.publish(periodId), { version });
+export const publishPeriod = (
+  periodId: string,
+  version: number,
+  acknowledgement: { reason: string } | null,
+) =>
+  api.post<PublishResultDto>(PUBLISHING_ROUTES.publish(periodId), {
+    version,
+    ...(acknowledgement ? { acknowledgeBelowMinimum: true, reason: acknowledgement.reason } : {}),
+  });
 
 export const repairPeriod = (periodId: string, timeLimitSeconds: number) =>
   api.post<SolveRunStartedDto>(PUBLISHING_ROUTES.repair(periodId), { timeLimitSeconds });

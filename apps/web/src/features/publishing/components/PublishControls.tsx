@@ -26,6 +26,7 @@ import { boardKeys } from '@/features/planning-board/api/board.queries';
 import { AppLink } from '@/ui/AppLink';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import { downloadExport, publishingKeys, publishPeriod, repairPeriod } from '../api/publishing.queries';
+import { PublishDialog } from './PublishDialog';
 
 const useStyles = makeStyles({
   bar: {
@@ -48,7 +49,8 @@ export interface PublishControlsProps {
 }
 
 /**
- * Publish a draft roster (after confirmation; everyone on it is e-mailed their own shifts), and on
+ * Publish a draft roster (after the publish check and confirmation; everyone on it is e-mailed their
+ * own shifts), and on
  * a published roster: the read-only notice, Repair (re-solve with the fewest changes), the audit
  * trail and the CSV export.
  */
@@ -75,7 +77,8 @@ export function PublishControls({ period, solveActive = false }: PublishControls
   );
 
   const publish = useMutation({
-    mutationFn: () => publishPeriod(period.id, period.version),
+    mutationFn: (acknowledgement: { reason: string } | null) =>
+      publishPeriod(period.id, period.version, acknowledgement),
     onSuccess: async (result) => {
       setConfirming(false);
       setMessage(
@@ -142,18 +145,15 @@ export function PublishControls({ period, solveActive = false }: PublishControls
             <MessageBarBody>{message}</MessageBarBody>
           </MessageBar>
         )}
-        <ConfirmDialog
-          open={confirming}
-          title="Publish this roster?"
-          confirmLabel="Publish"
-          pending={publish.isPending}
-          error={publish.error}
-          onConfirm={() => publish.mutate()}
-          onCancel={() => setConfirming(false)}
-        >
-          Everyone on the roster who has an e-mail address gets their own shifts by e-mail. After publishing,
-          the board is read-only: changes go through repair or a swap.
-        </ConfirmDialog>
+        {confirming && (
+          <PublishDialog
+            period={period}
+            pending={publish.isPending}
+            error={publish.error}
+            onPublish={(acknowledgement) => publish.mutate(acknowledgement)}
+            onCancel={() => setConfirming(false)}
+          />
+        )}
       </div>
     );
   }
