@@ -61,7 +61,12 @@ describe('my roster as a demo staff member', () => {
       });
     }
     const current = await apiCall<RosterPeriodDto>(token, 'GET', PLANNING_ROUTES.rosterPeriod(period.id));
-    await apiCall(token, 'POST', PUBLISHING_ROUTES.publish(period.id), { version: current.version });
+    await apiCall(token, 'POST', PUBLISHING_ROUTES.publish(period.id), {
+      version: current.version,
+      // A few shifts only: the rest of the week is below minimum cover, acknowledged.
+      acknowledgeBelowMinimum: true,
+      reason: 'A journey roster with only the shifts it needs',
+    });
 
     browser = await openBrowser();
     await signIn(browser.page, 'staff@example.com');

@@ -115,7 +115,35 @@ describe('planning set-up as the demo manager', () => {
     const row = page.getByRole('row').filter({ hasText: name });
     await row.waitFor();
     expect(await row.innerText()).toMatch(/11 h rest between shifts/);
+    expect(await row.getByText('Outside the presets').count()).toBe(0);
     await screenshot(page, 'planning-contracts');
+  });
+
+  // Issue 10, item 3: limits beyond the working-time presets are saved (local law and agreements
+  // decide) with a caution that names the risk, and the list marks the contract.
+  it('cautions on a contract with 2 h rest, 90 h a week and 21 days in a row, and marks it in the list', async () => {
+    const { page } = browser;
+    const name = `Stretch ${stamp}`;
+    await page.getByRole('button', { name: 'New from a preset' }).click();
+    await page.getByRole('menuitem', { name: 'EU Working Time Directive limits' }).click();
+    const dialog = page.getByRole('dialog', { name: 'New contract from a preset' });
+    await dialog.getByRole('textbox', { name: 'Rest between shifts (hours)' }).fill('2');
+    await dialog.getByRole('textbox', { name: 'Most paid hours a week' }).fill('90');
+    await dialog.getByRole('textbox', { name: 'Most working days in a row' }).fill('21');
+    const outside = dialog.getByRole('list', { name: 'Limits outside the working-time presets' });
+    await outside.getByText(/Rest between shifts of 2 h is less than the 11 h of the presets/).waitFor();
+    await outside.getByText(/Up to 90 h a week is more than the 48 h/).waitFor();
+    await outside.getByText(/Up to 21 working days in a row is more than the 6/).waitFor();
+    await dialog
+      .getByText(/Local law, collective agreements and professional staffing standards decide/)
+      .waitFor();
+    await dialog.getByRole('textbox', { name: 'Name' }).fill(name);
+    await screenshot(page, 'planning-contract-outside-presets');
+    await dialog.getByRole('button', { name: 'Create contract' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    const row = page.getByRole('row').filter({ hasText: name });
+    await row.getByText('Outside the presets').waitFor();
+    expect(await row.innerText()).toMatch(/fatigue/);
   });
 
   it('adds a person to the roster with a skill and a contract', async () => {

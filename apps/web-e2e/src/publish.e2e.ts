@@ -1,5 +1,10 @@
-import { PLANNING_ROUTES as P, type RosterPeriodDto } from '@rotaplex/contracts';
-import { apiCall, managerPeriod } from './support/api';
+import {
+  type CoverOverrideDto,
+  PLANNING_ROUTES as P,
+  type RosterPeriodDto,
+  type UnitDto,
+} from '@rotaplex/contracts';
+import { apiCall, managerPeriod, shiftIdsByCode } from './support/api';
 import {
   eventually,
   openBrowser,
@@ -14,21 +19,51 @@ import {
 // a confirmation, and the board becomes read-only; everyone on it is e-mailed their shifts through
 // the outbox, and the admin sees the messages arrive in the local mailbox. The week lies in the past
 // of its own (no overlap with other journeys' periods) and is archived at the end.
+// Issue 10, item 2: the publish dialog shows the publish check first. An empty week cannot be
+// published; the Monday Early of this week needs 40 people (a date override, more than the ward has),
+// so no roster meets it and publishing needs an acknowledgement with a written reason.
 describe('publishing a roster as the demo manager', () => {
   const START = '2024-09-02'; // a Monday
   const SUBJECT = 'Your roster for Ward 7 Acute Medicine, 2024-09-02 to 2024-09-08';
+  const REASON = 'Bank nurses booked for the Monday early; escalated to the site manager';
   let token: string;
   let period: RosterPeriodDto;
+  let ward: UnitDto;
+  let override: CoverOverrideDto | undefined;
   let browser: Session;
 
   beforeAll(async () => {
-    ({ token, period } = await managerPeriod(START));
+    ({ token, period, ward } = await managerPeriod(START));
+    const shift = await shiftIdsByCode(token, ward.id);
+    override = await apiCall<CoverOverrideDto>(token, 'POST', P.coverOverrides(ward.id), {
+      date: START,
+      shiftTypeId: shift.E,
+      skillId: null,
+      min: 40,
+      target: 40,
+    });
     browser = await openBrowser();
     await signIn(browser.page, 'manager@example.com');
   });
   afterAll(async () => {
     await browser?.close();
     if (period) await apiCall(token, 'POST', P.rosterPeriodArchive(period.id)).catch(() => undefined);
+    if (override)
+      await apiCall(token, 'DELETE', P.coverOverride(ward.id, override.id)).catch(() => undefined);
+  });
+
+  it('does not publish the empty week, and says why', async () => {
+    const { page } = browser;
+    await page.goto(`/planning/periods/${period.id}/board`);
+    await page.getByRole('heading', { name: /^Planning board: / }).waitFor();
+    await page.getByRole('button', { name: 'Publish' }).click();
+    const dialog = page.getByRole('alertdialog', { name: 'Publish this roster?' });
+    await dialog.getByText('This roster cannot be published').waitFor();
+    await dialog.getByText(/The roster has no shifts: there is nothing to publish/).waitFor();
+    expect(await dialog.getByRole('button', { name: /^Publish/ }).isDisabled()).toBe(true);
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect((await apiCall<RosterPeriodDto>(token, 'GET', P.rosterPeriod(period.id))).status).toBe('draft');
   });
 
   it('generates the week with a short time limit', async () => {
@@ -41,22 +76,55 @@ describe('publishing a roster as the demo manager', () => {
     expect(await page.getByRole('button', { name: 'Publish' }).isEnabled()).toBe(true);
   }, 150_000);
 
-  it('publishes after confirmation; the board is then read-only', async () => {
+  it('publishes after the publish check, an acknowledgement and a reason; the board is then read-only', async () => {
     const { page } = browser;
     await page.getByRole('button', { name: 'Publish' }).click();
     const dialog = page.getByRole('alertdialog', { name: 'Publish this roster?' });
     await dialog.waitFor();
     await dialog.getByText(/gets their own shifts by e-mail/).waitFor();
+    // The check lists the shifts below minimum cover, worst first; the Monday Early is one of them.
+    const short = dialog.getByRole('region', { name: 'Shifts below minimum cover' });
+    await short.getByRole('heading', { name: /^\d+ shifts? (is|are) below minimum cover$/ }).waitFor();
+    // Shifts with nobody of a required skill come first; the rest of a long list is one click away.
+    const showAll = short.getByRole('button', { name: /^Show all \d+$/ });
+    if (await showAll.count()) await showAll.click();
+    await short.getByText(/Mon 2 Sept?, Early \(E\): \d+ of 40 people/).waitFor();
+    await short.getByText(/ask for bank or agency staff, or escalate/).waitFor();
+    await dialog.getByText(/Local law, collective agreements/).waitFor();
+    const publish = dialog.getByRole('button', { name: 'Publish below minimum' });
+    expect(await publish.isDisabled()).toBe(true);
+    const acknowledge = dialog.getByRole('checkbox', { name: /I have read the shifts below minimum cover/ });
+    await acknowledge.check();
+    expect(await publish.isDisabled()).toBe(true); // still needs the reason
+    await dialog.getByRole('textbox', { name: /Reason \(kept in the audit trail\)/ }).fill(REASON);
+    expect(await publish.isDisabled()).toBe(false);
     expect(await unnamedControls(page)).toEqual([]);
-    await screenshot(page, 'publish-confirm');
+    // What the window shows: the top of the check, then the acknowledgement (desktop and 390 px).
+    const views = async (suffix: string) => {
+      await short.getByRole('heading').scrollIntoViewIfNeeded();
+      await screenshot(page, `publish-check${suffix}`, { fullPage: false });
+      await dialog
+        .getByRole('textbox', { name: /Reason \(kept in the audit trail\)/ })
+        .scrollIntoViewIfNeeded();
+      await screenshot(page, `publish-check-acknowledged${suffix}`, { fullPage: false });
+    };
+    await views('');
+    await page.setViewportSize({ width: 390, height: 844 });
+    await views('-390');
+    await page.setViewportSize({ width: 1360, height: 860 });
     // Cancel first: nothing happens.
     await dialog.getByRole('button', { name: 'Cancel' }).click();
     await dialog.waitFor({ state: 'detached' });
     await page.getByRole('button', { name: 'Publish' }).waitFor();
     expect((await apiCall<RosterPeriodDto>(token, 'GET', P.rosterPeriod(period.id))).status).toBe('draft');
 
+    // Again, this time through to the end: the acknowledgement and reason start empty.
     await page.getByRole('button', { name: 'Publish' }).click();
-    await dialog.getByRole('button', { name: 'Publish' }).click();
+    await short.getByRole('heading').waitFor();
+    expect(await publish.isDisabled()).toBe(true);
+    await acknowledge.check();
+    await dialog.getByRole('textbox', { name: /Reason \(kept in the audit trail\)/ }).fill(REASON);
+    await publish.click();
     await dialog.waitFor({ state: 'detached' });
     await page.getByText(/Read-only: change it through repair or a swap\./).waitFor();
     await page.getByText('Published: read-only').waitFor();
@@ -73,6 +141,7 @@ describe('publishing a roster as the demo manager', () => {
     const rows = page.getByRole('table', { name: 'Audit entries' }).getByRole('row');
     await rows
       .filter({ hasText: /Published the roster: \d+ shift/ })
+      .filter({ hasText: `Reason: ${REASON}` })
       .first()
       .waitFor();
     expect(await unnamedControls(page)).toEqual([]);

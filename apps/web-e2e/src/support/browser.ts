@@ -165,8 +165,15 @@ export async function unnamedControls(page: Page): Promise<string[]> {
   }
 }
 
-/** Saves a screenshot for people to look at (tmp/ at the repository root, git-ignored). */
-export async function screenshot(page: Page, name: string): Promise<void> {
+/**
+ * Saves a screenshot for people to look at (tmp/ at the repository root, git-ignored): the whole
+ * page, or with `{ fullPage: false }` what the window shows (a dialog over a long page).
+ */
+export async function screenshot(
+  page: Page,
+  name: string,
+  options: { fullPage?: boolean } = {},
+): Promise<void> {
   const dir = process.env.ROTAPLEX_E2E_SCREENSHOTS;
-  if (dir) await page.screenshot({ path: join(dir, `${name}.png`), fullPage: true });
+  if (dir) await page.screenshot({ path: join(dir, `${name}.png`), fullPage: options.fullPage ?? true });
 }
