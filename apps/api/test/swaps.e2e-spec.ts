@@ -1,5 +1,7 @@
 import {
+  MAX_PAGE_SIZE,
   type MailMessageDto,
+  type Page,
   type RosterPeriodDto,
   type ShiftTypeDto,
   type SwapLinkViewDto,
@@ -474,5 +476,64 @@ describe('swaps', () => {
     expect(twice.map((r) => r.status).sort()).toEqual([200, 409]);
     expect(await cell('a', 20)).toBe('E');
     expect(await cell('b', 20)).toBe('L');
+  });
+  it('lists a page at a time, newest first, with what waits for the caller; pages are bounded', async () => {
+    const accepted = await acceptedSwap(22);
+    await setCell('a', 24, 'E');
+    const offered = (
+      await propose('a', { kind: 'offer', myDate: day(24), colleagueStaffMemberId: staffId.c }).expect(201)
+    ).body as SwapRequestDto;
+    const page = (token: string, query: Record<string, unknown>) =>
+      t.http().get(api(S.swaps)).query(query).set(bearer(token));
+    const all = async (token: string, query: Record<string, unknown> = {}) => {
+      const items: SwapRequestDto[] = [];
+      for (let n = 1; ; n++) {
+        const body = (await page(token, { ...query, page: n, pageSize: 3 }).expect(200))
+          .body as Page<SwapRequestDto>;
+        items.push(...body.items);
+        if (body.items.length === 0 || items.length >= body.total) return items;
+      }
+    };
+
+    const managed = await all(manager);
+    const stored = (await t.dataSource.query(
+      `SELECT "id" FROM "swap_requests" WHERE "unitId" = ? ORDER BY "createdAt" DESC, "id" ASC`,
+      [period.unitId],
+    )) as { id: string }[];
+    expect(managed.map((r) => r.id)).toEqual(stored.map((r) => r.id));
+    const first = (await page(manager, { pageSize: 2 }).expect(200)).body as Page<SwapRequestDto>;
+    expect(first).toMatchObject({ total: stored.length, page: 1, pageSize: 2 });
+    expect(first.items.map((r) => r.id)).toEqual(stored.slice(0, 2).map((r) => r.id));
+    const defaults = (await page(manager, {}).expect(200)).body as Page<SwapRequestDto>;
+    expect([defaults.page, defaults.pageSize, defaults.items.length]).toEqual([
+      1,
+      20,
+      Math.min(20, stored.length),
+    ]);
+
+    // waitingForMe gives what has an answer other than cancel for the caller (the web app's rule).
+    for (const [token, expected] of [
+      [manager, accepted.id],
+      [tokens.c, offered.id],
+    ] as const) {
+      const everything = await all(token);
+      const waiting = await all(token, { waitingForMe: true });
+      expect(waiting.map((r) => r.id)).toEqual(
+        everything.filter((r) => r.actions.some((a) => a !== 'cancel')).map((r) => r.id),
+      );
+      expect(waiting.map((r) => r.id)).toContain(expected);
+    }
+    expect(await all(tokens.a, { waitingForMe: true })).toEqual([]); // a proposed; a waits for no one
+
+    for (const [query, field] of [
+      [{ page: 0 }, 'page'],
+      [{ pageSize: 0 }, 'pageSize'],
+      [{ pageSize: MAX_PAGE_SIZE + 1 }, 'pageSize'],
+      [{ waitingForMe: 'yes' }, 'waitingForMe'],
+      [{ status: 'open' }, 'status'],
+    ] as const) {
+      const res = await page(manager, query).expect(400);
+      expect(JSON.stringify(res.body.message)).toContain(field);
+    }
   });
 });

@@ -7,6 +7,7 @@ import {
   ApiUnprocessableEntityResponse,
 } from '@nestjs/swagger';
 import {
+  type Page,
   type SwapLinkViewDto,
   type SwapOptionsDto,
   type SwapPreviewDto,
@@ -34,9 +35,12 @@ export class SwapsController {
 
   @Get()
   @Authenticated()
-  @ApiOkResponse({ description: 'Staff: requests they are part of; managers: requests of their units' })
-  list(@CurrentUser() user: AuthUser, @Query() query: SwapListQuery): Promise<SwapRequestDto[]> {
-    return this.swaps.list(user, query.status);
+  @ApiOkResponse({
+    description:
+      'A page of { items, total, page, pageSize }, newest first. Staff: requests they are part of; managers: requests of their units',
+  })
+  list(@CurrentUser() user: AuthUser, @Query() query: SwapListQuery): Promise<Page<SwapRequestDto>> {
+    return this.swaps.list(user, query);
   }
 
   @Get('options')

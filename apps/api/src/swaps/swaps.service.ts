@@ -9,6 +9,7 @@ import {
 } from '@nestjs/common';
 import {
   hasPermission,
+  type Page,
   type ProposeSwapDto,
   SWAP_DECISION_WEB_PATH,
   SWAP_FINAL_STATUSES,
@@ -34,6 +35,7 @@ import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UserEntity } from '../users/user.entity';
 import { changeDto, evaluateChanges, staleCells } from './swap-evaluation';
 import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.service';
+import { type SwapListQuery } from './dto/swap.dto';
 import { shiftWords, swapMail } from './swap-mails';
 import {
   type StoredCellChange,
@@ -98,24 +100,42 @@ export class SwapsService {
     };
   }
 
-  async list(user: AuthUser, status?: SwapStatus): Promise<SwapRequestDto[]> {
+  /**
+   * A page of the requests the caller takes part in (staff) or manages, newest first; with
+   * `waitingForMe`, only those waiting for the caller's answer (staff: to accept; managers: to approve).
+   */
+  async list(user: AuthUser, query: SwapListQuery): Promise<Page<SwapRequestDto>> {
     const m = this.dataSource.manager;
+    const empty = { items: [], total: 0, page: query.page, pageSize: query.pageSize };
     const qb = m.createQueryBuilder(SwapRequestEntity, 'r').orderBy('r.createdAt', 'DESC').addOrderBy('r.id');
     if (user.role === 'staff') {
       const mine = (await m.findBy(StaffMemberEntity, { userId: user.id })).map((s) => s.id);
-      if (!mine.length) return [];
-      qb.where('(r.proposerStaffMemberId IN (:...mine) OR r.colleagueStaffMemberId IN (:...mine))', { mine });
+      if (!mine.length) return empty;
+      if (query.waitingForMe) {
+        qb.where(`r.colleagueStaffMemberId IN (:...mine) AND r.status = 'proposed'`, { mine });
+      } else {
+        qb.where('(r.proposerStaffMemberId IN (:...mine) OR r.colleagueStaffMemberId IN (:...mine))', {
+          mine,
+        });
+      }
     } else if (user.role === 'manager') {
-      if (!user.unitIds.length) return [];
+      if (!user.unitIds.length) return empty;
       qb.where('r.unitId IN (:...units)', { units: user.unitIds });
     } else {
       qb.innerJoin('units', 'u', 'u.id = r.unitId').where('u.organisationId = :org', {
         org: user.organisationId,
       });
     }
-    if (status) qb.andWhere('r.status = :status', { status });
-    const rows = await qb.getMany();
-    return this.toDtos(m, rows, user);
+    if (query.waitingForMe && user.role !== 'staff') {
+      if (!hasPermission(user.role, 'requests:approve')) return empty;
+      qb.andWhere(`r.status = 'accepted'`);
+    }
+    if (query.status) qb.andWhere('r.status = :status', { status: query.status });
+    const [rows, total] = await qb
+      .skip((query.page - 1) * query.pageSize)
+      .take(query.pageSize)
+      .getManyAndCount();
+    return { items: await this.toDtos(m, rows, user), total, page: query.page, pageSize: query.pageSize };
   }
 
   async get(user: AuthUser, id: string): Promise<SwapRequestDto> {

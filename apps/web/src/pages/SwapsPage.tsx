@@ -1,13 +1,8 @@
 import { makeStyles, Subtitle1, tokens } from '@fluentui/react-components';
-import { useQuery } from '@tanstack/react-query';
 import { useCan } from '@/features/auth/hooks/useCurrentUser';
-import { swapsQuery } from '@/features/swaps/api/swaps.queries';
+import { PagedSwapList } from '@/features/swaps/components/PagedSwapList';
 import { ProposeSwapForm } from '@/features/swaps/components/ProposeSwapForm';
-import { SwapList } from '@/features/swaps/components/SwapList';
-import { waitingForMe } from '@/features/swaps/utils/swapText';
 import { EmptyState } from '@/ui/EmptyState';
-import { ErrorBanner } from '@/ui/ErrorBanner';
-import { TableSkeleton } from '@/ui/LoadingState';
 import { PageHeader } from '@/ui/PageHeader';
 
 const useStyles = makeStyles({
@@ -23,8 +18,6 @@ const useStyles = makeStyles({
 export function SwapsPage() {
   const styles = useStyles();
   const canPropose = useCan('requests:own');
-  const swaps = useQuery(swapsQuery());
-  const waiting = swaps.data ? waitingForMe(swaps.data) : [];
   return (
     <>
       <PageHeader
@@ -43,24 +36,21 @@ export function SwapsPage() {
         <Subtitle1 as="h2" id="waiting-title">
           Waiting for you
         </Subtitle1>
-        {waiting.length ? (
-          <SwapList swaps={waiting} label="Requests waiting for you" />
-        ) : (
-          <EmptyState title="Nothing waits for you" headingLevel="h3" />
-        )}
+        <PagedSwapList
+          filter={{ waitingForMe: true }}
+          label="Requests waiting for you"
+          empty={<EmptyState title="Nothing waits for you" headingLevel="h3" />}
+        />
       </section>
       <section className={styles.section} aria-labelledby="all-title">
         <Subtitle1 as="h2" id="all-title">
           All requests
         </Subtitle1>
-        {swaps.error ? <ErrorBanner error={swaps.error} onRetry={() => void swaps.refetch()} /> : null}
-        {swaps.isPending ? (
-          <TableSkeleton />
-        ) : swaps.data?.length ? (
-          <SwapList swaps={swaps.data} label="All swap requests" />
-        ) : (
-          <EmptyState title="No swap requests yet" headingLevel="h3" />
-        )}
+        <PagedSwapList
+          filter={{}}
+          label="All swap requests"
+          empty={<EmptyState title="No swap requests yet" headingLevel="h3" />}
+        />
       </section>
     </>
   );
@@ -69,32 +59,27 @@ export function SwapsPage() {
 /** Managers: swaps and open-shift claims waiting for approval, and every request of their units. */
 export function SwapApprovalsPage() {
   const styles = useStyles();
-  const swaps = useQuery(swapsQuery());
-  const waiting = swaps.data?.filter((s) => s.status === 'accepted') ?? [];
   return (
     <>
       <PageHeader
         title="Swap approvals"
         description="Swaps colleagues have agreed and open-shift claims. Approving re-checks the rules and refuses the change if the roster changed since it was asked."
       />
-      {swaps.error ? <ErrorBanner error={swaps.error} onRetry={() => void swaps.refetch()} /> : null}
       <section className={styles.section} aria-labelledby="approve-title">
         <Subtitle1 as="h2" id="approve-title">
           Waiting for approval
         </Subtitle1>
-        {swaps.isPending ? (
-          <TableSkeleton />
-        ) : waiting.length ? (
-          <SwapList swaps={waiting} label="Waiting for approval" />
-        ) : (
-          <EmptyState title="Nothing to approve" headingLevel="h3" />
-        )}
+        <PagedSwapList
+          filter={{ waitingForMe: true }}
+          label="Waiting for approval"
+          empty={<EmptyState title="Nothing to approve" headingLevel="h3" />}
+        />
       </section>
       <section className={styles.section} aria-labelledby="history-title">
         <Subtitle1 as="h2" id="history-title">
           All requests
         </Subtitle1>
-        {swaps.data?.length ? <SwapList swaps={swaps.data} label="All swap requests" /> : null}
+        <PagedSwapList filter={{}} label="All swap requests" empty={null} />
       </section>
     </>
   );

@@ -1,4 +1,4 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, PickType } from '@nestjs/swagger';
 import {
   type ProposeSwapDto,
   SWAP_STATUSES,
@@ -6,8 +6,10 @@ import {
   type SwapLinkDecisionDto,
   type SwapStatus,
 } from '@rotaplex/contracts';
-import { IsIn, IsOptional, IsString, IsUUID, Length, MaxLength } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { IsBoolean, IsIn, IsOptional, IsString, IsUUID, Length, MaxLength } from 'class-validator';
 import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
+import { PageQueryDto } from '../../common/pagination';
 
 export class ProposeSwapBody implements ProposeSwapDto {
   @ApiProperty({ enum: ['swap', 'offer'], description: 'swap: exchange shifts; offer: give my shift away' })
@@ -66,11 +68,22 @@ export class SwapLinkQuery {
   token!: string;
 }
 
-export class SwapListQuery {
+/** page (from 1), pageSize (1 to MAX_PAGE_SIZE, default 20) and filters; newest first. */
+export class SwapListQuery extends PickType(PageQueryDto, ['page', 'pageSize'] as const) {
   @ApiPropertyOptional({ enum: SWAP_STATUSES })
   @IsOptional()
   @IsIn(SWAP_STATUSES, { message: `status must be one of ${SWAP_STATUSES.join(', ')}` })
   status?: SwapStatus;
+
+  @ApiPropertyOptional({
+    type: Boolean,
+    description:
+      'Only requests waiting for the caller: staff, those they are asked to accept; managers, those they may approve',
+  })
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) => (value === 'true' ? true : value === 'false' ? false : value))
+  @IsBoolean({ message: 'waitingForMe must be true or false' })
+  waitingForMe?: boolean;
 }
 
 export class SwapOptionsQuery {

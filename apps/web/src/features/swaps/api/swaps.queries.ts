@@ -16,21 +16,40 @@ import {
 } from '@rotaplex/contracts';
 import { api, apiRequest } from '@/api/client';
 
+/** Filters of the swap list (GET /swaps): a status, or only what waits for the caller's answer. */
+export interface SwapListFilter {
+  status?: SwapStatus;
+  waitingForMe?: boolean;
+}
+
+/** Swap requests on this many to a page (the server allows 1 to MAX_PAGE_SIZE). */
+export const SWAPS_PAGE_SIZE = 20;
+
 export const swapKeys = {
   all: ['swaps'] as const,
-  list: (status: SwapStatus | '') => [...swapKeys.all, 'list', status] as const,
+  list: (filter: SwapListFilter, page: number) => [...swapKeys.all, 'list', filter, page] as const,
   options: (periodId: string) => [...swapKeys.all, 'options', periodId] as const,
   openShifts: () => [...swapKeys.all, 'open-shifts'] as const,
   publishedPeriods: () => [...swapKeys.all, 'published-periods'] as const,
   link: (token: string) => ['swap-link', token] as const,
 };
 
-/** Swap requests the caller takes part in (staff) or may approve (managers), newest first. */
-export const swapsQuery = (status: SwapStatus | '' = '') =>
+/** A page of the swap requests the caller takes part in (staff) or manages (managers), newest first. */
+export const swapsQuery = (filter: SwapListFilter = {}, page = 1) =>
   queryOptions({
-    queryKey: swapKeys.list(status),
+    queryKey: swapKeys.list(filter, page),
     queryFn: ({ signal }) =>
-      api.get<SwapRequestDto[]>(SWAP_ROUTES.swaps, { status: status || undefined }, signal),
+      api.get<Page<SwapRequestDto>>(
+        SWAP_ROUTES.swaps,
+        {
+          status: filter.status,
+          waitingForMe: filter.waitingForMe ? 'true' : undefined,
+          page,
+          pageSize: SWAPS_PAGE_SIZE,
+        },
+        signal,
+      ),
+    placeholderData: keepPreviousData,
   });
 
 /** Published periods of the caller's units (swaps and open shifts happen only on those). */

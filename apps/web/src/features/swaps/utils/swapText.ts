@@ -1,4 +1,4 @@
-import type { SwapCellChangeDto, SwapKind, SwapRequestDto, SwapStatus } from '@rotaplex/contracts';
+import type { SwapCellChangeDto, SwapKind, SwapStatus } from '@rotaplex/contracts';
 
 /** "Mon 4 Jan" from "YYYY-MM-DD" (calendar date, no time zone shift). */
 export function dayLabel(date: string): string {
@@ -40,9 +40,4 @@ export function statusColour(status: SwapStatus): 'success' | 'danger' | 'inform
   if (status === 'refused' || status === 'declined') return 'danger';
   if (status === 'proposed' || status === 'accepted') return 'informative';
   return 'subtle';
-}
-
-/** Requests waiting for the caller (an action other than cancel), first. */
-export function waitingForMe(swaps: readonly SwapRequestDto[]): SwapRequestDto[] {
-  return swaps.filter((s) => s.actions.some((a) => a !== 'cancel'));
 }
