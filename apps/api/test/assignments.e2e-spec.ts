@@ -9,6 +9,7 @@ import {
   SOLVING_ROUTES as R,
   type SolveRunDto,
 } from '@rotaplex/contracts';
+import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { createPeriod, findUnit, readGrid, shiftTypesByCode } from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
@@ -155,6 +156,41 @@ describe('/api/roster-periods/:id/assignments', () => {
     expect(cell(now, person, d2)).toEqual({ shiftTypeId: shifts.E.id, pinned: false });
     await edit({ staffMemberId: person, date: d2, shiftTypeId: null }).expect(200);
     expect((await audit()).items.filter((e) => e.summary.includes('overlap'))).toEqual([]);
+  });
+
+  it('words a stored overlap as an overlap, never as negative rest', async () => {
+    const g = await grid();
+    const person = g.rows[3].staffMemberId;
+    const [d1, d2] = [g.dates[4], g.dates[5]];
+    // Rows from before edits were checked for overlaps, written directly.
+    for (const [date, shift] of [
+      [d1, shifts.N],
+      [d2, shifts.E],
+    ] as const) {
+      await t.dataSource.manager.insert(AssignmentEntity, {
+        rosterPeriodId: period.id,
+        staffMemberId: person,
+        date,
+        shiftTypeId: shift.id,
+        pinned: false,
+      });
+    }
+    try {
+      const rest = (await grid()).check.violations.filter(
+        (v) => v.rule === 'minRest' && v.staffMemberId === person,
+      );
+      expect(rest).toHaveLength(1);
+      expect(rest[0].message).toMatch(
+        /: N on .* and E on .* overlap by 30 min \(the contract asks for at least 11 h\)$/,
+      );
+      expect(rest[0].message).not.toMatch(/-\d+ h|rest between/);
+      expect(rest[0].warning).toBe(REST_RULE_WARNING);
+    } finally {
+      await t.dataSource.manager.delete(AssignmentEntity, {
+        rosterPeriodId: period.id,
+        staffMemberId: person,
+      });
+    }
   });
 
   it('refuses bad cells naming the field, and callers without access', async () => {
