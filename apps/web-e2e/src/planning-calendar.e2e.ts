@@ -69,7 +69,18 @@ describe('planning calendar as the demo manager', () => {
       (r) => r.request().method() === 'PUT' && /\/assignments\b/.test(r.url()),
     );
     await dialog.getByRole('button', { name: 'Save shift' }).click();
-    expect((await put).status()).toBe(200);
+    const status = (await put).status();
+    if (status === 422) {
+      // The generated neighbours leave too little rest around the new shift: kept with a reason
+      // (issue 10, item 3). A solved roster holds no Late before an Early, so a Night here never
+      // overlaps the next day's shift.
+      await dialog.getByRole('textbox', { name: /Reason for keeping this edit/ }).fill('Calendar journey');
+      const kept = page.waitForResponse(
+        (r) => r.request().method() === 'PUT' && /\/assignments\b/.test(r.url()),
+      );
+      await dialog.getByRole('button', { name: 'Keep with this reason' }).click();
+      expect((await kept).status()).toBe(200);
+    } else expect(status).toBe(200);
     await dialog.getByRole('button', { name: 'Save shift' }).and(page.locator(':disabled')).waitFor();
     await dialog.getByRole('button', { name: 'Close' }).click();
     await dialog.waitFor({ state: 'detached' });
