@@ -3,8 +3,10 @@ import {
   type AvailabilityDto,
   type DateRequestDto,
   type LeaveDto,
+  MAX_PAGE_SIZE,
   type MyRequestsDto,
   PLANNING_ROUTES as P,
+  type Page,
   type PeriodRequestsDto,
   REQUESTS_ROUTES as Q,
   type RequestPage,
@@ -82,6 +84,49 @@ describe('availability, date requests and leave', () => {
   });
   afterAll(() => t.close());
 
+  it('pages date requests by date and leave by first day; page and pageSize are bounded', async () => {
+    const query = { rosterPeriodId: wardPeriod.id };
+    const everything = async (path: string, filter: Record<string, unknown>) => {
+      const items: { id: string }[] = [];
+      for (let page = 1; ; page++) {
+        const body = (
+          await get(path, manager)
+            .query({ ...filter, page, pageSize: 4 })
+            .expect(200)
+        ).body as Page<{ id: string }>;
+        items.push(...body.items);
+        if (body.items.length === 0 || items.length >= body.total) return items;
+      }
+    };
+    const dates = (await everything(Q.dateRequests, query)) as DateRequestDto[];
+    expect(dates.length).toBeGreaterThan(4);
+    expect(dates.map((d) => d.date)).toEqual(dates.map((d) => d.date).sort());
+    expect(new Set(dates.map((d) => d.id)).size).toBe(dates.length); // no row on two pages
+    const second = (
+      await get(Q.dateRequests, manager)
+        .query({ ...query, page: 2, pageSize: 4 })
+        .expect(200)
+    ).body as Page<DateRequestDto>;
+    expect(second).toMatchObject({ total: dates.length, page: 2, pageSize: 4 });
+    expect(second.items.map((d) => d.id)).toEqual(dates.slice(4, 8).map((d) => d.id));
+    const leave = (await everything(Q.leave, { unitId: ward.id })) as LeaveDto[];
+    expect(leave.length).toBeGreaterThan(0);
+    expect(leave.map((l) => l.startDate)).toEqual(leave.map((l) => l.startDate).sort());
+    const defaults = (await get(Q.leave, manager).expect(200)).body as Page<LeaveDto>;
+    expect([defaults.page, defaults.pageSize]).toEqual([1, 20]);
+    for (const path of [Q.dateRequests, Q.leave]) {
+      for (const [bad, field] of [
+        [{ page: 0 }, 'page'],
+        [{ pageSize: 0 }, 'pageSize'],
+        [{ pageSize: MAX_PAGE_SIZE + 1 }, 'pageSize'],
+        [{ sort: 'date' }, 'sort'],
+      ] as const) {
+        const res = await get(path, manager).query(bad).expect(400);
+        expect(JSON.stringify(res.body.message)).toContain(field);
+      }
+    }
+  });
+
   it('shows a staff member only their own requests, leave and availability', async () => {
     const mine = (await get(Q.mine, robin).expect(200)).body as MyRequestsDto;
     expect(mine.staffMembers.map((s) => s.name)).toEqual(['Robin Tallis']);
@@ -94,19 +139,24 @@ describe('availability, date requests and leave', () => {
 
     // Lists: own only for staff, even when asking for the whole unit or for someone else.
     const dates = (await get(Q.dateRequests, robin).query({ unitId: ward.id }).expect(200))
-      .body as DateRequestDto[];
-    expect(new Set(dates.map((d) => d.staffMemberId))).toEqual(new Set([robinId]));
-    expect((await get(Q.dateRequests, robin).query({ staffMemberId: graceId }).expect(200)).body).toEqual([]);
-    const leave = (await get(Q.leave, robin).expect(200)).body as LeaveDto[];
-    expect(new Set(leave.map((l) => l.staffMemberId))).toEqual(new Set([robinId]));
+      .body as Page<DateRequestDto>;
+    expect(new Set(dates.items.map((d) => d.staffMemberId))).toEqual(new Set([robinId]));
+    expect(
+      (await get(Q.dateRequests, robin).query({ staffMemberId: graceId }).expect(200)).body,
+    ).toMatchObject({ items: [], total: 0 });
+    const leave = (await get(Q.leave, robin).expect(200)).body as Page<LeaveDto>;
+    expect(new Set(leave.items.map((l) => l.staffMemberId))).toEqual(new Set([robinId]));
     // The managers' table and a period's requests are not for staff.
     await get(Q.requests, robin).expect(403);
     await get(Q.periodRequests(wardPeriod.id), robin).expect(403);
     await get(Q.availability(graceId), robin).expect(403);
     // Managers see the whole unit, but not another unit.
-    const all = (await get(Q.dateRequests, manager).query({ rosterPeriodId: wardPeriod.id }).expect(200))
-      .body as DateRequestDto[];
-    expect(new Set(all.map((d) => d.staffName)).size).toBeGreaterThan(3);
+    const all = (
+      await get(Q.dateRequests, manager)
+        .query({ rosterPeriodId: wardPeriod.id, pageSize: MAX_PAGE_SIZE })
+        .expect(200)
+    ).body as Page<DateRequestDto>;
+    expect(new Set(all.items.map((d) => d.staffName)).size).toBeGreaterThan(3);
     await get(Q.dateRequests, manager2).query({ unitId: ward.id }).expect(403);
     await get(Q.availability(graceId), manager2).expect(403);
     await get(Q.availability(graceId), manager).expect(200);
@@ -224,8 +274,9 @@ describe('availability, date requests and leave', () => {
 
     // Editing: own only; moving onto a date that already has a request is refused.
     const graceRequest = (
-      (await get(Q.dateRequests, manager).query({ rosterPeriodId: wardPeriod.id })).body as DateRequestDto[]
-    ).find((r) => r.staffMemberId !== robinId)!;
+      (await get(Q.dateRequests, manager).query({ rosterPeriodId: wardPeriod.id }))
+        .body as Page<DateRequestDto>
+    ).items.find((r) => r.staffMemberId !== robinId)!;
     await t
       .http()
       .patch(api(Q.dateRequest(graceRequest.id)))

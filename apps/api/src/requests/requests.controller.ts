@@ -44,7 +44,9 @@ import {
 } from './dto/requests.dto';
 import {
   AvailabilityResponse,
+  DateRequestPageResponse,
   DateRequestResponse,
+  LeavePageResponse,
   LeaveResponse,
   MyRequestsResponse,
   PeriodRequestsResponse,
@@ -99,13 +101,13 @@ export class RequestsController {
   @Get('date-requests')
   @Authenticated()
   @ApiOkResponse({
-    type: [DateRequestResponse],
-    description: 'Date requests: your own, or those of your units for managers',
+    type: DateRequestPageResponse,
+    description: 'A page of date requests, by date: your own, or those of your units for managers',
   })
   listDateRequests(
     @CurrentUser() user: AuthUser,
     @Query() query: DateRequestQueryDto,
-  ): Promise<DateRequestDto[]> {
+  ): Promise<Page<DateRequestDto>> {
     return this.requests.listDateRequests(user, query);
   }
 
@@ -143,8 +145,11 @@ export class RequestsController {
 
   @Get('leave')
   @Authenticated()
-  @ApiOkResponse({ type: [LeaveResponse], description: 'Leave: your own, or of your units for managers' })
-  listLeave(@CurrentUser() user: AuthUser, @Query() query: LeaveQueryDto): Promise<LeaveDto[]> {
+  @ApiOkResponse({
+    type: LeavePageResponse,
+    description: 'A page of leave, by first day: your own, or of your units for managers',
+  })
+  listLeave(@CurrentUser() user: AuthUser, @Query() query: LeaveQueryDto): Promise<Page<LeaveDto>> {
     return this.requests.listLeave(user, query);
   }
 

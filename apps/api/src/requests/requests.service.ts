@@ -229,18 +229,20 @@ export class RequestsService {
 
   // ------------------------------------------------------------ date requests
 
-  async listDateRequests(user: AuthUser, query: DateRequestQueryDto): Promise<DateRequestDto[]> {
+  async listDateRequests(user: AuthUser, query: DateRequestQueryDto): Promise<Page<DateRequestDto>> {
     let ids = await this.readableStaffIds(user, query.unitId);
     if (query.staffMemberId) ids = ids.filter((id) => id === query.staffMemberId);
-    if (!ids.length) return [];
-    const rows = await this.m.find(DateRequestEntity, {
+    if (!ids.length) return emptyPage(query);
+    const [rows, total] = await this.m.findAndCount(DateRequestEntity, {
       where: {
         staffMemberId: In(ids),
         ...(query.rosterPeriodId ? { rosterPeriodId: query.rosterPeriodId } : {}),
       },
-      order: { date: 'ASC', createdAt: 'ASC' },
+      order: { date: 'ASC', createdAt: 'ASC', id: 'ASC' },
+      skip: (query.page - 1) * query.pageSize,
+      take: query.pageSize,
     });
-    return this.dateRequestDtos(rows);
+    return { items: await this.dateRequestDtos(rows), total, page: query.page, pageSize: query.pageSize };
   }
 
   async createDateRequest(user: AuthUser, body: CreateDateRequestDto): Promise<DateRequestDto> {
@@ -373,15 +375,17 @@ export class RequestsService {
 
   // ------------------------------------------------------------ leave
 
-  async listLeave(user: AuthUser, query: LeaveQueryDto): Promise<LeaveDto[]> {
+  async listLeave(user: AuthUser, query: LeaveQueryDto): Promise<Page<LeaveDto>> {
     let ids = await this.readableStaffIds(user, query.unitId);
     if (query.staffMemberId) ids = ids.filter((id) => id === query.staffMemberId);
-    if (!ids.length) return [];
-    const rows = await this.m.find(LeaveRequestEntity, {
+    if (!ids.length) return emptyPage(query);
+    const [rows, total] = await this.m.findAndCount(LeaveRequestEntity, {
       where: { staffMemberId: In(ids), ...(query.status ? { status: query.status } : {}) },
-      order: { startDate: 'ASC', createdAt: 'ASC' },
+      order: { startDate: 'ASC', createdAt: 'ASC', id: 'ASC' },
+      skip: (query.page - 1) * query.pageSize,
+      take: query.pageSize,
     });
-    return this.leaveDtos(rows);
+    return { items: await this.leaveDtos(rows), total, page: query.page, pageSize: query.pageSize };
   }
 
   async createLeave(user: AuthUser, body: CreateLeaveDto): Promise<LeaveDto> {
@@ -654,4 +658,8 @@ async function assertFreeDate(em: EntityManager, periodId: string, staffMemberId
   if (await em.countBy(DateRequestEntity, { rosterPeriodId: periodId, staffMemberId, date })) {
     throw new ConflictException(`You already have a request for ${date}; change or delete it instead`);
   }
+}
+
+function emptyPage<T>(query: { page: number; pageSize: number }): Page<T> {
+  return { items: [], total: 0, page: query.page, pageSize: query.pageSize };
 }

@@ -120,7 +120,8 @@ export interface CreateDateRequestRequest {
 
 export type UpdateDateRequestRequest = Partial<Omit<CreateDateRequestRequest, 'rosterPeriodId'>>;
 
-export interface DateRequestListQuery {
+/** GET /date-requests: filters and paging (by date, oldest first; a Page of DateRequestDto). */
+export interface DateRequestListQuery extends Pick<PageQuery, 'page' | 'pageSize'> {
   rosterPeriodId?: string;
   unitId?: string;
   staffMemberId?: string;

@@ -11,6 +11,7 @@ import {
   LEAVE_STATUSES,
   LEAVE_TYPES,
   type LeaveDto,
+  type Page,
   type LeaveStatus,
   type LeaveType,
   type MyRequestsDto,
@@ -120,6 +121,20 @@ export class RequestRowResponse implements RequestRowDto {
 
 export class RequestPageResponse implements RequestPage {
   @ApiProperty({ type: [RequestRowResponse] }) items!: RequestRowResponse[];
+  @ApiProperty() total!: number;
+  @ApiProperty() page!: number;
+  @ApiProperty() pageSize!: number;
+}
+
+export class DateRequestPageResponse implements Page<DateRequestDto> {
+  @ApiProperty({ type: [DateRequestResponse] }) items!: DateRequestResponse[];
+  @ApiProperty() total!: number;
+  @ApiProperty() page!: number;
+  @ApiProperty() pageSize!: number;
+}
+
+export class LeavePageResponse implements Page<LeaveDto> {
+  @ApiProperty({ type: [LeaveResponse] }) items!: LeaveResponse[];
   @ApiProperty() total!: number;
   @ApiProperty() page!: number;
   @ApiProperty() pageSize!: number;

@@ -1,4 +1,4 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, PickType } from '@nestjs/swagger';
 import {
   AVAILABILITY_STATUSES,
   type AvailabilityCellDto,
@@ -126,7 +126,11 @@ export class UpdateDateRequestDto implements UpdateDateRequestRequest {
   note?: string | null;
 }
 
-export class DateRequestQueryDto implements DateRequestListQuery {
+/** Filters, page (from 1) and pageSize (1 to MAX_PAGE_SIZE, default 20); by date, oldest first. */
+export class DateRequestQueryDto
+  extends PickType(PageQueryDto, ['page', 'pageSize'] as const)
+  implements DateRequestListQuery
+{
   @ApiPropertyOptional({ format: 'uuid' })
   @IsOptional()
   @IsUUID('all', { message: 'rosterPeriodId must be a roster period id' })
@@ -180,7 +184,8 @@ export class DecideLeaveDto implements DecideLeaveRequest {
   note?: string | null;
 }
 
-export class LeaveQueryDto {
+/** Filters, page (from 1) and pageSize (1 to MAX_PAGE_SIZE, default 20); by first day, oldest first. */
+export class LeaveQueryDto extends PickType(PageQueryDto, ['page', 'pageSize'] as const) {
   @ApiPropertyOptional({ format: 'uuid' })
   @IsOptional()
   @IsUUID('all', { message: 'unitId must be a unit id' })
