@@ -2,6 +2,7 @@ import {
   type ContractDto,
   type CoverNeedsDto,
   type CoverOverrideDto,
+  type CsvImportResult,
   GUARD_RAIL_DEFERRAL,
   PLANNING_ROUTES as P,
   type ShiftTypeDto,
@@ -152,5 +153,26 @@ describe('guard-rail cautions on contracts, shift types and cover needs', () => 
     );
     const raised = await override(2);
     expect((raised.body as CoverOverrideDto).cautions).toEqual([]);
+
+    // A CSV upload says it on the dry run, before anything is saved, and again on the import.
+    const csv = ['day,shift,skill,min,target', 'Mon,E,,1,1', 'Mon,L,,0,1', '2031-05-06,E,,0,0'].join('\n');
+    const upload = (dryRun: boolean) =>
+      t
+        .http()
+        .post(api(`${P.coverImport(small.unit.id)}?dryRun=${dryRun}`))
+        .set(bearer(admin))
+        .set('Content-Type', 'text/csv')
+        .send(csv)
+        .expect(200);
+    for (const dryRun of [true, false]) {
+      const result = (await upload(dryRun)).body as CsvImportResult;
+      expect(result.errors).toEqual([]);
+      const words = result.cautions!.join(' ');
+      expect(words).toMatch(/Late \(L\) on Mon had a minimum of 1 and now has none/);
+      expect(words).toMatch(/Early \(E\) on 2031-05-06 had a minimum of 2 and now has none/);
+      // Rows the upload drops (every other weekday) lose their minimum too.
+      expect(words).toMatch(/Early \(E\) on Tue had a minimum of 1/);
+      expect(result.cautions!.at(-1)).toBe(GUARD_RAIL_DEFERRAL);
+    }
   });
 });

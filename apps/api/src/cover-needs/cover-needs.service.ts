@@ -11,7 +11,7 @@ import {
   loweredToZeroCautions,
   WEEKDAY_NAMES,
 } from '@rotaplex/contracts';
-import { DataSource, type EntityManager, IsNull, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, IsNull, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { SkillEntity } from '../skills/skill.entity';
@@ -186,7 +186,13 @@ export class CoverNeedsService {
     }
     if (!errors.length && !parsed.rows.length)
       errors.push({ line: 2, field: 'file', message: 'no data rows' });
-    const result: CsvImportResult = { dryRun: query.dryRun, rows: parsed.rows.length, saved: 0, errors };
+    const result: CsvImportResult = {
+      dryRun: query.dryRun,
+      rows: parsed.rows.length,
+      saved: 0,
+      errors,
+      cautions: errors.length ? [] : await this.importCautions(unitId, refs, pattern, overrides),
+    };
     if (query.dryRun) return result;
     if (errors.length) {
       throw new BadRequestException({
@@ -201,6 +207,49 @@ export class CoverNeedsService {
       await this.writeOverrides(em, unitId, overrides);
     });
     return { ...result, saved: pattern.length + overrides.length };
+  }
+
+  /**
+   * Minimums above 0 that an upload sets to 0: pattern rows it replaces (when it has any) and
+   * dates whose override or pattern row asked for someone.
+   */
+  private async importCautions(
+    unitId: string,
+    refs: Awaited<ReturnType<CoverNeedsService['references']>>,
+    pattern: PatternRow[],
+    overrides: OverrideRow[],
+  ): Promise<string[]> {
+    const before = await this.pattern.findBy({ unitId });
+    const out: string[] = [];
+    if (pattern.length) {
+      out.push(
+        ...loweredToZeroCautions(
+          before.map((r) => ({ ...r, day: r.weekday })),
+          pattern.map((r) => ({ ...r, day: r.weekday })),
+          needLabel(refs, (day) => `on ${WEEKDAY_NAMES[Number(day)]}`),
+        ),
+      );
+    }
+    const dated = overrides.length
+      ? await this.overrides.findBy({ unitId, date: In(overrides.map((o) => o.date)) })
+      : [];
+    for (const o of overrides) {
+      const same = (r: { shiftTypeId: string; skillId: string | null }) =>
+        r.shiftTypeId === o.shiftTypeId && r.skillId === o.skillId;
+      const weekday = new Date(`${o.date}T00:00:00Z`).getUTCDay();
+      const earlier =
+        dated.find((r) => r.date === o.date && same(r)) ??
+        before.find((r) => r.weekday === weekday && same(r));
+      if (!earlier) continue;
+      out.push(
+        ...loweredToZeroCautions(
+          [{ ...o, min: earlier.min, day: o.date }],
+          [{ ...o, day: o.date }],
+          needLabel(refs, (day) => `on ${String(day)}`),
+        ),
+      );
+    }
+    return withDeferral(out);
   }
 
   private async writePattern(em: EntityManager, unitId: string, rows: PatternRow[]): Promise<void> {

@@ -333,6 +333,8 @@ export interface CsvImportResult {
   /** Rows saved (0 on a dry run or when any row is bad). */
   saved: number;
   errors: CsvRowError[];
+  /** Guard-rail cautions of what the file sets (a cover minimum lowered to 0), also on a dry run. */
+  cautions?: string[];
 }
 
 // ---------------------------------------------------------------- cover needs

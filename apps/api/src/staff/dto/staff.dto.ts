@@ -186,4 +186,10 @@ export class CsvImportResponse implements CsvImportResult {
   @ApiProperty() rows!: number;
   @ApiProperty() saved!: number;
   @ApiProperty({ type: [CsvRowErrorResponse] }) errors!: CsvRowErrorResponse[];
+  @ApiProperty({
+    type: [String],
+    required: false,
+    description: 'Cautions on what the file sets (a cover minimum lowered to 0), also on a dry run',
+  })
+  cautions?: string[];
 }

@@ -147,6 +147,18 @@ export function CsvImportDialog({ title, columns, help, send, onImported, onClos
                 </MessageBarBody>
               </MessageBar>
             )}
+            {check.data?.cautions && check.data.cautions.length > 0 && (
+              <MessageBar intent="warning" layout="multiline">
+                <MessageBarBody>
+                  <MessageBarTitle>Check before you import</MessageBarTitle>
+                  <ul aria-label="Cautions on this file">
+                    {check.data.cautions.map((text) => (
+                      <li key={text}>{text}</li>
+                    ))}
+                  </ul>
+                </MessageBarBody>
+              </MessageBar>
+            )}
             <Caption1 className={styles.muted}>Line numbers count the header as line 1.</Caption1>
           </DialogContent>
           <DialogActions>
