@@ -3,6 +3,9 @@ import {
   type CoverNeedsDto,
   type CoverOverrideDto,
   type CsvImportResult,
+  PUBLISHING_ROUTES as PUB,
+  type PublishCheckDto,
+  SOLVING_ROUTES as R,
   GUARD_RAIL_DEFERRAL,
   PLANNING_ROUTES as P,
   type ShiftTypeDto,
@@ -174,5 +177,38 @@ describe('guard-rail cautions on contracts, shift types and cover needs', () => 
       expect(words).toMatch(/Early \(E\) on Tue had a minimum of 1/);
       expect(result.cautions!.at(-1)).toBe(GUARD_RAIL_DEFERRAL);
     }
+  });
+
+  it('names a shift type over 12 hours on the roster among the cautions before publishing', async () => {
+    const types = (
+      await t
+        .http()
+        .get(api(P.shiftTypes(small.unit.id)))
+        .set(bearer(admin))
+        .expect(200)
+    ).body as ShiftTypeDto[];
+    const long = types.find((s) => s.code === 'D24')!;
+    const before = (
+      await t
+        .http()
+        .get(api(PUB.publishCheck(small.period.id)))
+        .set(bearer(admin))
+        .expect(200)
+    ).body as PublishCheckDto;
+    expect(before.cautions.join(' ')).not.toMatch(/D24/);
+    await t
+      .http()
+      .put(api(R.assignmentCell(small.period.id)))
+      .set(bearer(admin))
+      .send({ staffMemberId: small.staff[0].id, date: small.period.startDate, shiftTypeId: long.id })
+      .expect(200);
+    const after = (
+      await t
+        .http()
+        .get(api(PUB.publishCheck(small.period.id)))
+        .set(bearer(admin))
+        .expect(200)
+    ).body as PublishCheckDto;
+    expect(after.cautions).toContain(`Shift D24 (D24): ${long.cautions![0]}`);
   });
 });
