@@ -70,11 +70,11 @@ describe('availability, date requests and leave', () => {
     ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
     contact = units.find((u) => u.name === 'Contact Centre North')!;
     wardPeriod = (
-      (await get(P.rosterPeriods, manager).query({ unitId: ward.id })).body as RosterPeriodDto[]
-    )[0];
+      (await get(P.rosterPeriods, manager).query({ unitId: ward.id })).body as Page<RosterPeriodDto>
+    ).items[0];
     contactPeriod = (
-      (await get(P.rosterPeriods, manager2).query({ unitId: contact.id })).body as RosterPeriodDto[]
-    )[0];
+      (await get(P.rosterPeriods, manager2).query({ unitId: contact.id })).body as Page<RosterPeriodDto>
+    ).items[0];
     const staff = (await get(P.staff, manager).query({ unitId: ward.id, pageSize: 100 })).body as {
       items: StaffMemberDto[];
     };

@@ -1,4 +1,10 @@
-import { PLANNING_ROUTES as R, type RosterPeriodDto, type UnitDto } from '@rotaplex/contracts';
+import {
+  MAX_PAGE_SIZE,
+  type Page,
+  PLANNING_ROUTES as R,
+  type RosterPeriodDto,
+  type UnitDto,
+} from '@rotaplex/contracts';
 import { demoPeriodStart } from '../src/demo/demo-planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
@@ -27,8 +33,9 @@ describe('/api/roster-periods', () => {
     t.http().post(api(R.rosterPeriods)).set(bearer(token)).send(body);
 
   it('seeds a four-week draft per unit starting on a Monday at least three weeks ahead', async () => {
-    const list = (await t.http().get(api(R.rosterPeriods)).set(bearer(admin)).expect(200))
-      .body as RosterPeriodDto[];
+    const list = (
+      (await t.http().get(api(R.rosterPeriods)).set(bearer(admin)).expect(200)).body as Page<RosterPeriodDto>
+    ).items;
     expect(list.map((p) => p.unitId).sort()).toEqual([ward.id, centre.id].sort());
     for (const p of list) {
       expect(p).toMatchObject({ days: 28, status: 'draft', version: 1, publishedAt: null });
@@ -98,11 +105,43 @@ describe('/api/roster-periods', () => {
     }
   });
 
+  it('pages newest first; page and pageSize are bounded', async () => {
+    for (const startDate of ['2033-01-03', '2033-02-07', '2033-03-07']) {
+      await create(manager, { unitId: ward.id, startDate, days: 7 }).expect(201);
+    }
+    const list = (query: Record<string, unknown>) =>
+      t
+        .http()
+        .get(api(R.rosterPeriods))
+        .query({ unitId: ward.id, ...query })
+        .set(bearer(manager));
+    const all = (await list({ pageSize: MAX_PAGE_SIZE }).expect(200)).body as Page<RosterPeriodDto>;
+    expect(all.total).toBeGreaterThanOrEqual(4);
+    const starts = all.items.map((p) => p.startDate);
+    expect(starts).toEqual([...starts].sort().reverse());
+    expect(starts.slice(0, 3)).toEqual(['2033-03-07', '2033-02-07', '2033-01-03']);
+    const second = (await list({ page: 2, pageSize: 2 }).expect(200)).body as Page<RosterPeriodDto>;
+    expect(second).toMatchObject({ total: all.total, page: 2, pageSize: 2 });
+    expect(second.items.map((p) => p.id)).toEqual(all.items.slice(2, 4).map((p) => p.id));
+    const defaults = (await list({}).expect(200)).body as Page<RosterPeriodDto>;
+    expect([defaults.page, defaults.pageSize]).toEqual([1, 20]);
+    for (const [query, field] of [
+      [{ page: 0 }, 'page'],
+      [{ pageSize: 0 }, 'pageSize'],
+      [{ pageSize: MAX_PAGE_SIZE + 1 }, 'pageSize'],
+      [{ order: 'asc' }, 'order'],
+    ] as const) {
+      const res = await list(query).expect(400);
+      expect(JSON.stringify(res.body.message)).toContain(field);
+    }
+  });
+
   it("refuses another unit's manager (403), staff writes (403), shows staff no drafts, anonymous 401", async () => {
     await create(manager2, { unitId: ward.id, startDate: '2032-01-05', days: 7 }).expect(403);
     await create(staff, { unitId: ward.id, startDate: '2032-01-05', days: 7 }).expect(403);
-    const seen = (await t.http().get(api(R.rosterPeriods)).set(bearer(staff)).expect(200))
-      .body as RosterPeriodDto[];
+    const seen = (
+      (await t.http().get(api(R.rosterPeriods)).set(bearer(staff)).expect(200)).body as Page<RosterPeriodDto>
+    ).items;
     expect(seen.every((p) => p.status !== 'draft' && p.unitId === ward.id)).toBe(true);
     await t.http().get(api(R.rosterPeriods)).expect(401);
   });

@@ -67,8 +67,8 @@ describe('solve runs', () => {
     staff = (await t.login('staff@example.com')).token;
     const ward = await findUnit(t, admin);
     const periods = (await t.http().get(api(P.rosterPeriods)).query({ unitId: ward.id }).set(bearer(manager)))
-      .body as RosterPeriodDto[];
-    period = periods[0];
+      .body as Page<RosterPeriodDto>;
+    period = periods.items[0];
     week = await createPeriod(t, manager, ward.id, '2030-01-07');
   });
   afterAll(() => t.close());
@@ -362,8 +362,8 @@ describe('solve runs when the server stops', () => {
         const manager = (await first.login('manager@example.com')).token;
         const periodId = (
           (await first.http().get(api(P.rosterPeriods)).set(bearer(manager)).expect(200))
-            .body as RosterPeriodDto[]
-        )[0].id;
+            .body as Page<RosterPeriodDto>
+        ).items[0].id;
         id = (
           (
             await first

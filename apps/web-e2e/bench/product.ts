@@ -6,6 +6,8 @@
 import {
   API_PREFIX,
   API_ROUTES,
+  MAX_PAGE_SIZE,
+  type Page,
   PLANNING_ROUTES,
   type RosterPeriodDto,
   type TokenResponse,
@@ -47,8 +49,11 @@ export async function api<T>(session: ApiSession, path: string, init: RequestIni
 
 /** The demo's draft periods that a manager sees. */
 export async function draftPeriods(session: ApiSession): Promise<RosterPeriodDto[]> {
-  const periods = await api<RosterPeriodDto[]>(session, PLANNING_ROUTES.rosterPeriods);
-  return periods.filter((p) => p.status === 'draft');
+  const { items } = await api<Page<RosterPeriodDto>>(
+    session,
+    `${PLANNING_ROUTES.rosterPeriods}?status=draft&pageSize=${MAX_PAGE_SIZE}`,
+  );
+  return items;
 }
 
 /** A small fixed-width table for the console, one header row and a rule. */

@@ -1,5 +1,7 @@
 import ICAL from 'ical.js';
 import {
+  MAX_PAGE_SIZE,
+  type Page as ListPage,
   PLANNING_ROUTES,
   PUBLISHING_ROUTES,
   SOLVING_ROUTES,
@@ -34,10 +36,10 @@ describe('my roster as a demo staff member', () => {
   beforeAll(async () => {
     const token = await apiSignIn('manager@example.com');
     const ward = await findWard(token);
-    const periods = await apiCall<RosterPeriodDto[]>(
+    const { items: periods } = await apiCall<ListPage<RosterPeriodDto>>(
       token,
       'GET',
-      `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}`,
+      `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}&pageSize=${MAX_PAGE_SIZE}`,
     );
     // A Monday five weeks after the start of the latest period (demo periods start on a Monday).
     const latest = periods

@@ -17,13 +17,14 @@ import {
   ApiOkResponse,
   ApiTags,
 } from '@nestjs/swagger';
-import { type RosterPeriodDto } from '@rotaplex/contracts';
+import { type Page, type RosterPeriodDto } from '@rotaplex/contracts';
 import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import {
   CreateRosterPeriodDto,
   RosterPeriodQueryDto,
+  RosterPeriodPageResponse,
   RosterPeriodResponse,
   UpdateRosterPeriodDto,
 } from './dto/roster-period.dto';
@@ -37,8 +38,8 @@ export class RosterPeriodsController {
 
   @Get()
   @RequirePermissions('rosters:read')
-  @ApiOkResponse({ type: [RosterPeriodResponse] })
-  list(@CurrentUser() user: AuthUser, @Query() query: RosterPeriodQueryDto): Promise<RosterPeriodDto[]> {
+  @ApiOkResponse({ type: RosterPeriodPageResponse, description: 'A page of periods, newest first' })
+  list(@CurrentUser() user: AuthUser, @Query() query: RosterPeriodQueryDto): Promise<Page<RosterPeriodDto>> {
     return this.periods.list(user, query);
   }
 

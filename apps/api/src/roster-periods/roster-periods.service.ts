@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { type RosterPeriodDto } from '@rotaplex/contracts';
+import { type Page, type RosterPeriodDto } from '@rotaplex/contracts';
 import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
@@ -25,7 +25,8 @@ export class RosterPeriodsService {
     private readonly dataSource: DataSource,
   ) {}
 
-  async list(user: AuthUser, query: RosterPeriodQueryDto): Promise<RosterPeriodDto[]> {
+  /** A page of the periods the caller may see, newest first. */
+  async list(user: AuthUser, query: RosterPeriodQueryDto): Promise<Page<RosterPeriodDto>> {
     if (query.unitId) await this.units.get(user, query.unitId);
     const qb = this.periods
       .createQueryBuilder('p')
@@ -33,14 +34,19 @@ export class RosterPeriodsService {
       .where('unit.organisationId = :org', { org: user.organisationId });
     const visible = visibleUnitIds(user);
     if (visible !== null) {
-      if (!visible.length) return [];
+      if (!visible.length) return { items: [], total: 0, page: query.page, pageSize: query.pageSize };
       qb.andWhere('p.unitId IN (:...visible)', { visible });
     }
     if (query.unitId) qb.andWhere('p.unitId = :unitId', { unitId: query.unitId });
     if (query.status) qb.andWhere('p.status = :status', { status: query.status });
     if (user.role === 'staff') qb.andWhere('p.status IN (:...staff)', { staff: STAFF_STATUSES });
-    const rows = await qb.orderBy('p.startDate', 'DESC').addOrderBy('p.id', 'ASC').getMany();
-    return rows.map(toRosterPeriodDto);
+    const [rows, total] = await qb
+      .orderBy('p.startDate', 'DESC')
+      .addOrderBy('p.id', 'ASC')
+      .skip((query.page - 1) * query.pageSize)
+      .take(query.pageSize)
+      .getManyAndCount();
+    return { items: rows.map(toRosterPeriodDto), total, page: query.page, pageSize: query.pageSize };
   }
 
   async get(user: AuthUser, id: string): Promise<RosterPeriodDto> {

@@ -416,7 +416,8 @@ export type UpdateRosterPeriodRequest = Partial<Pick<CreateRosterPeriodRequest, 
   version?: number;
 };
 
-export interface RosterPeriodListQuery {
+/** GET /roster-periods: filters and paging (newest first; a Page of RosterPeriodDto). */
+export interface RosterPeriodListQuery extends Pick<PageQuery, 'page' | 'pageSize'> {
   unitId?: string;
   status?: RosterPeriodStatus;
 }

@@ -1,6 +1,7 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, PickType } from '@nestjs/swagger';
 import {
   type CreateRosterPeriodRequest,
+  type Page,
   ROSTER_PERIOD_MAX_DAYS,
   ROSTER_PERIOD_MIN_DAYS,
   ROSTER_PERIOD_STATUSES,
@@ -11,6 +12,7 @@ import {
 } from '@rotaplex/contracts';
 import { IsIn, IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
 import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
+import { PageQueryDto } from '../../common/pagination';
 
 export class CreateRosterPeriodDto implements CreateRosterPeriodRequest {
   @ApiProperty({ format: 'uuid' })
@@ -48,7 +50,11 @@ export class UpdateRosterPeriodDto implements UpdateRosterPeriodRequest {
   version?: number;
 }
 
-export class RosterPeriodQueryDto implements RosterPeriodListQuery {
+/** Filters, page (from 1) and pageSize (1 to MAX_PAGE_SIZE, default 20); newest first. */
+export class RosterPeriodQueryDto
+  extends PickType(PageQueryDto, ['page', 'pageSize'] as const)
+  implements RosterPeriodListQuery
+{
   @ApiPropertyOptional({ format: 'uuid' })
   @IsOptional()
   @IsUUID('all', { message: 'unitId must be a unit id' })
@@ -69,4 +75,11 @@ export class RosterPeriodResponse implements RosterPeriodDto {
   @ApiProperty({ format: 'date-time' }) createdAt!: string;
   @ApiProperty({ format: 'date-time', nullable: true, type: String }) publishedAt!: string | null;
   @ApiProperty() version!: number;
+}
+
+export class RosterPeriodPageResponse implements Page<RosterPeriodDto> {
+  @ApiProperty({ type: [RosterPeriodResponse] }) items!: RosterPeriodResponse[];
+  @ApiProperty() total!: number;
+  @ApiProperty() page!: number;
+  @ApiProperty() pageSize!: number;
 }

@@ -28,6 +28,7 @@ import {
   type UserDto,
 } from '@rotaplex/contracts';
 import { api, apiRequest } from '@/api/client';
+import { readAllPages } from '@/features/planning-board/api/board.queries';
 import type { StaffListParams } from '@/features/planning/utils/staffListParams';
 import { downloadText, sendCsv } from './csvTransfer';
 
@@ -157,10 +158,18 @@ export const importCoverCsv = (unitId: string, csv: string, dryRun: boolean): Pr
 
 // ------------------------------------------------------------------ roster periods
 
+/** Every period of the unit, newest first (the list is paged: read MAX_PAGE_SIZE a page). */
 export const rosterPeriodsQuery = (unitId: string) =>
   queryOptions({
     queryKey: planningKeys.rosterPeriodList(unitId),
-    queryFn: ({ signal }) => api.get<RosterPeriodDto[]>(PLANNING_ROUTES.rosterPeriods, { unitId }, signal),
+    queryFn: ({ signal }) =>
+      readAllPages((page) =>
+        api.get<Page<RosterPeriodDto>>(
+          PLANNING_ROUTES.rosterPeriods,
+          { unitId, page, pageSize: MAX_PAGE_SIZE },
+          signal,
+        ),
+      ),
     enabled: unitId !== '',
   });
 export const createRosterPeriod = (body: CreateRosterPeriodRequest) =>

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import {
   type ClaimOpenShiftDto,
+  MAX_PAGE_SIZE,
   type OpenShiftDto,
   type Page,
   PLANNING_ROUTES,
@@ -15,6 +16,7 @@ import {
   type SwapStatus,
 } from '@rotaplex/contracts';
 import { api, apiRequest } from '@/api/client';
+import { readAllPages } from '@/features/planning-board/api/board.queries';
 
 /** Filters of the swap list (GET /swaps): a status, or only what waits for the caller's answer. */
 export interface SwapListFilter {
@@ -57,7 +59,13 @@ export const publishedPeriodsQuery = () =>
   queryOptions({
     queryKey: swapKeys.publishedPeriods(),
     queryFn: ({ signal }) =>
-      api.get<RosterPeriodDto[]>(PLANNING_ROUTES.rosterPeriods, { status: 'published' }, signal),
+      readAllPages((page) =>
+        api.get<Page<RosterPeriodDto>>(
+          PLANNING_ROUTES.rosterPeriods,
+          { status: 'published', page, pageSize: MAX_PAGE_SIZE },
+          signal,
+        ),
+      ),
   });
 
 export const swapOptionsQuery = (periodId: string) =>
