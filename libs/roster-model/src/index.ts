@@ -16,6 +16,12 @@ export {
   type SubMipResult,
   type SubMipSolver,
 } from './lib/heuristic/fix-and-optimise';
+export {
+  RosterSearch,
+  searchRoster,
+  type RosterSearchOptions,
+  type RosterSearchResult,
+} from './lib/search/roster-search';
 export * from './lib/solve';
 export * from './lib/pool';
 export * from './lib/explain';
