@@ -10,6 +10,8 @@ export {
   assertCheckerAgrees,
   AUTO_LARGE_MODEL_X,
   AUTO_FIX_AND_OPTIMISE_SHARE,
+  AUTO_FIX_AND_OPTIMISE_SHARE_SMALL,
+  AUTO_SEARCH_SHARE,
   AUTO_LARGE_HIGHS_OPTIONS,
   SolverCheckError,
   type RosterSolveResult,

@@ -48,6 +48,8 @@ export interface MipRunOptions {
   /** Receives progress at most every `progressIntervalMs` (default 250 ms, i.e. 4 a second). */
   onProgress?: (progress: SolveProgress) => void;
   progressIntervalMs?: number;
+  /** performance.now() of the caller's last progress event (the first event here keeps the interval). */
+  lastProgressAt?: number;
   /** Abort to stop the solve and keep the best roster found so far. */
   signal?: AbortSignal;
   /**
@@ -171,7 +173,7 @@ export function runMip(
     if (options.startValues) model.setSolution({ colValue: Array.from(options.startValues) });
 
     const improvements: { objective: number; seconds: number }[] = [];
-    let lastEmit = -Infinity;
+    let lastEmit = options.lastProgressAt ?? -Infinity;
     let incumbent: number | null = null;
     let bound: number | null = null;
     const emit = (force: boolean): void => {

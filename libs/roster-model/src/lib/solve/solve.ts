@@ -22,6 +22,7 @@ import { explainUnmetNeeds } from '../explain/unmet-needs';
 import { construct, improve } from '../heuristic/construct';
 import { fixAndOptimise, type SubMipSolver } from '../heuristic/fix-and-optimise';
 import { buildModel, type BuiltModel } from '../model/build-model';
+import { searchRoster } from '../search/roster-search';
 import { type HighsSession, isWasmFailure } from './highs-session';
 import { isCancelled, relativeGap, runMip, solverArrays, threadSession, type MipRunResult } from './run-mip';
 
@@ -56,10 +57,13 @@ export interface SolveRosterOptions {
    *   best roster for the rest (it proves the bound, and keeps the F&O roster if it finds nothing better);
    * - 'mipThenFixAndOptimise': the full MIP first for the rest of the limit (it finds a first roster
    *   and the proven bound), then fix-and-optimise from its best roster for `fixAndOptimiseShare`;
-   * - 'auto' (default): 'mip' for models with fewer than AUTO_LARGE_MODEL_X assignment columns (they
-   *   are solved, or nearly, whole), else 'mipThenFixAndOptimise' with 80% of the time for
-   *   fix-and-optimise, the root LP by interior point and more MIP heuristic effort (AUTO_LARGE_HIGHS_OPTIONS;
-   *   options passed in highsOptions win). Measured on the benchmark: docs/benchmarks.md.
+   * - 'auto' (default): after the local search (`searchShare`), 'mipThenFixAndOptimise': the MIP from
+   *   the search's roster proves the bound, fix-and-optimise polishes the best roster for
+   *   AUTO_FIX_AND_OPTIMISE_SHARE_SMALL of the rest (AUTO_FIX_AND_OPTIMISE_SHARE on models with
+   *   AUTO_LARGE_MODEL_X assignment columns or more, which also get the root LP by interior point and
+   *   more MIP heuristic effort: AUTO_LARGE_HIGHS_OPTIONS; options passed in highsOptions win). Without
+   *   the search (`searchShare: 0` or a given warm start), 'mip' below AUTO_LARGE_MODEL_X. Measured on
+   *   the benchmark: docs/benchmarks.md.
    */
   strategy?: 'auto' | 'mip' | 'fixAndOptimise' | 'mipThenFixAndOptimise';
   /**
@@ -70,6 +74,12 @@ export interface SolveRosterOptions {
   fixAndOptimiseShare?: number;
   /** Time limit of each fix-and-optimise sub-MIP in seconds (default FIX_AND_OPTIMISE_SUB_SECONDS). */
   fixAndOptimiseSubSeconds?: number;
+  /**
+   * Share of the time limit (after model building) for the local search (search/roster-search.ts)
+   * that runs from the construction heuristic's roster before HiGHS starts (default AUTO_SEARCH_SHARE;
+   * 0: none). Only with the heuristic warm start.
+   */
+  searchShare?: number;
   /**
    * Every better roster that meets every hard rule, as it is found (the MIP's incumbents and
    * fix-and-optimise's improvements), so a solve on another core can continue from it.
@@ -105,6 +115,30 @@ export const AUTO_LARGE_HIGHS_OPTIONS: Record<string, string | number> = {
   mip_lp_solver: 'ipm',
   mip_heuristic_effort: 0.3,
 };
+
+/**
+ * Share of the time for the local search before HiGHS. On the demo ward (17 people, 28 days) the
+ * search finds in 5-10 s a roster that 30 s of the MIP alone did not; HiGHS then proves the bound
+ * from it and improves it (docs/benchmarks.md).
+ */
+export const AUTO_SEARCH_SHARE = 0.4;
+
+/**
+ * The search hands over to HiGHS early when it has found nothing better for this long and for half
+ * its time so far: small problems then reach HiGHS (which proves them optimal) within a second or two.
+ */
+const SEARCH_STALL_MS = 1000;
+
+/** Progress events at most this often (HiGHS's own events keep the same interval). */
+const PROGRESS_INTERVAL_MS = 250;
+
+/** Share of the time after the search for fix-and-optimise on models below AUTO_LARGE_MODEL_X. */
+export const AUTO_FIX_AND_OPTIMISE_SHARE_SMALL = 0.6;
+
+function usesSearch(options: SolveRosterOptions): boolean {
+  const heuristic = options.warmStart === undefined || options.warmStart === 'heuristic';
+  return heuristic && (options.searchShare ?? AUTO_SEARCH_SHARE) > 0;
+}
 
 /** What solveRoster returns: the SolveResult the product uses, plus numbers for benchmarks and logs. */
 export interface RosterSolveResult extends SolveResult {
@@ -163,25 +197,61 @@ interface StartRoster {
 function warmStartRoster(
   built: BuiltModel,
   problem: RosterProblem,
-  warmStart: SolveRosterOptions['warmStart'],
+  options: SolveRosterOptions,
   timeLimitSeconds: number,
+  clockStart: number,
+  progressClock: { last: number },
 ): StartRoster | null {
+  const warmStart = options.warmStart;
   if (warmStart === null) return null;
-  // The heuristic's local search gets its default second (it needs it to meet minimum-hours rules),
-  // or the whole limit when that is shorter. Large models get up to 4 s (8% of the limit): on
-  // benchmark instance 12 one second left 67 hard-rule violations, four seconds 2-3.
-  const largeMs = built.numX >= AUTO_LARGE_MODEL_X ? Math.min(4000, timeLimitSeconds * 80) : 0;
-  const heuristicMs = Math.max(0, Math.min(Math.max(1000, largeMs), timeLimitSeconds * 1000));
   if (warmStart !== undefined && warmStart !== 'heuristic') {
     return { roster: warmStart, check: checkRoster(problem, warmStart, built.index) };
   }
+  const share = Math.min(1, Math.max(0, options.searchShare ?? AUTO_SEARCH_SHARE));
+  const left = (): number => timeLimitSeconds * 1000 - (performance.now() - clockStart);
+  // The greedy fill with a short local search of its own: the fast search below does the rest.
+  const heuristicMs = Math.max(0, Math.min(share > 0 ? 300 : 1000, left()));
   const started = performance.now();
   let roster = construct(problem, { timeLimitMs: heuristicMs });
   let check = checkRoster(problem, roster, built.index);
-  // A start that meets every hard rule lets HiGHS begin from a roster, which it keeps improving;
-  // without one it may spend the whole limit searching (seen on the four-week demo ward: 4 broken
-  // rules after 1 s of search on a loaded machine, none after 3 s). So the search goes on, a
-  // second at a time, while rules are broken, for at most 20% of the limit (8 s at most).
+  const searchMs = share * left();
+  if (share > 0 && searchMs > 0) {
+    const elapsed = (): number => (performance.now() - clockStart) / 1000;
+    // Progress and rosters for the other core at most 4 times a second (and the last one at the end).
+    let unsent = false;
+    const send = (objective: number, grid: () => number[][]): void => {
+      progressClock.last = performance.now();
+      unsent = false;
+      options.onProgress?.({ elapsedSeconds: elapsed(), objective, bound: null, gap: null });
+      options.onRoster?.(built.index.fromGrid(grid()), objective);
+    };
+    const found = searchRoster(built.index, roster, {
+      timeLimitMs: searchMs,
+      stallMs: SEARCH_STALL_MS,
+      seed: (options.randomSeed ?? 0) + 1,
+      shouldStop: () => isCancelled(options),
+      onBest: (objective, grid) => {
+        if (performance.now() - progressClock.last >= PROGRESS_INTERVAL_MS) send(objective, grid);
+        else unsent = true;
+      },
+      incoming: options.incomingRoster
+        ? () => {
+            const offered = options.incomingRoster?.();
+            return offered ? built.index.toGrid(offered).grid : null;
+          }
+        : undefined,
+    });
+    // The last roster goes to the other core at once; its progress waits for the interval (HiGHS,
+    // starting from this roster, reports it).
+    if (unsent && found.feasible) options.onRoster?.(found.roster, found.objective);
+    roster = found.roster;
+    check = checkRoster(problem, roster, built.index);
+    return { roster, check };
+  }
+  // Without the fast search: a start that meets every hard rule lets HiGHS begin from a roster,
+  // which it keeps improving; without one it may spend the whole limit searching. So the
+  // heuristic's search goes on, a second at a time, while rules are broken, for at most 20% of the
+  // limit (8 s at most).
   const extraUntil = started + Math.min(8000, timeLimitSeconds * 200);
   for (let round = 1; check.violations.length > 0 && performance.now() + 1000 <= extraUntil; round++) {
     roster = improve(problem, roster, { timeLimitMs: 1000, seed: round });
@@ -343,7 +413,8 @@ export async function solveRoster(
   await session.ensureHealthy();
   const built = buildModel(problem);
   const timeLimitSeconds = options.timeLimitSeconds ?? 60;
-  const startRoster = warmStartRoster(built, problem, options.warmStart, timeLimitSeconds);
+  const progressClock = { last: -Infinity };
+  const startRoster = warmStartRoster(built, problem, options, timeLimitSeconds, clockStart, progressClock);
   let start = startValuesOf(built, startRoster);
   const warmStartObjective = start?.objective ?? null;
   const data = solverArrays(built);
@@ -352,7 +423,11 @@ export async function solveRoster(
 
   const auto = options.strategy === undefined || options.strategy === 'auto';
   const large = built.numX >= AUTO_LARGE_MODEL_X;
-  const strategy = auto ? (large ? 'mipThenFixAndOptimise' : 'mip') : (options.strategy ?? 'mip');
+  // After the local search, HiGHS first proves the bound (and may improve the roster), then
+  // fix-and-optimise polishes the best roster with exact sub-MIPs; without it, small models get the
+  // whole MIP.
+  const searched = usesSearch(options);
+  const strategy = auto ? (large || searched ? 'mipThenFixAndOptimise' : 'mip') : (options.strategy ?? 'mip');
   const highsOptions =
     auto && large ? { ...AUTO_LARGE_HIGHS_OPTIONS, ...options.highsOptions } : options.highsOptions;
   const foImprovements: { objective: number; seconds: number }[] = [];
@@ -362,7 +437,11 @@ export async function solveRoster(
   };
   const share = Math.min(
     1,
-    Math.max(0, options.fixAndOptimiseShare ?? (auto ? AUTO_FIX_AND_OPTIMISE_SHARE : 0.5)),
+    Math.max(
+      0,
+      options.fixAndOptimiseShare ??
+        (auto ? (large ? AUTO_FIX_AND_OPTIMISE_SHARE : AUTO_FIX_AND_OPTIMISE_SHARE_SMALL) : 0.5),
+    ),
   );
   const mipLimit =
     strategy === 'mipThenFixAndOptimise'
@@ -409,6 +488,7 @@ export async function solveRoster(
       cancelFlag: options.cancelFlag,
       startValues: elastic ? elastic.model.encode(startRoster!.roster) : start?.values,
       clockStart,
+      lastProgressAt: progressClock.last,
       onSolution: options.onRoster
         ? (values) => {
             const roster = (elastic ? elastic.model : built).decode(values);
