@@ -165,4 +165,32 @@ describe('SolverPool', () => {
     expect(result.objective).toBe(0);
     expect(result.check?.violations).toEqual([]);
   });
+  it('lends an idle core to a solve and takes it back as soon as another solve waits', async () => {
+    const controller = new AbortController();
+    let firstProgress!: () => void;
+    const progressing = new Promise<void>((ok) => (firstProgress = ok));
+    let settled = false;
+    const first = pool
+      .solveRoster(busyUnit(), {
+        timeLimitSeconds: 120,
+        explain: false,
+        spareCores: true,
+        signal: controller.signal,
+        onProgress: () => firstProgress(),
+      })
+      .finally(() => (settled = true));
+    await progressing;
+    // Both workers of the pool now work on the first solve.
+    expect(pool.freeWorkers()).toBe(0);
+    // A second solve does not wait for the first one's two minutes: the lent core is given back.
+    const second = await pool.solveRoster(smallWard(), { timeLimitSeconds: 60, explain: false });
+    expect(second.status).toBe('optimal');
+    expect(second.objective).toBe(0);
+    expect(settled).toBe(false);
+    controller.abort();
+    const result = await first;
+    expect(result.status).toBe('interrupted');
+    expect(result.roster).not.toBeNull();
+    expect(result.check?.violations).toEqual([]);
+  });
 });

@@ -64,6 +64,11 @@ export interface TaskControls {
   killSignal?: AbortSignal;
   /** Every better roster (meeting every hard rule) a roster task finds while it runs. */
   onRoster?: (roster: Roster, objective: number) => void;
+  /**
+   * The task runs on a spare core: the pool stops it (as a cancel, keeping its roster) as soon as
+   * another task waits for a worker.
+   */
+  yieldable?: boolean;
 }
 
 export interface PoolRosterOptions
@@ -81,6 +86,12 @@ export interface PoolRosterOptions
    * ones and `portfolioStrategies`.
    */
   portfolioOptions?: PortfolioMemberOptions[];
+  /**
+   * Use the cores nobody else needs: with a worker free beside this solve's own, a second member
+   * runs TWO_CORE_PORTFOLIO's fix-and-optimise beside it, handing rosters both ways, and gives its
+   * core back (stopping with its best roster) as soon as another solve waits. Ignored with `portfolio`.
+   */
+  spareCores?: boolean;
   /**
    * Members hand each other every better roster they find (default true): a member in its
    * fix-and-optimise phase continues from the best roster of all of them.
@@ -127,6 +138,7 @@ interface Job {
   killRequested: boolean;
   settled: boolean;
   slot: Slot | null;
+  yieldable: boolean;
 }
 
 interface Slot {
@@ -168,6 +180,12 @@ export class SolverPool {
     return this.slots.length;
   }
 
+  /** Workers this pool could give a new task now: idle, or not yet started, less what waits. */
+  freeWorkers(): number {
+    const busy = this.slots.filter((s) => s.state === 'busy').length;
+    return Math.max(0, this.size - busy - this.queue.length);
+  }
+
   /** Solves waiting for a free worker. */
   get queued(): number {
     return this.queue.length;
@@ -190,6 +208,7 @@ export class SolverPool {
         killRequested: false,
         settled: false,
         slot: null,
+        yieldable: Boolean(controls.yieldable),
       };
     });
     const cancel = (): void => {
@@ -235,13 +254,16 @@ export class SolverPool {
       signal,
       killSignal,
       onRoster,
-      portfolio = 1,
+      portfolio,
       portfolioStrategies,
       portfolioOptions,
       shareRosters = true,
+      spareCores = false,
       ...rest
     } = options;
-    const count = Math.max(1, Math.floor(portfolio));
+    const spare = portfolio === undefined && spareCores && this.freeWorkers() >= 2;
+    const count = spare ? 2 : Math.max(1, Math.floor(portfolio ?? 1));
+    const memberOptions = spare ? [{}, TWO_CORE_PORTFOLIO[1]] : portfolioOptions;
     const baseSeed = rest.randomSeed ?? 0;
     const latest: (SolveProgress | null)[] = new Array<SolveProgress | null>(count).fill(null);
     let lastEmit = -Infinity;
@@ -276,7 +298,7 @@ export class SolverPool {
             ...(portfolioStrategies?.length
               ? { strategy: portfolioStrategies[i % portfolioStrategies.length] }
               : {}),
-            ...(portfolioOptions?.length ? portfolioOptions[i % portfolioOptions.length] : {}),
+            ...(memberOptions?.length ? memberOptions[i % memberOptions.length] : {}),
           },
         },
         {
@@ -284,6 +306,7 @@ export class SolverPool {
           onRoster: (roster, objective) => share(i, roster, objective),
           signal,
           killSignal,
+          yieldable: spare && i > 0,
         },
       ),
     );
@@ -334,6 +357,15 @@ export class SolverPool {
     for (const slot of this.slots) {
       if (this.queue.length === 0) return;
       if (slot.state === 'idle') this.dispatch(slot, this.queue.shift() as Job);
+    }
+    // Solves still waiting take the cores lent to other solves (stopped gently: their rosters count).
+    let waiting = this.queue.length - this.slots.filter((s) => s.state === 'starting').length;
+    for (const slot of this.slots) {
+      if (waiting <= 0 || this.slots.length < this.size) break;
+      const job = slot.job;
+      if (slot.state !== 'busy' || !job?.yieldable || Atomics.load(job.cancelFlag, 0) === 1) continue;
+      Atomics.store(job.cancelFlag, 0, 1);
+      waiting--;
     }
     const starting = this.slots.filter((s) => s.state === 'starting').length;
     if (this.queue.length > starting && this.slots.length < this.size) void this.spawn();
@@ -472,7 +504,9 @@ export function mergeRosterResults(results: RosterSolveResult[]): RosterSolveRes
   const bounds = results.map((r) => r.bound).filter((b): b is number => b !== null);
   const bound = bounds.length ? Math.max(...bounds) : null;
   const anyOptimal = results.some((r) => r.status === 'optimal');
-  const status = anyOptimal && best.objective !== null ? 'optimal' : best.status;
+  // The first member runs the solve as asked, so its status says how the run ended (a member on a
+  // spare core may have been stopped early to give its core back).
+  const status = anyOptimal && best.objective !== null ? 'optimal' : results[0].status;
   return {
     ...best,
     status,
