@@ -272,6 +272,8 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       let lastWrite = 0;
       const result = await this.solverPool().solveRoster(input.problem, {
         timeLimitSeconds: run.timeLimitSeconds,
+        // A core nobody else needs helps this solve, and is given back as soon as another run waits.
+        spareCores: true,
         signal: entry.cancel.signal,
         killSignal: entry.kill.signal,
         onProgress: (p) => {
