@@ -116,6 +116,27 @@ describe('bench command', () => {
     expect(ev.penalty).toBe(results[1].objective);
   });
 
+  it('adds the textbook column beside the product: both solve the small file to the same optimum', async () => {
+    const file = path.join(dir, 'Small.txt');
+    fs.writeFileSync(file, SMALL);
+    const printed: string[] = [];
+    jest.spyOn(console, 'log').mockImplementation((s: string) => void printed.push(s));
+    jest.spyOn(process.stderr, 'write').mockImplementation(() => true);
+    expect(parseArgs(['1', '--beside-textbook']).besideTextbook).toBe(true);
+    const outDir = path.join(dir, 'beside');
+    expect(await main([file, '--time-limit', '20', '--out', outDir, '--beside-textbook'])).toBe(0);
+    const json = JSON.parse(fs.readFileSync(path.join(outDir, 'Small.json'), 'utf8'));
+    const table = printed.join('\n');
+    expect(table).toMatch(/\| textbook beside \| product ≤ textbook \|/);
+    const row = table.split('\n').find((l) => l.startsWith('| Small'))!;
+    const cells = row.split('|').map((c) => c.trim());
+    expect(cells.slice(-3, -1)).toEqual([String(json.objective), 'yes']);
+    const errors: string[] = [];
+    jest.spyOn(console, 'error').mockImplementation((e: string) => void errors.push(e));
+    expect(await main([file, '--beside-textbook', '--cores', '2'])).toBe(1);
+    expect(errors.join('\n')).toMatch(/one core each: use it with --cores 1/);
+  });
+
   it('reports a missing or broken file and exits non-zero', async () => {
     const broken = path.join(dir, 'Broken.txt');
     fs.writeFileSync(broken, SMALL.replace('E,480,', 'E,eight hours,'));

@@ -2,7 +2,7 @@
  * Benchmark command line:
  *   npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]
  *                    [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]
- *                    [--cores 1|2]
+ *                    [--cores 1|2] [--beside-textbook]
  * Instances are numbers 1-24 (InstanceN.txt in $ROTAPLEX_BENCHMARKS_DIR, default
  * ../shared/benchmarks/curtois-qu beside the repository), ranges such as 1-12, or paths to files
  * in the same format. Each instance is solved in turn by the product's solve path; a table is
@@ -11,7 +11,16 @@
  */
 import type { SolveProgress } from '../result';
 import type { SolveRosterOptions } from '../solve/solve';
-import { formatTable, runInstance, tableRow, writeBenchJson, type BenchRun } from './runner';
+import {
+  formatTable,
+  runInstance,
+  TABLE_HEADER,
+  tableRow,
+  TEXTBOOK_HEADER,
+  textbookCells,
+  writeBenchJson,
+  type BenchRun,
+} from './runner';
 
 interface CliOptions {
   instances: string[];
@@ -23,6 +32,8 @@ interface CliOptions {
   model: 'product' | 'textbook';
   strategy?: SolveRosterOptions['strategy'];
   cores: number;
+  /** Solve the plain model beside the product and add its column (one core each). */
+  besideTextbook?: boolean;
 }
 
 const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
@@ -30,6 +41,7 @@ const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
 const USAGE =
   'Usage: npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]\n' +
   '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise] [--cores 1|2]\n' +
+  '       [--beside-textbook]\n' +
   '  instances: numbers 1-24, ranges like 1-12, or paths to instance files';
 
 export function parseArgs(argv: string[]): CliOptions {
@@ -58,6 +70,7 @@ export function parseArgs(argv: string[]): CliOptions {
     else if (arg === '--gap') options.mipRelGap = Number(value(i++, arg));
     else if (arg === '--seed') options.randomSeed = Number(value(i++, arg));
     else if (arg === '--no-warm-start') options.warmStart = false;
+    else if (arg === '--beside-textbook') options.besideTextbook = true;
     else if (arg === '--cores') {
       const v = value(i++, arg);
       if (v !== '1' && v !== '2') throw new Error(`--cores is 1 or 2, got "${v}".`);
@@ -119,15 +132,16 @@ export async function main(argv: string[]): Promise<number> {
         model: options.model,
         strategy: options.strategy,
         cores: options.cores,
+        besideTextbook: options.besideTextbook,
         onProgress: progressPrinter(ref),
       });
     } catch (err) {
       failures++;
       console.error(`${ref}: ${(err as Error).message}`);
-      rows.push([String(ref), '', '', '', '', '', '', '', '', '', '', 'error']);
+      rows.push([String(ref), ...TABLE_HEADER.slice(1, -1).map(() => ''), 'error']);
       continue;
     }
-    const row = tableRow(run);
+    const row = options.besideTextbook ? [...tableRow(run), ...textbookCells(run)] : tableRow(run);
     if (row[row.length - 1].includes('MISMATCH')) failures++;
     rows.push(row);
     if (options.outDir) {
@@ -135,7 +149,9 @@ export async function main(argv: string[]): Promise<number> {
       process.stderr.write(`${ref}: ${run.status}, objective ${run.objective ?? '–'}; wrote ${file}\n`);
     }
   }
-  console.log(formatTable(rows));
+  console.log(
+    formatTable(rows, options.besideTextbook ? [...TABLE_HEADER, ...TEXTBOOK_HEADER] : TABLE_HEADER),
+  );
   return failures > 0 ? 1 : 0;
 }
 

@@ -29,6 +29,11 @@ export interface BenchRunOptions {
    * baseline for what the product's modelling gains.
    */
   model?: 'product' | 'textbook';
+  /**
+   * Also solve the plain SOURCES.md §4 model with the same time limit at the same time, on the
+   * second core (a solver-pool worker), and report it as a column beside the product (one core each).
+   */
+  besideTextbook?: boolean;
   /** The product path's strategy (default: solveRoster's own default, 'auto'). */
   strategy?: SolveRosterOptions['strategy'];
   /**
@@ -69,6 +74,24 @@ async function solveTextbook(loaded: LoadedInstance, options: BenchRunOptions): 
     roster = model.decode(values);
   }
   return { ...run, roster, columns: arrays.numCols, rows: arrays.numRows };
+}
+
+/** The plain model on a solver-pool worker (the other core), with the benchmark's own evaluation. */
+async function solveTextbookBeside(
+  loaded: LoadedInstance,
+  options: BenchRunOptions,
+): Promise<{ objective: number | null; valid: boolean }> {
+  const model = textbookModel(loaded.instance);
+  const arrays = linearProgramToHighs(model.lp);
+  const run = await sharedSolverPool().solveMip(arrays as unknown as ModelData, {
+    timeLimitSeconds: options.timeLimitSeconds,
+    randomSeed: options.randomSeed,
+  });
+  if (!run.values) return { objective: null, valid: true };
+  const values: Record<string, number> = {};
+  model.lp.columns.forEach((c, j) => (values[c.name] = (run.values as Float64Array)[j]));
+  const evaluation = evaluateBenchmarkRoster(loaded.instance, model.decode(values));
+  return { objective: evaluation.penalty, valid: evaluation.violations.length === 0 };
 }
 
 async function solveProduct(loaded: LoadedInstance, options: BenchRunOptions): Promise<SolvedRoster> {
@@ -118,13 +141,19 @@ export interface BenchRun {
   /** The benchmark's own penalty (evaluate.ts, SOURCES.md §4) and violations for the roster. */
   benchmarkPenalty: number | null;
   benchmarkViolations: number;
+  /** With `besideTextbook`: the plain model's penalty in the same time (benchmark evaluator), and whether its roster is valid. */
+  textbook?: { objective: number | null; valid: boolean };
 }
 
 export async function runInstance(ref: string | number, options: BenchRunOptions): Promise<BenchRun> {
   const loaded = loadInstance(ref);
   const { name, file, instance, problem } = loaded;
+  if (options.besideTextbook && (options.model === 'textbook' || (options.cores ?? 1) > 1))
+    throw new Error('The textbook column runs beside the product on one core each: use it with --cores 1.');
+  const beside = options.besideTextbook ? solveTextbookBeside(loaded, options) : null;
   const result =
     options.model === 'textbook' ? await solveTextbook(loaded, options) : await solveProduct(loaded, options);
+  const textbook = beside ? await beside : undefined;
   const roster = result.roster;
   const check = roster ? checkRoster(problem, roster) : null;
   const evaluation = roster ? evaluateBenchmarkRoster(instance, roster) : null;
@@ -155,6 +184,7 @@ export async function runInstance(ref: string | number, options: BenchRunOptions
     checkerViolations: check?.violations.length ?? 0,
     benchmarkPenalty: evaluation?.penalty ?? null,
     benchmarkViolations: evaluation?.violations.length ?? 0,
+    textbook,
   };
 }
 
@@ -258,12 +288,27 @@ export function tableRow(run: BenchRun): string[] {
   ];
 }
 
-/** A Markdown table (also readable in a terminal). */
-export function formatTable(rows: string[][]): string {
-  const all = [TABLE_HEADER, ...rows];
-  const widths = TABLE_HEADER.map((_, i) => Math.max(...all.map((r) => (r[i] ?? '').length)));
+/** Columns added by `besideTextbook`. */
+export const TEXTBOOK_HEADER = ['textbook beside', 'product ≤ textbook'];
+
+/** The textbook columns of a run: the plain model's penalty, and whether the product did at least as well. */
+export function textbookCells(run: BenchRun): string[] {
+  const t = run.textbook;
+  if (!t) return ['–', '–'];
+  const value = t.objective === null ? '–' : `${t.objective}${t.valid ? '' : ' (INVALID)'}`;
+  const atLeastAsGood =
+    run.objective === null
+      ? 'no'
+      : t.objective === null || !t.valid || run.objective <= t.objective
+        ? 'yes'
+        : 'no';
+  return [value, atLeastAsGood];
+}
+
+/** A Markdown table (also readable in a terminal); `header` defaults to TABLE_HEADER. */
+export function formatTable(rows: string[][], header: string[] = TABLE_HEADER): string {
+  const all = [header, ...rows];
+  const widths = header.map((_, i) => Math.max(...all.map((r) => (r[i] ?? '').length)));
   const line = (r: string[]): string => `| ${r.map((c, i) => (c ?? '').padEnd(widths[i])).join(' | ')} |`;
-  return [line(TABLE_HEADER), `| ${widths.map((w) => '-'.repeat(w)).join(' | ')} |`, ...rows.map(line)].join(
-    '\n',
-  );
+  return [line(header), `| ${widths.map((w) => '-'.repeat(w)).join(' | ')} |`, ...rows.map(line)].join('\n');
 }
