@@ -1,4 +1,4 @@
-import { type UnitDto, type UserDto } from '@rotaplex/contracts';
+import { REFRESH_COOKIE, type UnitDto, type UserDto } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -8,7 +8,7 @@ import { createApp } from '../src/app';
 import { MAX_JSON_BODY_BYTES, MAX_JSON_DEPTH } from '../src/common/http/body-limits';
 import { loadConfig, resolveJwtSecret } from '../src/config/app-config';
 import { DEMO_PASSWORD, DEMO_USERS } from '../src/demo/demo-data';
-import { api, bearer, startTestApp, type TestApp } from './support/test-app';
+import { api, bearer, refreshCookieOf, startTestApp, type TestApp } from './support/test-app';
 
 type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
 interface Operation {
@@ -51,6 +51,17 @@ interface OpenApiDoc {
 
 const BODY_METHODS = ['POST', 'PUT', 'PATCH', 'DELETE'];
 const HUGE_PAGE = '99999999999999999999';
+/**
+ * Requests without a body, as clients send them: none at all, Content-Length: 0 with a type (a
+ * fetch() or sendBeacon() of an empty string), and chunked with no bytes (a stream that ends at once).
+ */
+const BODILESS: Record<string, Record<string, string>> = {
+  'with no body or type': {},
+  'with Content-Length: 0 and text/plain': { 'Content-Type': 'text/plain;charset=UTF-8' },
+  'with Content-Length: 0 and application/json': { 'Content-Type': 'application/json' },
+  'chunked with no bytes and text/plain': { 'Content-Type': 'text/plain', 'Transfer-Encoding': 'chunked' },
+  'chunked with no bytes and no type': { 'Transfer-Encoding': 'chunked' },
+};
 /** JSON nested 2,000 deep: this overflowed class-transformer's stack (a 500 on every JSON route). */
 const DEEP_JSON = `{"a":${'['.repeat(2000)}${']'.repeat(2000)}}`;
 
@@ -201,6 +212,18 @@ describe('bad input is a 4xx with a clear message, and changes nothing', () => {
       expect(failures).toEqual([]);
     });
 
+    it('never answers a request without a body with 415, whatever Content-Type it names', async () => {
+      const failures: string[] = [];
+      for (const op of ops.filter((o) => BODY_METHODS.includes(o.method))) {
+        for (const [name, headers] of Object.entries(BODILESS)) {
+          const res = await probe(op, (r) => r.set(headers));
+          if (res.status === 415 || res.status >= 500)
+            failures.push(`${op.key} ${name} → ${res.status} ${JSON.stringify(res.body)}`);
+        }
+      }
+      expect(failures).toEqual([]);
+    });
+
     it('answers wrong-typed body fields and query parameters with a 4xx, never a 5xx', async () => {
       const WRONG: unknown[] = [{}, 1e308, 'x'.repeat(5000), true, [{}]];
       const failures: string[] = [];
@@ -271,6 +294,21 @@ describe('bad input is a 4xx with a clear message, and changes nothing', () => {
     beforeAll(async () => {
       const units = (await t.http().get(api('/units')).set(bearer(admin)).expect(200)).body as UnitDto[];
       ward = units.find((u) => u.name === 'Ward 7 Acute Medicine')!;
+    });
+
+    it('POST /api/auth/refresh without a body refreshes the session, whatever Content-Type comes with it', async () => {
+      // The web app restores a session on every page load with this body-less call.
+      let refreshCookie = (await t.login('manager@example.com')).refreshCookie;
+      for (const [name, headers] of Object.entries(BODILESS)) {
+        const res = await t
+          .http()
+          .post(api('/auth/refresh'))
+          .set('Cookie', `${REFRESH_COOKIE}=${encodeURIComponent(refreshCookie)}`)
+          .set(headers);
+        expect(`${name} → ${res.status}`).toBe(`${name} → 200`);
+        expect(typeof res.body.accessToken).toBe('string');
+        refreshCookie = refreshCookieOf(res);
+      }
     });
 
     it('PATCH /api/users/:id with unitIds: null is a 400 and keeps the user in their units', async () => {

@@ -34,16 +34,24 @@ export function useBodyLimits(app: NestExpressApplication, apiPrefix: string, do
   const isApi = (req: Request) => req.path === apiPrefix || req.path.startsWith(`${apiPrefix}/`);
 
   app.use((req: Request, _res: Response, next: NextFunction) => {
-    if (!isApi(req) || !BODY_METHODS.has(req.method) || !hasBody(req)) return next();
+    if (!isApi(req) || !BODY_METHODS.has(req.method) || !mayHaveBody(req)) return next();
     if (ownTypeRoutes.some((r) => r.method === req.method && r.path.test(req.path))) return next();
     if (req.is(JSON_TYPES)) return next();
     const type = req.headers['content-type'];
-    next(
-      new UnsupportedMediaTypeException([
-        type
-          ? `body must be JSON sent with Content-Type: application/json, not ${type.split(';')[0].trim()}`
-          : 'body must be JSON sent with Content-Type: application/json',
-      ]),
+    const refuse = () =>
+      next(
+        new UnsupportedMediaTypeException([
+          type
+            ? `body must be JSON sent with Content-Type: application/json, not ${type.split(';')[0].trim()}`
+            : 'body must be JSON sent with Content-Type: application/json',
+        ]),
+      );
+    if (Number(req.headers['content-length']) > 0) return refuse();
+    // Chunked, with no length: only the bytes tell whether a body came. None is no body (a
+    // body-less POST such as the session refresh), whatever Content-Type the client put on it.
+    receivesBytes(req).then(
+      (some) => (some ? refuse() : next()),
+      () => next(new BadRequestException(['the request body could not be read'])),
     );
   });
   app.use(
@@ -86,9 +94,43 @@ const bodyParserErrors = (err: unknown, _req: Request, _res: Response, next: Nex
   }
 };
 
-/** Whether the request carries a body (an empty one, Content-Length: 0, is none). */
-function hasBody(req: Request): boolean {
+/**
+ * Whether the request may carry a body: a positive Content-Length, or Transfer-Encoding (length
+ * unknown until it ends). No Content-Length, or Content-Length: 0, is no body.
+ */
+function mayHaveBody(req: Request): boolean {
   return req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length']) > 0;
+}
+
+/**
+ * Reads a body of unknown length until its first byte (true) or its end (false). After a byte, the
+ * rest is read and dropped, so the connection stays usable for the answer.
+ */
+function receivesBytes(req: Request): Promise<boolean> {
+  return new Promise((resolve, reject) => {
+    const stop = () => {
+      req.off('data', onData);
+      req.off('end', onEnd);
+      req.off('error', onError);
+    };
+    const onData = (chunk: Buffer) => {
+      if (chunk.length === 0) return;
+      stop();
+      req.resume();
+      resolve(true);
+    };
+    const onEnd = () => {
+      stop();
+      resolve(false);
+    };
+    const onError = (err: Error) => {
+      stop();
+      reject(err);
+    };
+    req.on('data', onData);
+    req.once('end', onEnd);
+    req.once('error', onError);
+  });
 }
 
 /** Operations whose OpenAPI request body is not JSON (e.g. text/csv uploads), as method and path pattern. */
