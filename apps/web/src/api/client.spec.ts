@@ -15,6 +15,8 @@ interface Fake {
   refreshCalls: number;
   refreshWorks: boolean;
   seenAuth: string[];
+  /** Content-Type and body length of each request, by method and URL. */
+  sent: Record<string, { type: string | undefined; length: string | undefined }>;
 }
 
 const me = {
@@ -42,8 +44,13 @@ async function start(): Promise<Fake> {
     refreshCalls: 0,
     refreshWorks: true,
     seenAuth: [],
+    sent: {},
   };
   fake.server.on('request', (req: IncomingMessage, res: ServerResponse) => {
+    fake.sent[`${req.method} ${req.url}`] = {
+      type: req.headers['content-type'],
+      length: req.headers['content-length'],
+    };
     if (req.url === `/api${API_ROUTES.auth.refresh}`) {
       fake.refreshCalls += 1;
       // Answer late, so concurrent callers overlap with the refresh in flight.
@@ -111,5 +118,15 @@ describe('fetch client', () => {
     expect(await refreshSession()).toBe(true);
     expect(session.getState().status).toBe('signedIn');
     expect(REFRESH_COOKIE).toBeTruthy();
+  });
+
+  it('names a Content-Type only when it sends a JSON body (the API refuses a typed body that is not JSON)', async () => {
+    session.signedOut();
+    await refreshSession();
+    await apiRequest('/action', { method: 'POST' });
+    await apiRequest('/json', { method: 'POST', body: { name: 'x' } });
+    expect(fake.sent[`POST /api${API_ROUTES.auth.refresh}`]).toEqual({ type: undefined, length: '0' });
+    expect(fake.sent['POST /api/action']).toEqual({ type: undefined, length: '0' });
+    expect(fake.sent['POST /api/json']).toEqual({ type: 'application/json', length: '12' });
   });
 });
