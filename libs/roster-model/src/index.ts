@@ -22,6 +22,12 @@ export {
   type RosterSearchOptions,
   type RosterSearchResult,
 } from './lib/search/roster-search';
+export {
+  staffingSafety,
+  staffingShortfall,
+  staffingStatement,
+  shortfallOnlyProblem,
+} from './lib/safety/staffing';
 export * from './lib/solve';
 export * from './lib/pool';
 export * from './lib/explain';

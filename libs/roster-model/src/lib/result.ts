@@ -85,6 +85,20 @@ export interface ConflictExplanation {
   summary: string;
 }
 
+/** How far a roster falls below minimum cover, and whether any roster could do better (safety/staffing.ts). */
+export interface StaffingSafety {
+  /** People short of a need's minimum, summed over the needs. */
+  peopleShort: number;
+  /** Shifts (day and shift type) with any need below its minimum. */
+  shiftsShort: number;
+  /** Needs with a required skill that have nobody with it. */
+  noneOfSkill: number;
+  /** Fewest people short any roster can have with these people, leave and rules; null when unknown. */
+  fewestPossible: number | null;
+  /** Whether fewestPossible is proved (a roster with that many exists and none can have fewer). */
+  proven: boolean;
+}
+
 export interface SolveResult {
   status: SolveStatus;
   roster: Roster | null;
@@ -100,4 +114,8 @@ export interface SolveResult {
   unmetNeeds: UnmetNeedExplanation[];
   requestsNotHonoured: RequestExplanation[];
   conflicts: ConflictExplanation | null;
+  /** Shortfall below minimum cover and the fewest possible (with explanations; null without a roster). */
+  staffing?: StaffingSafety | null;
+  /** The staffing safety in plain words with the usual advice ('' when nothing is below minimum). */
+  staffingStatement?: string;
 }

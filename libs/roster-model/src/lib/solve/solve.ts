@@ -13,7 +13,7 @@
  * runs it in a worker thread for servers.
  */
 import type { Roster, RosterProblem } from '../problem';
-import type { CheckResult, ConflictExplanation, SolveProgress, SolveResult } from '../result';
+import type { CheckResult, ConflictExplanation, SolveProgress, SolveResult, StaffingSafety } from '../result';
 import { checkRoster } from '../check/checker';
 import { explainConflicts } from '../explain/conflicts';
 import { qualityStatement } from '../explain/quality';
@@ -23,6 +23,7 @@ import { construct, improve } from '../heuristic/construct';
 import { fixAndOptimise, type SubMipSolver } from '../heuristic/fix-and-optimise';
 import { buildModel, type BuiltModel } from '../model/build-model';
 import { searchRoster } from '../search/roster-search';
+import { staffingSafety, staffingShortfall, staffingStatement } from '../safety/staffing';
 import { type HighsSession, isWasmFailure } from './highs-session';
 import { isCancelled, relativeGap, runMip, solverArrays, threadSession, type MipRunResult } from './run-mip';
 
@@ -74,6 +75,11 @@ export interface SolveRosterOptions {
   fixAndOptimiseShare?: number;
   /** Time limit of each fix-and-optimise sub-MIP in seconds (default FIX_AND_OPTIMISE_SUB_SECONDS). */
   fixAndOptimiseSubSeconds?: number;
+  /**
+   * Count the shortfall below minimum cover and prove the fewest possible (safety/staffing.ts) in the
+   * last STAFFING_SHARE of the limit (at most STAFFING_MAX_SECONDS). Default: as `explain`.
+   */
+  staffingCheck?: boolean;
   /**
    * Share of the time limit (after model building) for the local search (search/roster-search.ts)
    * that runs from the construction heuristic's roster before HiGHS starts (default AUTO_SEARCH_SHARE;
@@ -128,6 +134,12 @@ export const AUTO_SEARCH_SHARE = 0.4;
  * its time so far: small problems then reach HiGHS (which proves them optimal) within a second or two.
  */
 const SEARCH_STALL_MS = 1000;
+
+/** Share of the time limit, and most seconds, kept for proving the fewest people short of minimum. */
+export const STAFFING_SHARE = 0.1;
+export const STAFFING_MAX_SECONDS = 10;
+/** Seconds the staffing proof gets at least (when the time limit leaves them). */
+const STAFFING_MIN_SECONDS = 1;
 
 /** Progress events at most this often (HiGHS's own events keep the same interval). */
 const PROGRESS_INTERVAL_MS = 250;
@@ -412,7 +424,13 @@ export async function solveRoster(
   const session = options.session ?? (await threadSession());
   await session.ensureHealthy();
   const built = buildModel(problem);
-  const timeLimitSeconds = options.timeLimitSeconds ?? 60;
+  const requestedSeconds = options.timeLimitSeconds ?? 60;
+  const checkStaffing = options.staffingCheck ?? options.explain ?? true;
+  // The last part of the limit proves the fewest people short of minimum (safety/staffing.ts).
+  const staffingSeconds = checkStaffing
+    ? Math.min(STAFFING_MAX_SECONDS, requestedSeconds * STAFFING_SHARE)
+    : 0;
+  const timeLimitSeconds = requestedSeconds - staffingSeconds;
   const progressClock = { last: -Infinity };
   const startRoster = warmStartRoster(built, problem, options, timeLimitSeconds, clockStart, progressClock);
   let start = startValuesOf(built, startRoster);
@@ -597,6 +615,19 @@ export async function solveRoster(
   const objective = check.objective;
   const bound = run.bound === null ? null : Math.min(run.bound, objective);
   const gap = relativeGap(objective, bound);
+  let staffing: StaffingSafety | null = null;
+  if (checkStaffing) {
+    const seconds = isCancelled(options)
+      ? 0
+      : Math.min(requestedSeconds - elapsed(), Math.max(staffingSeconds, STAFFING_MIN_SECONDS));
+    try {
+      staffing = staffingSafety(session, built.index, roster, seconds, options);
+    } catch (err) {
+      if (isWasmFailure(err)) session.markBroken();
+      // The roster stands; only the proof is missing.
+      staffing = { ...staffingShortfall(built.index, roster), fewestPossible: null, proven: false };
+    }
+  }
   return {
     status: run.status,
     roster,
@@ -607,6 +638,8 @@ export async function solveRoster(
     secondsToBest,
     check,
     quality: qualityStatement({ status: run.status, objective, bound }),
+    staffing,
+    staffingStatement: staffing ? staffingStatement(staffing) : '',
     unmetNeeds: explain ? explainUnmetNeeds(problem, roster, built.index) : [],
     requestsNotHonoured: explain ? explainRequests(problem, roster, built.index) : [],
     conflicts: null,
