@@ -198,6 +198,19 @@ describe('solve runs', () => {
     expect(run.finishedAt).not.toBeNull();
     expect(run.result!.quality.length).toBeGreaterThan(10);
     expect(run.result!.objective).not.toBeNull();
+    // Staffing safety is part of every result: people short of minimum agree with the roster's own
+    // under-minimum term, the fewest possible is never more, and words come exactly when any is short.
+    const staffing = run.result!.staffing!;
+    expect(staffing).toEqual({
+      peopleShort: expect.any(Number),
+      shiftsShort: expect.any(Number),
+      noneOfSkill: expect.any(Number),
+      fewestPossible: expect.any(Number),
+      proven: expect.any(Boolean),
+    });
+    expect(staffing.peopleShort === 0).toBe(run.result!.terms!.coverUnderMin === 0);
+    expect(staffing.fewestPossible!).toBeLessThanOrEqual(staffing.peopleShort);
+    expect(run.result!.staffingStatement === '').toBe(staffing.peopleShort === 0);
 
     // The stored roster, read back and re-checked by the independent checker, is the solver's roster:
     // no hard-rule violation and the same objective (the solver's own result is checked the same way).

@@ -403,6 +403,8 @@ function summaryOf(input: RosterInput, result: PoolSolveResult): SolveRunResultD
     bound: result.bound,
     gap: result.gap,
     quality: result.quality,
+    staffing: result.staffing ?? null,
+    staffingStatement: result.staffingStatement ?? '',
     explanations: {
       unmetNeeds: result.unmetNeeds.map((u) => ({
         date: date(u.day),

@@ -81,6 +81,26 @@ export interface SolveRunResultDto {
   explanations: SolveExplanationsDto;
   /** Weighted value of each goal of the saved roster. */
   terms: Record<string, number> | null;
+  /**
+   * Shortfall below minimum cover of the saved roster and the fewest any roster could have with these
+   * people, leave and rules (null for runs without a roster, and for runs saved before it existed).
+   */
+  staffing?: StaffingSafetyDto | null;
+  /** The staffing safety in plain words with the usual advice; '' when every minimum is met. */
+  staffingStatement?: string;
+}
+
+export interface StaffingSafetyDto {
+  /** People short of a need's minimum, summed over the needs. */
+  peopleShort: number;
+  /** Shifts (date and shift type) with any need below its minimum. */
+  shiftsShort: number;
+  /** Needs with a required skill that have nobody with it. */
+  noneOfSkill: number;
+  /** Fewest people short any roster can have; null when not proved in time. */
+  fewestPossible: number | null;
+  /** Whether fewestPossible is proved. */
+  proven: boolean;
 }
 
 /** What a run does: generate a draft's roster, or repair a published one (fewest changes). */

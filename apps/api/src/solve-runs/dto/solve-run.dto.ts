@@ -85,7 +85,8 @@ export class SolveRunResponse implements SolveRunDto {
   @ApiProperty({
     type: 'object',
     nullable: true,
-    description: 'solverStatus, objective, bound, gap, quality, explanations, terms',
+    description:
+      'solverStatus, objective, bound, gap, quality, staffing, staffingStatement, explanations, terms',
     additionalProperties: true,
   })
   result!: SolveRunResultDto | null;
