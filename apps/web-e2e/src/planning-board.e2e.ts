@@ -44,6 +44,12 @@ describe('planning board as the demo manager', () => {
     await screenshot(page, 'planning-board-progress');
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
     expect((await page.getByTestId('quality-statement').innerText()).trim().length).toBeGreaterThan(10);
+    // The demo ward cannot be staffed to its minimums: the board says so first, in words, with the
+    // proven fewest and the usual advice, not as a success.
+    const safety = page.getByTestId('staffing-safety');
+    expect(await safety.innerText()).toMatch(
+      /Below minimum staffing[\s\S]*\d+ shifts? (is|are) below minimum staffing \(\d+ (person|people) short[\s\S]*bank or agency staff/,
+    );
     await page
       .getByRole('region', { name: 'Explanations' })
       .getByText(/Unmet needs \(\d+\)/)

@@ -167,7 +167,18 @@ export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames }: 
       )}
       {run?.result && !active && (
         <>
-          <MessageBar intent={run.result.objective === null ? 'warning' : 'success'}>
+          {run.result.staffingStatement ? (
+            // Below minimum cover is a safety finding: it comes first and is never shown as a success.
+            <MessageBar intent="error" data-testid="staffing-safety">
+              <MessageBarBody>
+                <MessageBarTitle>Below minimum staffing</MessageBarTitle>
+                {run.result.staffingStatement}
+              </MessageBarBody>
+            </MessageBar>
+          ) : null}
+          <MessageBar
+            intent={run.result.objective === null || run.result.staffingStatement ? 'warning' : 'success'}
+          >
             <MessageBarBody>
               <MessageBarTitle>Quality</MessageBarTitle>
               <span data-testid="quality-statement">{run.result.quality}</span>
