@@ -47,6 +47,24 @@ describe('searchRoster', () => {
     }
   });
 
+  it('gives up when it finds no roster that keeps every rule', () => {
+    // Nobody may work more than 2 shifts but one person must be paid for 5: no roster keeps every rule.
+    const problem = randomProblem(5, 4, 7);
+    problem.people[0].contract = {
+      ...problem.people[0].contract,
+      minPaidMinutes: 5 * 480,
+      maxPaidMinutes: 2 * 480,
+    };
+    const index = new ProblemIndex(problem);
+    const result = searchRoster(index, construct(problem, { maxIterations: 100 }), {
+      maxMoves: Number.MAX_SAFE_INTEGER,
+      timeLimitMs: LONG,
+      giveUpMs: 200,
+    });
+    expect(result.feasible).toBe(false);
+    expect(checkRoster(problem, result.roster, index).violations.length).toBeGreaterThan(0);
+  });
+
   it('stops at a target objective and never reports below the proven optimum', () => {
     const { problem } = loadInstance(1);
     const index = new ProblemIndex(problem);

@@ -85,6 +85,11 @@ export interface RosterSearchOptions {
    * searched so far (a search that has settled; the solve goes on with HiGHS). Default: never.
    */
   stallMs?: number;
+  /**
+   * Stop when no roster that keeps every hard rule has been found after this many milliseconds (a
+   * problem this search does not make feasible in time is left to the exact methods). Default: never.
+   */
+  giveUpMs?: number;
   /** Stop as soon as a roster that breaks no hard rule costs at most this. */
   targetObjective?: number;
   /** Start temperature as a multiple of the typical soft weight (default 1). */
@@ -429,6 +434,7 @@ export class RosterSearch {
       if ((moves & 1023) === 0) {
         const now = performance.now();
         if (now - started >= limitMs) break;
+        if (best === Infinity && options.giveUpMs !== undefined && now - started >= options.giveUpMs) break;
         if (stallMs !== undefined && best < Infinity) {
           const quiet = now - started - bestAt;
           if (quiet >= stallMs && quiet >= 0.5 * (now - started)) break;
