@@ -17,6 +17,7 @@ import { DataSource, type EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
+import { type CellChangeBy, PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { AssignmentEntity } from './assignment.entity';
@@ -30,6 +31,7 @@ export class AssignmentsService {
     private readonly periods: RosterPeriodsService,
     private readonly input: RosterInputService,
     private readonly audit: AuditService,
+    private readonly writer: PeriodWriter,
     writes: WriteGeneration,
   ) {
     this.grids = new GenerationCache(writes);
@@ -80,21 +82,13 @@ export class AssignmentsService {
         ]);
       }
       // A manual edit keeps the cell's pin; an unpinned day off is stored as no row.
-      const pinned = existing?.pinned ?? false;
-      if (body.shiftTypeId === null && !pinned) {
-        if (existing) await em.remove(existing);
-      } else {
-        const row =
-          existing ??
-          em.create(AssignmentEntity, {
-            rosterPeriodId: periodId,
-            staffMemberId: body.staffMemberId,
-            date: body.date,
-          });
-        row.shiftTypeId = body.shiftTypeId;
-        row.pinned = pinned;
-        await em.save(row);
-      }
+      const cell = {
+        staffMemberId: body.staffMemberId,
+        date: body.date,
+        shiftTypeId: body.shiftTypeId,
+        pinned: existing?.pinned ?? false,
+      };
+      await this.writer.writeCells(em, periodId, [cell], { kind: 'edit', actorUserId: user.id });
       if (broken.length > 0) {
         const name = input.staff.find((s) => s.id === body.staffMemberId)?.name ?? body.staffMemberId;
         await this.audit.record(em, {
@@ -139,25 +133,17 @@ export class AssignmentsService {
         staffMemberId: body.staffMemberId,
         date: body.date,
       });
-      if (pinned) {
-        // Pinning an empty cell pins the day off.
-        const row =
-          existing ??
-          em.create(AssignmentEntity, {
-            rosterPeriodId: periodId,
-            staffMemberId: body.staffMemberId,
-            date: body.date,
-            shiftTypeId: null,
-          });
-        row.pinned = true;
-        await em.save(row);
-      } else if (existing) {
-        if (existing.shiftTypeId === null) await em.remove(existing);
-        else {
-          existing.pinned = false;
-          await em.save(existing);
-        }
-      }
+      // Pinning an empty cell pins the day off; unpinning a pinned day off leaves no row.
+      const cell = {
+        staffMemberId: body.staffMemberId,
+        date: body.date,
+        shiftTypeId: existing?.shiftTypeId ?? null,
+        pinned,
+      };
+      await this.writer.writeCells(em, periodId, [cell], {
+        kind: pinned ? 'pin' : 'unpin',
+        actorUserId: user.id,
+      });
     });
     return this.gridOf(periodId);
   }
@@ -311,26 +297,24 @@ function assertCell(input: RosterInput, staffMemberId: string, date: string): vo
 }
 
 /**
- * Replaces the unpinned cells of a period with a solved roster, in the caller's transaction.
- * Pinned cells stay as they are (the solver kept them).
+ * Replaces the unpinned cells of a period with a solved roster through the period's writer, in the
+ * caller's transaction (the version rises when a cell changed). Pinned cells stay as they are (the
+ * solver kept them). Answers the period's version after the change.
  */
-export async function saveSolvedRoster(em: EntityManager, input: RosterInput, roster: Roster): Promise<void> {
-  const periodId = input.period.id;
-  await em.delete(AssignmentEntity, { rosterPeriodId: periodId, pinned: false });
-  const pinned = new Set(
-    (await em.findBy(AssignmentEntity, { rosterPeriodId: periodId, pinned: true })).map(
-      (a) => `${a.staffMemberId}|${a.date}`,
-    ),
-  );
-  const rows: Partial<AssignmentEntity>[] = [];
+export async function saveSolvedRoster(
+  em: EntityManager,
+  writer: PeriodWriter,
+  input: RosterInput,
+  roster: Roster,
+  by: CellChangeBy,
+): Promise<number> {
+  const shifts: { staffMemberId: string; date: string; shiftTypeId: string }[] = [];
   for (const s of input.staff) {
     const days = roster[s.id];
     if (!days) continue;
     days.forEach((shiftTypeId, d) => {
-      const date = input.dates[d];
-      if (shiftTypeId === null || pinned.has(`${s.id}|${date}`)) return;
-      rows.push({ rosterPeriodId: periodId, staffMemberId: s.id, date, shiftTypeId, pinned: false });
+      if (shiftTypeId !== null) shifts.push({ staffMemberId: s.id, date: input.dates[d], shiftTypeId });
     });
   }
-  for (let i = 0; i < rows.length; i += 200) await em.insert(AssignmentEntity, rows.slice(i, i + 200));
+  return writer.replaceUnpinned(em, input.period.id, shifts, by);
 }

@@ -11,6 +11,7 @@ import { ContractEntity } from '../contracts/contract.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { RosterPeriodChangeEntity } from '../roster-periods/roster-period-change.entity';
 import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { CalendarFeedEntity, CalendarFeedEventEntity } from '../my-roster/calendar-feed.entity';
@@ -34,6 +35,7 @@ export const ENTITIES = [
   CoverPatternRowEntity,
   CoverOverrideEntity,
   RosterPeriodEntity,
+  RosterPeriodChangeEntity,
   SolveRunEntity,
   AssignmentEntity,
   CalendarFeedEntity,

@@ -43,6 +43,7 @@ describe('database migrations', () => {
         'organisations',
         'outbox_messages',
         'refresh_tokens',
+        'roster_period_changes',
         'roster_periods',
         'roster_publications',
         'shift_types',

@@ -22,6 +22,7 @@ import { AppConfig } from '../config/app-config';
 import { ContractEntity } from '../contracts/contract.entity';
 import { MailService } from '../mail/mail.service';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { SolveRunEntity } from '../solve-runs/solve-run.entity';
@@ -42,6 +43,7 @@ export class PublishingService {
     private readonly mail: MailService,
     private readonly audit: AuditService,
     private readonly solveRuns: SolveRunsService,
+    private readonly writer: PeriodWriter,
   ) {}
 
   /**
@@ -97,11 +99,8 @@ export class PublishingService {
       if (period.status !== 'draft') {
         throw new ConflictException(`Only a draft period can be published; this one is ${period.status}`);
       }
-      if (period.version !== version) {
-        throw new ConflictException(
-          `The period was changed meanwhile (version ${period.version}, not ${version}): reload it and check the roster again`,
-        );
-      }
+      // A stale version answers 409 with the cell changes made since it (StaleVersionDto).
+      await this.writer.assertVersion(em, period, version);
       const running = await em.findOneBy(SolveRunEntity, {
         rosterPeriodId: periodId,
         status: In([...ACTIVE_SOLVE_RUN_STATUSES]),
@@ -195,14 +194,11 @@ export class PublishingService {
           );
         }
         const changes = diffRosters(input, before, roster);
-        await saveSolvedRoster(em, input, roster);
-        // Raise the period's version: clients holding the old roster must reload.
-        await em
-          .createQueryBuilder()
-          .update(RosterPeriodEntity)
-          .set({ status: 'published' })
-          .where('id = :id', { id: periodId })
-          .execute();
+        // Through the period's writer: the version rises, clients holding the old roster must reload.
+        await saveSolvedRoster(em, this.writer, input, roster, {
+          kind: 'repair',
+          actorUserId: run.requestedById,
+        });
         const after = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
         await em.insert(RosterPublicationEntity, {
           id: randomUUID(),

@@ -4,11 +4,12 @@ import { UnitsModule } from '../units/units.module';
 import { RosterPeriodEntity } from './roster-period.entity';
 import { RosterPeriodsController } from './roster-periods.controller';
 import { RosterPeriodsService } from './roster-periods.service';
+import { PeriodWriter } from './period-writer';
 
 @Module({
   imports: [TypeOrmModule.forFeature([RosterPeriodEntity]), UnitsModule],
   controllers: [RosterPeriodsController],
-  providers: [RosterPeriodsService],
-  exports: [RosterPeriodsService],
+  providers: [RosterPeriodsService, PeriodWriter],
+  exports: [RosterPeriodsService, PeriodWriter],
 })
 export class RosterPeriodsModule {}

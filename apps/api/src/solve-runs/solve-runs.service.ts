@@ -23,6 +23,7 @@ import { type Roster } from '@rotaplex/roster-model';
 import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { saveSolvedRoster } from '../assignments/assignments.service';
 import { type AuthUser } from '../common/auth-user';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
@@ -85,6 +86,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     private readonly dataSource: DataSource,
     private readonly periods: RosterPeriodsService,
     private readonly input: RosterInputService,
+    private readonly writer: PeriodWriter,
   ) {
     this.events.setMaxListeners(0);
   }
@@ -355,7 +357,10 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
         );
         return;
       }
-      await saveSolvedRoster(em, input, result.roster);
+      await saveSolvedRoster(em, this.writer, input, result.roster, {
+        kind: 'generate',
+        actorUserId: run.requestedById,
+      });
       await em.update(
         SolveRunEntity,
         { id },

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
+import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
 import { SwapExpiryService } from './swap-expiry.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';
 import { SwapLinksController, SwapsController } from './swaps.controller';
@@ -11,6 +12,7 @@ import { SwapsService } from './swaps.service';
   imports: [
     TypeOrmModule.forFeature([SwapRequestEntity, SwapLinkTokenEntity]),
     RosterInputModule,
+    RosterPeriodsModule,
     MailModule,
   ],
   controllers: [SwapsController, SwapLinksController],

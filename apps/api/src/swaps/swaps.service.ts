@@ -28,6 +28,7 @@ import { randomToken, sha256 } from '../common/crypto';
 import { assertUnitAccess, canAccessUnit } from '../common/unit-scope';
 import { AppConfig } from '../config/app-config';
 import { AuditService } from '../audit/audit.service';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { localDate } from '../demo/demo-planning';
 import { MailService, type OutgoingMail } from '../mail/mail.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
@@ -69,6 +70,7 @@ export class SwapsService {
     private readonly mail: MailService,
     private readonly config: AppConfig,
     private readonly auditTrail: AuditService,
+    private readonly writer: PeriodWriter,
   ) {
     this.linkTtlSeconds = config.swapLinkTtl;
   }
@@ -536,22 +538,19 @@ export class SwapsService {
       const message = 'The change would now break a rule: ' + newMessages(findings).join('; ');
       return refuse(message, { status: 422, message, findings });
     }
-    for (const c of changes) {
-      const existing = rows.find((r) => r.staffMemberId === c.staffMemberId && r.date === c.date);
-      if (c.after === null) {
-        if (existing) await em.delete(AssignmentEntity, { id: existing.id });
-      } else if (existing) {
-        await em.update(AssignmentEntity, { id: existing.id }, { shiftTypeId: c.after });
-      } else {
-        await em.insert(AssignmentEntity, {
-          rosterPeriodId: row.rosterPeriodId,
-          staffMemberId: c.staffMemberId,
-          date: c.date,
-          shiftTypeId: c.after,
-          pinned: false,
-        });
-      }
-    }
+    // Through the period's writer: the cells and the period's version change together.
+    const cells = changes.map((c) => ({
+      staffMemberId: c.staffMemberId,
+      date: c.date,
+      shiftTypeId: c.after,
+      pinned:
+        c.after !== null &&
+        (rows.find((r) => r.staffMemberId === c.staffMemberId && r.date === c.date)?.pinned ?? false),
+    }));
+    await this.writer.writeCells(em, row.rosterPeriodId, cells, {
+      kind: row.kind === 'claim' ? 'open-shift-claim' : 'swap',
+      actorUserId: actor.id,
+    });
     await this.setStatus(em, row, 'approved', `Approved by ${actor.displayName}`, actor.id);
     {
       await this.auditTrail.record(em, {

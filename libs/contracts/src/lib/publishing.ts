@@ -115,6 +115,40 @@ export interface PublishResultDto {
   emailed: number;
 }
 
+/** What changed the cells of a period: each change raises the period's version by one. */
+export const ROSTER_CHANGE_KINDS = [
+  'edit',
+  'pin',
+  'unpin',
+  'generate',
+  'repair',
+  'swap',
+  'open-shift-claim',
+] as const;
+export type RosterChangeKind = (typeof ROSTER_CHANGE_KINDS)[number];
+
+/** One change of a period's cells: the version it made, what, how many cells, by whom, when. */
+export interface RosterPeriodChangeDto {
+  version: number;
+  kind: RosterChangeKind;
+  /** Cells whose shift or pin changed. */
+  cells: number;
+  /** The user's name at the time; "Rotaplex (system)" when nobody asked for it. */
+  actorName: string;
+  at: string;
+}
+
+/** The body of a 409 from publish when the version sent is not the period's current one. */
+export interface StaleVersionDto {
+  statusCode: 409;
+  error: 'Conflict';
+  message: string;
+  /** The period's current version (publish with it after checking the roster again). */
+  version: number;
+  /** The cell changes since the version sent, oldest first (changes of settings are not listed). */
+  changes: RosterPeriodChangeDto[];
+}
+
 export const REPAIR_TIME_LIMIT_MIN_SECONDS = 1;
 export const REPAIR_TIME_LIMIT_MAX_SECONDS = 600;
 
