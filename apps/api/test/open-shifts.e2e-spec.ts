@@ -11,6 +11,7 @@ import {
   type SwapRequestDto,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/roster-periods/roster-periods.service';
 import { SwapRequestEntity } from '../src/swaps/swap-request.entity';
 import { linkToken, nextMailTo } from './support/mailbox';
@@ -152,9 +153,20 @@ describe('open shifts', () => {
     const { token } = linkToken(mail.text, SWAP_DECISION_WEB_PATH);
     await t.http().get(api(S.swapLink)).query({ token }).expect(200);
     expect(await cell('a', 1)).toBeNull();
+    const versionOf = async () =>
+      (await t.dataSource.manager.findOneByOrFail(RosterPeriodEntity, { id: period.id })).version;
+    const before = await versionOf();
     const approved = await t.http().post(api(S.swapLink)).send({ token, decision: 'approve' }).expect(200);
     expect(approved.body.status).toBe('approved');
     expect(await cell('a', 1)).toBe(shift['L'].id);
+    // The period's writer raised the version with the cell, and recorded the change.
+    expect(await versionOf()).toBe(before + 1);
+    expect(
+      await t.dataSource.query(
+        `SELECT "kind", "cells" FROM "roster_period_changes" WHERE "rosterPeriodId" = ? AND "version" = ?`,
+        [period.id, before + 1],
+      ),
+    ).toEqual([{ kind: 'open-shift-claim', cells: 1 }]);
     await mailTo(EMAIL.a, /Your roster has changed/);
     const audit = await t.dataSource.manager.query(
       `SELECT "kind" FROM "audit_entries" WHERE "rosterPeriodId" = ?`,

@@ -146,6 +146,69 @@ describe('POST /api/roster-periods/:id/publish', () => {
     expect((await readPeriod(other.id)).status).toBe('draft');
   });
 
+  it('a cell edit, a pin and a solve raise the version; a publish under the version read before answers 409 naming the changes', async () => {
+    // The solve of beforeAll saved the roster through the period's writer.
+    const [generated] = (await t.dataSource.query(
+      `SELECT kind, cells FROM roster_period_changes WHERE rosterPeriodId = ? ORDER BY version`,
+      [period.id],
+    )) as { kind: string; cells: number }[];
+    expect(generated.kind).toBe('generate');
+    expect(generated.cells).toBeGreaterThan(0);
+    const read = await readPeriod(period.id);
+    const g = await grid(period.id);
+    const row = g.rows.find((r) => r.cells.some((c) => c.shiftTypeId !== null))!;
+    const day = row.cells.findIndex((c) => c.shiftTypeId !== null);
+    const cell = { staffMemberId: row.staffMemberId, date: g.dates[day] };
+    const shiftTypeId = row.cells[day].shiftTypeId;
+    const edit = (body: object) =>
+      t
+        .http()
+        .put(api(R.assignmentCell(period.id)))
+        .set(bearer(planner))
+        .send({ ...cell, overrideReason: 'test', ...body })
+        .expect(200);
+    // A day off, and the shift back: two edits, the roster as it was, the version two higher.
+    await edit({ shiftTypeId: null });
+    expect((await readPeriod(period.id)).version).toBe(read.version + 1);
+    await edit({ shiftTypeId });
+    expect((await readPeriod(period.id)).version).toBe(read.version + 2);
+    // Setting a cell to what it holds changes nothing, so the version stays.
+    await edit({ shiftTypeId });
+    expect((await readPeriod(period.id)).version).toBe(read.version + 2);
+    for (const pin of [R.assignmentPin(period.id), `/roster-periods/${period.id}/assignments/unpin`]) {
+      await t.http().post(api(pin)).set(bearer(planner)).send(cell).expect(200);
+    }
+    const now = await readPeriod(period.id);
+    expect(now.version).toBe(read.version + 4);
+    expect(await grid(period.id)).toEqual(g);
+
+    const stale = await t
+      .http()
+      .post(api(PUB.publish(period.id)))
+      .set(bearer(planner))
+      .send({ version: read.version })
+      .expect(409);
+    const [{ displayName }] = (await t.dataSource.query(
+      `SELECT displayName FROM users WHERE email = 'admin@example.com'`,
+    )) as { displayName: string }[];
+    expect(stale.body).toMatchObject({ statusCode: 409, version: now.version });
+    expect(stale.body.message).toContain(`4 cell(s) changed since version ${read.version}`);
+    expect(stale.body.message).toContain(displayName);
+    expect(
+      (stale.body.changes as { version: number; kind: string; cells: number; actorName: string }[]).map(
+        (c) => [c.version, c.kind, c.cells, c.actorName],
+      ),
+    ).toEqual([
+      [read.version + 1, 'edit', 1, displayName],
+      [read.version + 2, 'edit', 1, displayName],
+      [read.version + 3, 'pin', 1, displayName],
+      [read.version + 4, 'unpin', 1, displayName],
+    ]);
+    expect((await readPeriod(period.id)).status).toBe('draft');
+    expect(await t.dataSource.query(`SELECT id FROM outbox_messages`)).toHaveLength(0);
+    // The next test publishes with the version read now (200).
+  });
+
   it('publishes with the SMTP server down; after it is back every person gets exactly one e-mail with only their own shifts, in the unit time zone', async () => {
     const before = await grid(period.id);
     const current = await readPeriod(period.id);
@@ -192,6 +255,9 @@ describe('POST /api/roster-periods/:id/publish', () => {
       expect(mails).toHaveLength(1);
       const [m] = mails;
       expect(m.subject).toContain('Harbour Desk');
+      // Dates in words (1 Jul 2030 is a Monday), never ISO dates, in the subject and the body.
+      expect(m.subject).toContain('Mon 1 Jul 2030 to ');
+      expect(`${m.subject}\n${m.text}`).not.toMatch(/\d{4}-\d{2}-\d{2}/);
       expect(m.text).toContain('Europe/London');
       const row = before.rows.find((r) => r.staffMemberId === person.id)!;
       const own = row.cells.map((c, d) => ({ ...c, date: before.dates[d] })).filter((c) => c.shiftTypeId);

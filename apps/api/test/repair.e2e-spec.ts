@@ -143,6 +143,12 @@ describe('POST /api/roster-periods/:id/repair', () => {
     // The period's version moved on; the board stays published.
     const now = await readPeriod(t, manager, period.id);
     expect(now).toMatchObject({ status: 'published', version: version + 2 });
+    // Raised by the period's writer with the cells, which recorded the change.
+    const [last] = (await t.dataSource.query(
+      `SELECT kind, cells, version FROM roster_period_changes WHERE rosterPeriodId = ? ORDER BY version DESC`,
+      [period.id],
+    )) as { kind: string; cells: number; version: number }[];
+    expect(last).toEqual({ kind: 'repair', cells: changed.length, version: now.version });
 
     // One "changed" e-mail per person whose cells changed (with an address), nobody else.
     const changedPeople = new Set(changed.map((k) => k.split('|')[0]));

@@ -213,10 +213,20 @@ describe('swaps', () => {
       .body as SwapLinkViewDto;
     expect(viewM.decisions).toEqual(['approve', 'refuse']);
     expect(await cell('a', 0)).toBe('L'); // still unchanged before the POST
+    const versionOf = async () => (await em().findOneByOrFail(RosterPeriodEntity, { id: period.id })).version;
+    const before = await versionOf();
     const approved = (await byLink(tokenM, 'approve').expect(200)).body as SwapRequestDto;
     expect(approved.status).toBe('approved');
     expect(await cell('a', 0)).toBe('E');
     expect(await cell('b', 0)).toBe('L');
+    // The period's writer raised the version with the cells, and recorded the change.
+    expect(await versionOf()).toBe(before + 1);
+    expect(
+      await em().query(
+        `SELECT "kind", "cells", "version" FROM "roster_period_changes" WHERE "rosterPeriodId" = ?`,
+        [period.id],
+      ),
+    ).toEqual([{ kind: 'swap', cells: 2, version: before + 1 }]);
 
     // Everyone involved hears about it.
     await mailTo(EMAIL.a, /Your roster has changed/);
