@@ -137,7 +137,12 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
     [grid.data, requests.data],
   );
 
-  const store = (next: AssignmentGridDto) => queryClient.setQueryData(boardKeys.grid(period.id), next);
+  // An edit or pin raises the period's version on the server: read the period again, so a publish
+  // after editing sends the version it now has (a stale one is refused with 409).
+  const store = (next: AssignmentGridDto) => {
+    queryClient.setQueryData(boardKeys.grid(period.id), next);
+    void queryClient.invalidateQueries({ queryKey: ['roster-periods'] });
+  };
 
   const failed = [grid, shiftTypes, skills, contracts, staff, needs, units].find((q) => q.isError);
   const running = solve.run?.status === 'queued' || solve.run?.status === 'running';

@@ -44,6 +44,8 @@ export function useSolveRun(periodId: string, latest: SolveRunDto | undefined): 
             setStopping(false);
             void queryClient.invalidateQueries({ queryKey: boardKeys.grid(periodId) });
             void queryClient.invalidateQueries({ queryKey: boardKeys.runs(periodId) });
+            // A saved roster raised the period's version: the next publish must send the new one.
+            void queryClient.invalidateQueries({ queryKey: ['roster-periods'] });
           },
         },
         abort.signal,
