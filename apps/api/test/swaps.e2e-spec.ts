@@ -15,6 +15,7 @@ import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/roster-periods/roster-periods.service';
 import { SwapExpiryService } from '../src/swaps/swap-expiry.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from '../src/swaps/swap-request.entity';
+import { dateInWords } from '../src/common/text/date-words';
 import { linkToken, nextMailTo } from './support/mailbox';
 import {
   createPeriod,
@@ -179,6 +180,10 @@ describe('swaps', () => {
     const mailB = await mailTo(EMAIL.b, /Robin Tallis asks to swap/);
     expect(mailB.html).toContain('Accept or decline');
     expect(mailB.text).toContain('Europe/London');
+    // Dates in words, and the colleague's menu item by its name.
+    expect(`${mailB.subject}\n${mailB.text}`).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    expect(mailB.text).toContain(`on ${dateInWords(day(0))}`);
+    expect(mailB.text).toContain('decide in Rotaplex under Swaps.');
     const tokenB = tokenIn(mailB);
 
     // Fetching the link (as a mail scanner would) changes nothing.
@@ -208,6 +213,10 @@ describe('swaps', () => {
     expect(reused.body.message).toMatch(/already been used/);
 
     const mailM = await mailTo('manager@example.com', /Swap to approve: Robin Tallis and Priya Wendover/);
+    // The manager decides under the menu item they see: "Swap approvals" (navItems.ts), not "Swaps".
+    expect(mailM.text).toContain('decide in Rotaplex under Swap approvals.');
+    expect(mailM.text).not.toMatch(/under Swaps\b/);
+    expect(mailM.text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
     const tokenM = tokenIn(mailM);
     const viewM = (await t.http().get(api(S.swapLink)).query({ token: tokenM }).expect(200))
       .body as SwapLinkViewDto;
@@ -348,7 +357,7 @@ describe('swaps', () => {
     expect(expired.outcome).toMatch(/first day passed before a decision/);
     expect((await read(tokens.d, later.id)).status).toBe('proposed'); // its day is still to come
     const refused = await decide(tokens.c, offer.id, 'accept').expect(410);
-    expect(refused.body.message).toMatch(/first day \(2020-01-06\) has passed/);
+    expect(refused.body.message).toMatch(/first day \(Mon 6 Jan 2020\) has passed/);
     expect(await t.app.get(SwapExpiryService).expireOverdue()).toBe(0); // nothing else is overdue
     await decide(tokens.d, later.id, 'decline').expect(200);
   });
@@ -357,7 +366,7 @@ describe('swaps', () => {
     const swap = await acceptedSwap(24);
     await moveIntoPast(swap.id, 24);
     const res = await decide(manager, swap.id, 'approve').expect(410);
-    expect(res.body.message).toMatch(/expired: its first day \(2020-01-06\) has passed/);
+    expect(res.body.message).toMatch(/expired: its first day \(Mon 6 Jan 2020\) has passed/);
     expect(res.body.statusCode).toBe(410);
     expect(await cell('a', 24)).toBe('L');
     expect(await cell('b', 24)).toBe('E');
@@ -437,7 +446,9 @@ describe('swaps', () => {
     const swap = await acceptedSwap(14);
     await setCell('b', 14, 'N'); // the manager changed B's shift meanwhile
     const res = await decide(manager, swap.id, 'approve').expect(409);
-    expect(res.body.message).toContain(`roster changed since this was asked (Priya Wendover on ${day(14)})`);
+    expect(res.body.message).toContain(
+      `roster changed since this was asked (Priya Wendover on ${dateInWords(day(14))})`,
+    );
     expect(await cell('a', 14)).toBe('L');
     expect(await cell('b', 14)).toBe('N');
     const after = (

@@ -25,6 +25,7 @@ import { UnitEntity } from '../units/unit.entity';
 import { ClaimCheck, evaluateChanges } from '../swaps/swap-evaluation';
 import { SwapRequestEntity, type StoredCellChange } from '../swaps/swap-request.entity';
 import { SwapsService } from '../swaps/swaps.service';
+import { dateInWords } from '../common/text/date-words';
 import { type OpenShiftQuery } from './dto/open-shift.dto';
 
 type Cell = Pick<AssignmentEntity, 'staffMemberId' | 'date' | 'shiftTypeId'>;
@@ -217,7 +218,7 @@ export class OpenShiftsService {
         throw new UnprocessableEntityException('You do not have the skill this shift needs');
       }
       if (rows.some((r) => r.staffMemberId === me.id && r.date === body.date && r.shiftTypeId !== null)) {
-        throw new BadRequestException([`date: you already work on ${body.date}`]);
+        throw new BadRequestException([`date: you already work on ${dateInWords(body.date)}`]);
       }
       const change: StoredCellChange = {
         staffMemberId: me.id,
@@ -246,7 +247,7 @@ export class OpenShiftsService {
         status: 'accepted',
       });
       if (mine.some((p) => (JSON.parse(p.changes) as StoredCellChange[])[0]?.date === body.date)) {
-        throw new ConflictException(`You already have a claim waiting for ${body.date}`);
+        throw new ConflictException(`You already have a claim waiting for ${dateInWords(body.date)}`);
       }
       const created = await this.swaps.createClaim(
         em,

@@ -39,7 +39,7 @@ describe('roster e-mail', () => {
       link: 'http://rotaplex.test/',
       kind: 'published',
     });
-    expect(m.subject).toBe('Your roster for Ward & Annex, 2030-07-01 to 2030-07-07');
+    expect(m.subject).toBe('Your roster for Ward & Annex, Mon 1 Jul 2030 to Sun 7 Jul 2030');
     const lines = m.text.split('\n').filter((l) => l.startsWith('- '));
     expect(lines).toEqual([
       '- Mon 1 Jul 2030, 07:00–15:00  E (Early)',

@@ -1,6 +1,7 @@
 import { TZDate } from '@date-fns/tz';
 import { shiftInterval } from '@rotaplex/roster-model';
 import { format } from 'date-fns';
+import { dateRangeInWords } from '../common/text/date-words';
 import { escapeHtml, type MailContent } from '../mail/templates';
 
 /** One shift of one person, for their e-mail. */
@@ -48,7 +49,7 @@ export function formatShiftTimes(
 export function rosterMail(p: RosterMailInput): MailContent {
   const last = new Date(`${p.startDate}T00:00:00Z`);
   last.setUTCDate(last.getUTCDate() + p.days - 1);
-  const range = `${p.startDate} to ${last.toISOString().slice(0, 10)}`;
+  const range = dateRangeInWords(p.startDate, last.toISOString().slice(0, 10));
   const subject =
     p.kind === 'published'
       ? `Your roster for ${p.unitName}, ${range}`

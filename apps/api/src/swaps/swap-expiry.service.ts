@@ -2,6 +2,7 @@ import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common'
 import { Cron, CronExpression } from '@nestjs/schedule';
 import { type SwapStatus } from '@rotaplex/contracts';
 import { Brackets, DataSource } from 'typeorm';
+import { dateInWords } from '../common/text/date-words';
 import { localDate } from '../demo/demo-planning';
 import { sqliteUtc } from '../outbox/outbox-delivery.service';
 import { UnitEntity } from '../units/unit.entity';
@@ -14,7 +15,7 @@ export const EXPIRED_OUTCOME = 'Expired: its first day passed before a decision 
 
 /** The refusal of any decision on an expired request (the same whether the sweep or the decision found it). */
 export function expiredMessage(row: Pick<SwapRequestEntity, 'firstDate'>): string {
-  return `This request has expired: its first day (${row.firstDate}) has passed before a decision was made. Nothing was changed.`;
+  return `This request has expired: its first day (${dateInWords(row.firstDate)}) has passed before a decision was made. Nothing was changed.`;
 }
 
 /**

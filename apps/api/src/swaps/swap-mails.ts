@@ -1,18 +1,16 @@
 import { type OutgoingMail } from '../mail/mail.service';
+import { dateInWords } from '../common/text/date-words';
 import { escapeHtml } from '../mail/templates';
+
+/** Where the person finds the request in the menu: staff under "Swaps", managers under "Swap approvals". */
+export type SwapMailPlace = 'Swaps' | 'Swap approvals';
 
 /** A shift in words, in the unit's local time: "Early 07:00-15:00 on Mon 4 Jan 2027". */
 export function shiftWords(
   shift: { name: string; start: string; end: string } | undefined,
   date: string,
 ): string {
-  const day = new Date(`${date}T12:00:00Z`).toLocaleDateString('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
+  const day = dateInWords(date);
   return shift ? `${shift.name} ${shift.start}-${shift.end} on ${day}` : `a day off on ${day}`;
 }
 
@@ -26,12 +24,15 @@ export function swapMail(p: {
   subject: string;
   lines: string[];
   timeZone: string;
+  place: SwapMailPlace;
   action?: { label: string; url: string };
 }): OutgoingMail {
   const lines = [`Hello ${p.name},`, ...p.lines, `Times are in the unit's time zone (${p.timeZone}).`];
   const footer = p.action
-    ? 'The link works once, only for this decision, and expires. You can also decide in Rotaplex under Swaps.'
-    : 'You can see all your swaps in Rotaplex under Swaps.';
+    ? `The link works once, only for this decision, and expires. You can also decide in Rotaplex under ${p.place}.`
+    : p.place === 'Swaps'
+      ? 'You can see all your swaps in Rotaplex under Swaps.'
+      : 'You can see the swaps and claims waiting for a decision in Rotaplex under Swap approvals.';
   const text = [...lines, ...(p.action ? [`${p.action.label}: ${p.action.url}`] : []), footer].join('\n\n');
   const body = lines.map((l) => `<p style="margin:0 0 16px">${escapeHtml(l)}</p>`).join('\n');
   const button = p.action

@@ -38,6 +38,7 @@ import { changeDto, evaluateChanges, staleCells } from './swap-evaluation';
 import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.service';
 import { type SwapListQuery } from './dto/swap.dto';
 import { shiftWords, swapMail } from './swap-mails';
+import { dateInWords } from '../common/text/date-words';
 import {
   type StoredCellChange,
   type SwapLinkRole,
@@ -198,6 +199,7 @@ export class SwapsService {
             'Please accept or decline. A manager approves the change after you accept.',
           ],
           timeZone: input.unit.timeZone,
+          place: 'Swaps',
           action: { label: 'Accept or decline', url: this.link(token) },
         }),
       );
@@ -234,14 +236,15 @@ export class SwapsService {
     };
     assertDay('myDate', body.myDate);
     const mine = cell(me.id, body.myDate);
-    if (mine === null) throw new BadRequestException([`myDate: you have no shift on ${body.myDate}`]);
+    if (mine === null)
+      throw new BadRequestException([`myDate: you have no shift on ${dateInWords(body.myDate)}`]);
 
     let changes: StoredCellChange[];
     if (body.kind === 'offer') {
       if (body.theirDate !== undefined) throw new BadRequestException(['theirDate is only for a swap']);
       if (cell(colleague.id, body.myDate) !== null) {
         throw new BadRequestException([
-          `colleagueStaffMemberId: ${colleague.name} already works on ${body.myDate}`,
+          `colleagueStaffMemberId: ${colleague.name} already works on ${dateInWords(body.myDate)}`,
         ]);
       }
       changes = [
@@ -253,7 +256,9 @@ export class SwapsService {
       assertDay('theirDate', body.theirDate);
       const theirs = cell(colleague.id, body.theirDate);
       if (theirs === null) {
-        throw new BadRequestException([`theirDate: ${colleague.name} has no shift on ${body.theirDate}`]);
+        throw new BadRequestException([
+          `theirDate: ${colleague.name} has no shift on ${dateInWords(body.theirDate)}`,
+        ]);
       }
       if (body.theirDate === body.myDate) {
         if (theirs === mine)
@@ -264,10 +269,12 @@ export class SwapsService {
         ];
       } else {
         if (cell(me.id, body.theirDate) !== null) {
-          throw new BadRequestException([`theirDate: you already work on ${body.theirDate}`]);
+          throw new BadRequestException([`theirDate: you already work on ${dateInWords(body.theirDate)}`]);
         }
         if (cell(colleague.id, body.myDate) !== null) {
-          throw new BadRequestException([`myDate: ${colleague.name} already works on ${body.myDate}`]);
+          throw new BadRequestException([
+            `myDate: ${colleague.name} already works on ${dateInWords(body.myDate)}`,
+          ]);
         }
         changes = [
           { staffMemberId: me.id, date: body.myDate, before: mine, after: null },
@@ -511,7 +518,9 @@ export class SwapsService {
     const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: row.rosterPeriodId });
     const stale = staleCells(rows, changes);
     if (stale.length) {
-      const cells = stale.map((c) => `${staffName(input, c.staffMemberId)} on ${c.date}`).join(', ');
+      const cells = stale
+        .map((c) => `${staffName(input, c.staffMemberId)} on ${dateInWords(c.date)}`)
+        .join(', ');
       const message = `The roster changed since this was asked (${cells}): nothing was changed`;
       return refuse(message, { status: 409, message });
     }
@@ -683,7 +692,9 @@ export class SwapsService {
       throw new GoneException('This link has already been used, or the decision was made another way');
     }
     if (link.expiresAt.getTime() <= Date.now()) {
-      throw new GoneException('This link has expired: please decide in Rotaplex under Swaps');
+      throw new GoneException(
+        `This link has expired: please decide in Rotaplex under ${link.role === 'manager' ? 'Swap approvals' : 'Swaps'}`,
+      );
     }
     return link;
   }
@@ -730,6 +741,7 @@ export class SwapsService {
           subject,
           lines,
           timeZone: input.unit.timeZone,
+          place: 'Swap approvals',
           action: { label: 'Approve or decline', url: this.link(token) },
         }),
       );
@@ -744,6 +756,7 @@ export class SwapsService {
       subject,
       lines,
       timeZone: input.unit.timeZone,
+      place: 'Swap approvals',
     });
   }
 
@@ -759,7 +772,9 @@ export class SwapsService {
       const user = s.userId ? await em.findOneBy(UserEntity, { id: s.userId }) : null;
       const to = user?.email ?? s.email;
       if (!to) continue;
-      mails.push(swapMail({ to, name: s.name, subject, lines, timeZone: input.unit.timeZone }));
+      mails.push(
+        swapMail({ to, name: s.name, subject, lines, timeZone: input.unit.timeZone, place: 'Swaps' }),
+      );
     }
     return mails;
   }
