@@ -18,6 +18,7 @@ import {
   type StaffMemberDto,
   type UnitDto,
 } from '@rotaplex/contracts';
+import { dateRangeInWords } from '../src/common/text/date-words';
 import { DEMO_ON_LEAVE_PERSON, DEMO_SHORT_NEED_DAY } from '../src/demo/demo-requests';
 import { addDays } from '../src/roster-periods/roster-periods.service';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
@@ -213,7 +214,9 @@ describe('availability, date requests and leave', () => {
 
     const outside = await create({ date: addDays(last, 1), kind: 'dayOff' });
     expect(outside.status).toBe(400);
-    expect(messages(outside)).toContain(`date must be a day of the period (${first} to ${last})`);
+    expect(messages(outside)).toContain(
+      `date must be a day of the period (${dateRangeInWords(first, last)})`,
+    );
     const noShift = await create({ date: addDays(first, 6), kind: 'shiftOn' });
     expect(noShift.status).toBe(400);
     expect(messages(noShift)).toMatch(/shiftTypeId is required/);
@@ -376,7 +379,9 @@ describe('availability, date requests and leave', () => {
       type: 'sick',
     });
     expect(overlap.status).toBe(409);
-    expect(messages(overlap)).toContain('overlaps your pending leave from 2030-03-10 to 2030-03-12');
+    expect(messages(overlap)).toContain(
+      'overlaps your pending leave from Sun 10 Mar 2030 to Tue 12 Mar 2030',
+    );
 
     await post(Q.leaveApprove(leave.id), robin).expect(403);
     await post(Q.leaveApprove(leave.id), manager2).expect(403);

@@ -26,6 +26,8 @@ import { addDays } from '../roster-periods/roster-periods.service';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitEntity } from '../units/unit.entity';
+import { dateInWords, dateRangeInWords } from '../common/text/date-words';
+import { localDate } from '../demo/demo-planning';
 import { UserEntity } from '../users/user.entity';
 import {
   type CreateDateRequestDto,
@@ -257,6 +259,7 @@ export class RequestsService {
       body.date,
       body.kind,
       body.shiftTypeId ?? null,
+      true,
     );
     const saved = await this.dataSource.transaction(async (em) => {
       const fresh = await em.findOneByOrFail(RosterPeriodEntity, { id: period.id });
@@ -294,7 +297,7 @@ export class RequestsService {
     const kind = body.kind ?? row.kind;
     const shift =
       body.shiftTypeId !== undefined ? body.shiftTypeId : body.kind === 'dayOff' ? null : row.shiftTypeId;
-    const shiftTypeId = await this.validateDateRequest(period, date, kind, shift);
+    const shiftTypeId = await this.validateDateRequest(period, date, kind, shift, date !== row.date);
     const saved = await this.dataSource.transaction(async (em) => {
       assertDraft(await em.findOneByOrFail(RosterPeriodEntity, { id: period.id }));
       if (date !== row.date) await assertFreeDate(em, period.id, row.staffMemberId, date);
@@ -317,19 +320,30 @@ export class RequestsService {
     });
   }
 
+  /** Today in the unit's time zone, "YYYY-MM-DD". */
+  private async unitToday(unitId: string): Promise<string> {
+    const unit = await this.m.findOneBy(UnitEntity, { id: unitId });
+    return localDate(new Date(), unit?.timeZone ?? 'UTC');
+  }
+
   /** Checks the date lies in the period and the shift type fits the kind; returns the shift type id to store. */
   private async validateDateRequest(
     period: RosterPeriodEntity,
     date: string,
     kind: string,
     shiftTypeId: string | null,
+    newDate: boolean,
   ): Promise<string | null> {
     assertDraft(period);
     const errors: string[] = [];
     const last = addDays(period.startDate, period.days - 1);
     if (!isRealDate(date)) errors.push('date must be a real calendar date');
     else if (date < period.startDate || date > last) {
-      errors.push(`date must be a day of the period (${period.startDate} to ${last})`);
+      errors.push(`date must be a day of the period (${dateRangeInWords(period.startDate, last)})`);
+    } else if (newDate) {
+      const today = await this.unitToday(period.unitId);
+      if (date < today)
+        errors.push(`date is in the past: requests are for today (${dateInWords(today)}) or later`);
     }
     if (kind === 'dayOff') {
       if (shiftTypeId) errors.push('shiftTypeId must be empty for a day-off request');
@@ -409,6 +423,10 @@ export class RequestsService {
       const length = daysBetween(body.startDate, body.endDate) + 1;
       if (length < 1) errors.push('endDate must be on or after startDate');
       else if (length > MAX_LEAVE_DAYS) errors.push(`leave may be at most ${MAX_LEAVE_DAYS} days long`);
+      const today = await this.unitToday(staff.unitId);
+      if (body.startDate < today) {
+        errors.push(`startDate is in the past: leave can start today (${dateInWords(today)}) or later`);
+      }
     }
     if (errors.length) throw new BadRequestException(errors);
     const saved = await this.dataSource.transaction(async (em) => {
@@ -420,7 +438,7 @@ export class RequestsService {
         .getOne();
       if (overlapping) {
         throw new ConflictException(
-          `This leave overlaps your ${overlapping.status} leave from ${overlapping.startDate} to ${overlapping.endDate}`,
+          `This leave overlaps your ${overlapping.status} leave from ${dateRangeInWords(overlapping.startDate, overlapping.endDate)}`,
         );
       }
       return em.save(
@@ -656,7 +674,9 @@ function assertDraft(period: RosterPeriodEntity): void {
 
 async function assertFreeDate(em: EntityManager, periodId: string, staffMemberId: string, date: string) {
   if (await em.countBy(DateRequestEntity, { rosterPeriodId: periodId, staffMemberId, date })) {
-    throw new ConflictException(`You already have a request for ${date}; change or delete it instead`);
+    throw new ConflictException(
+      `You already have a request for ${dateInWords(date)}; change or delete it instead`,
+    );
   }
 }
 
