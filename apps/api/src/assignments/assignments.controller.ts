@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Put } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post, Put } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { ApiConflictResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { type AssignmentGridDto } from '@rotaplex/contracts';
 import { type AuthUser } from '../common/auth-user';
@@ -16,7 +17,7 @@ export class AssignmentsController {
   @Get()
   @RequirePermissions('rosters:plan')
   @ApiOkResponse({ type: AssignmentGridResponse })
-  grid(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<AssignmentGridDto> {
+  grid(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<AssignmentGridDto> {
     return this.assignments.grid(user, id);
   }
 
@@ -29,7 +30,7 @@ export class AssignmentsController {
   @ApiConflictResponse({ description: 'The period is not a draft' })
   edit(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: AssignmentCellDto,
   ): Promise<AssignmentGridDto> {
     return this.assignments.editCell(user, id, body);
@@ -41,7 +42,7 @@ export class AssignmentsController {
   @ApiOkResponse({ type: AssignmentGridResponse })
   pin(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: PinCellDto,
   ): Promise<AssignmentGridDto> {
     return this.assignments.setPinned(user, id, body, true);
@@ -53,7 +54,7 @@ export class AssignmentsController {
   @ApiOkResponse({ type: AssignmentGridResponse })
   unpin(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: PinCellDto,
   ): Promise<AssignmentGridDto> {
     return this.assignments.setPinned(user, id, body, false);

@@ -1,15 +1,5 @@
-import {
-  Body,
-  Controller,
-  Delete,
-  Get,
-  HttpCode,
-  Param,
-  ParseUUIDPipe,
-  Patch,
-  Post,
-  Query,
-} from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -59,7 +49,7 @@ export class ContractsController {
   @Get(':id')
   @RequirePermissions('rosters:plan')
   @ApiOkResponse({ type: ContractResponse })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<ContractDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<ContractDto> {
     return this.contracts.get(user, id);
   }
 
@@ -75,7 +65,7 @@ export class ContractsController {
   @ApiOkResponse({ type: ContractResponse })
   update(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateContractDto,
   ): Promise<ContractDto> {
     return this.contracts.update(user, id, body);
@@ -86,7 +76,7 @@ export class ContractsController {
   @RequirePermissions('rosters:plan')
   @ApiNoContentResponse()
   @ApiConflictResponse({ description: 'Still held by staff members' })
-  remove(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.contracts.remove(user, id);
   }
 }

@@ -1,16 +1,5 @@
-import {
-  Body,
-  Controller,
-  Delete,
-  Get,
-  HttpCode,
-  Param,
-  ParseUUIDPipe,
-  Post,
-  Put,
-  Query,
-  Req,
-} from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, Query, Req } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiBadRequestResponse,
   ApiBody,
@@ -50,7 +39,7 @@ export class CoverNeedsController {
   @Get()
   @RequirePermissions('rosters:plan')
   @ApiOkResponse({ type: CoverNeedsResponse })
-  get(@CurrentUser() user: AuthUser, @Param('unitId', ParseUUIDPipe) unitId: string): Promise<CoverNeedsDto> {
+  get(@CurrentUser() user: AuthUser, @Param('unitId', ParseIdPipe) unitId: string): Promise<CoverNeedsDto> {
     return this.needs.get(user, unitId);
   }
 
@@ -59,7 +48,7 @@ export class CoverNeedsController {
   @ApiOkResponse({ type: CoverNeedsResponse, description: 'The whole pattern was replaced' })
   replacePattern(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
     @Body() body: ReplaceCoverPatternDto,
   ): Promise<CoverNeedsDto> {
     return this.needs.replacePattern(user, unitId, body.rows);
@@ -73,7 +62,7 @@ export class CoverNeedsController {
   })
   putOverride(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
     @Body() body: CreateCoverOverrideDto,
   ): Promise<CoverOverrideDto> {
     return this.needs.putOverride(user, unitId, body);
@@ -85,8 +74,8 @@ export class CoverNeedsController {
   @ApiNoContentResponse()
   removeOverride(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
+    @Param('id', ParseIdPipe) id: string,
   ): Promise<void> {
     return this.needs.removeOverride(user, unitId, id);
   }
@@ -103,7 +92,7 @@ export class CoverNeedsController {
   @ApiBadRequestResponse({ type: CsvImportResponse, description: 'A bad row: nothing saved' })
   async importCsv(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
     @Query() query: CoverImportQueryDto,
     @Req() req: Request,
   ): Promise<CsvImportResult> {

@@ -1,4 +1,5 @@
-import { Controller, Get, NotFoundException, Param, ParseUUIDPipe, Query } from '@nestjs/common';
+import { Controller, Get, NotFoundException, Param, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { type MailMessageDto, type MailMessageSummaryDto, type Page } from '@rotaplex/contracts';
 import { InjectRepository } from '@nestjs/typeorm';
@@ -56,7 +57,7 @@ export class MailboxController {
 
   @Get(':id')
   @ApiOkResponse({ type: MailMessageResponse })
-  async get(@Param('id', ParseUUIDPipe) id: string): Promise<MailMessageDto> {
+  async get(@Param('id', ParseIdPipe) id: string): Promise<MailMessageDto> {
     const m = await this.messages.findOneBy({ id });
     if (!m) throw new NotFoundException('Message not found');
     return { ...toSummary(m), ...this.catcher.readBodies(m) };

@@ -5,10 +5,10 @@ import {
   HttpCode,
   NotFoundException,
   Param,
-  ParseUUIDPipe,
   Post,
   Query,
 } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { ApiOkResponse, ApiProperty, ApiPropertyOptional, ApiTags } from '@nestjs/swagger';
 import { InjectRepository } from '@nestjs/typeorm';
 import { OUTBOX_STATUSES, type OutboxMessageDto, type OutboxStatus, type Page } from '@rotaplex/contracts';
@@ -98,7 +98,7 @@ export class OutboxController {
   @Post(':id/retry')
   @HttpCode(200)
   @ApiOkResponse({ type: OutboxMessageResponse })
-  async retry(@Param('id', ParseUUIDPipe) id: string): Promise<OutboxMessageDto> {
+  async retry(@Param('id', ParseIdPipe) id: string): Promise<OutboxMessageDto> {
     const m = await this.messages.findOneBy({ id });
     if (!m) throw new NotFoundException('Message not found');
     const res = await this.messages

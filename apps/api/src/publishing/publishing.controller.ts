@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post, Query, Res } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiAcceptedResponse,
   ApiConflictResponse,
@@ -173,7 +174,7 @@ export class PublishingController {
   })
   publishCheck(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
   ): Promise<PublishCheckDto> {
     return this.publishing.publishCheck(user, id);
   }
@@ -191,7 +192,7 @@ export class PublishingController {
   })
   publish(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: PublishDto,
   ): Promise<PublishResultDto> {
     return this.publishing.publish(user, id, body);
@@ -209,7 +210,7 @@ export class PublishingController {
   })
   repair(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: RepairDto,
   ): Promise<SolveRunStartedDto> {
     return this.publishing.repair(user, id, body.timeLimitSeconds);
@@ -219,7 +220,7 @@ export class PublishingController {
   @ApiOkResponse({ type: AuditPageResponse })
   audit(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Query() query: PageQueryDto,
   ): Promise<Page<AuditEntryDto>> {
     return this.publishing.auditTrail(user, id, query);
@@ -230,7 +231,7 @@ export class PublishingController {
   @ApiOkResponse({ description: "The period's roster and its audit trail as CSV", type: String })
   async export(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Res({ passthrough: true }) res: Response,
   ): Promise<string> {
     const { filename, csv } = await this.publishing.exportCsv(user, id);

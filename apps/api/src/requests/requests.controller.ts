@@ -1,16 +1,5 @@
-import {
-  Body,
-  Controller,
-  Delete,
-  Get,
-  HttpCode,
-  Param,
-  ParseUUIDPipe,
-  Patch,
-  Post,
-  Put,
-  Query,
-} from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Put, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -82,7 +71,7 @@ export class RequestsController {
   })
   availability(
     @CurrentUser() user: AuthUser,
-    @Param('staffMemberId', ParseUUIDPipe) staffMemberId: string,
+    @Param('staffMemberId', ParseIdPipe) staffMemberId: string,
   ): Promise<AvailabilityDto> {
     return this.requests.getAvailability(user, staffMemberId);
   }
@@ -92,7 +81,7 @@ export class RequestsController {
   @ApiOkResponse({ type: AvailabilityResponse, description: 'The weekly availability as saved' })
   replaceAvailability(
     @CurrentUser() user: AuthUser,
-    @Param('staffMemberId', ParseUUIDPipe) staffMemberId: string,
+    @Param('staffMemberId', ParseIdPipe) staffMemberId: string,
     @Body() body: ReplaceAvailabilityDto,
   ): Promise<AvailabilityDto> {
     return this.requests.replaceAvailability(user, staffMemberId, body);
@@ -129,7 +118,7 @@ export class RequestsController {
   @ApiOkResponse({ type: DateRequestResponse })
   updateDateRequest(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateDateRequestDto,
   ): Promise<DateRequestDto> {
     return this.requests.updateDateRequest(user, id, body);
@@ -139,7 +128,7 @@ export class RequestsController {
   @HttpCode(204)
   @RequirePermissions('requests:own')
   @ApiNoContentResponse()
-  deleteDateRequest(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  deleteDateRequest(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.requests.deleteDateRequest(user, id);
   }
 
@@ -164,7 +153,7 @@ export class RequestsController {
   @Delete('leave/:id')
   @RequirePermissions('requests:own')
   @ApiOkResponse({ type: LeaveResponse, description: 'The cancelled leave' })
-  cancelLeave(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<LeaveDto> {
+  cancelLeave(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<LeaveDto> {
     return this.requests.cancelLeave(user, id);
   }
 
@@ -175,7 +164,7 @@ export class RequestsController {
   @ApiConflictResponse({ description: 'Not pending' })
   approveLeave(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: DecideLeaveDto,
   ): Promise<LeaveDto> {
     return this.requests.decideLeave(user, id, true, body.note);
@@ -188,7 +177,7 @@ export class RequestsController {
   @ApiConflictResponse({ description: 'Not pending' })
   declineLeave(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: DecideLeaveDto,
   ): Promise<LeaveDto> {
     return this.requests.decideLeave(user, id, false, body.note);
@@ -212,7 +201,7 @@ export class RequestsController {
   @ApiOkResponse({ type: PeriodRequestsResponse })
   periodRequests(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
   ): Promise<PeriodRequestsDto> {
     return this.requests.periodRequests(user, id);
   }
@@ -222,7 +211,7 @@ export class RequestsController {
   @ApiOkResponse({ type: RequestPeriodResponse, description: 'The period with its new limit' })
   setRequestLimit(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateRequestLimitDto,
   ): Promise<RequestPeriodDto> {
     return this.requests.setRequestLimit(user, id, body.requestLimit);

@@ -1,15 +1,5 @@
-import {
-  Body,
-  Controller,
-  Delete,
-  Get,
-  HttpCode,
-  Param,
-  ParseUUIDPipe,
-  Patch,
-  Post,
-  Query,
-} from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -46,7 +36,7 @@ export class RosterPeriodsController {
   @Get(':id')
   @RequirePermissions('rosters:read')
   @ApiOkResponse({ type: RosterPeriodResponse })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<RosterPeriodDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<RosterPeriodDto> {
     return this.periods.get(user, id);
   }
 
@@ -64,7 +54,7 @@ export class RosterPeriodsController {
   @ApiConflictResponse({ description: 'Not a draft, changed meanwhile, or overlapping' })
   update(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateRosterPeriodDto,
   ): Promise<RosterPeriodDto> {
     return this.periods.update(user, id, body);
@@ -74,7 +64,7 @@ export class RosterPeriodsController {
   @HttpCode(200)
   @RequirePermissions('rosters:plan')
   @ApiOkResponse({ type: RosterPeriodResponse })
-  archive(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<RosterPeriodDto> {
+  archive(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<RosterPeriodDto> {
     return this.periods.archive(user, id);
   }
 
@@ -83,7 +73,7 @@ export class RosterPeriodsController {
   @RequirePermissions('rosters:plan')
   @ApiNoContentResponse()
   @ApiConflictResponse({ description: 'Only drafts can be deleted' })
-  remove(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.periods.remove(user, id);
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -22,10 +23,7 @@ export class ShiftTypesController {
   @Get()
   @RequirePermissions('units:read')
   @ApiOkResponse({ type: [ShiftTypeResponse] })
-  list(
-    @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
-  ): Promise<ShiftTypeDto[]> {
+  list(@CurrentUser() user: AuthUser, @Param('unitId', ParseIdPipe) unitId: string): Promise<ShiftTypeDto[]> {
     return this.shiftTypes.list(user, unitId);
   }
 
@@ -34,8 +32,8 @@ export class ShiftTypesController {
   @ApiOkResponse({ type: ShiftTypeResponse })
   get(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
+    @Param('id', ParseIdPipe) id: string,
   ): Promise<ShiftTypeDto> {
     return this.shiftTypes.get(user, unitId, id);
   }
@@ -46,7 +44,7 @@ export class ShiftTypesController {
   @ApiConflictResponse({ description: 'The code is taken in this unit' })
   create(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
     @Body() body: CreateShiftTypeDto,
   ): Promise<ShiftTypeDto> {
     return this.shiftTypes.create(user, unitId, body);
@@ -57,8 +55,8 @@ export class ShiftTypesController {
   @ApiOkResponse({ type: ShiftTypeResponse })
   update(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateShiftTypeDto,
   ): Promise<ShiftTypeDto> {
     return this.shiftTypes.update(user, unitId, id, body);
@@ -71,8 +69,8 @@ export class ShiftTypesController {
   @ApiConflictResponse({ description: 'Still used by cover needs' })
   remove(
     @CurrentUser() user: AuthUser,
-    @Param('unitId', ParseUUIDPipe) unitId: string,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('unitId', ParseIdPipe) unitId: string,
+    @Param('id', ParseIdPipe) id: string,
   ): Promise<void> {
     return this.shiftTypes.remove(user, unitId, id);
   }

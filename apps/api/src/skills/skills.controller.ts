@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -29,7 +30,7 @@ export class SkillsController {
   @Get(':id')
   @RequirePermissions('units:read')
   @ApiOkResponse({ type: SkillResponse })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SkillDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SkillDto> {
     return this.skills.get(user, id);
   }
 
@@ -46,7 +47,7 @@ export class SkillsController {
   @ApiOkResponse({ type: SkillResponse })
   update(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateSkillDto,
   ): Promise<SkillDto> {
     return this.skills.update(user, id, body);
@@ -57,7 +58,7 @@ export class SkillsController {
   @RequirePermissions('rosters:plan')
   @ApiNoContentResponse()
   @ApiConflictResponse({ description: 'Still used by staff members or cover needs' })
-  remove(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.skills.remove(user, id);
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query, Req, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post, Query, Req, Res } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiAcceptedResponse,
   ApiConflictResponse,
@@ -44,7 +45,7 @@ export class SolveRunsController {
   @ApiConflictResponse({ description: 'The period is not a draft, or already has a queued or running run' })
   start(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: StartSolveRunDto,
   ): Promise<SolveRunStartedDto> {
     return this.runs.start(user, id, body);
@@ -58,7 +59,7 @@ export class SolveRunsController {
   })
   list(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Query() query: SolveRunListQuery,
   ): Promise<Page<SolveRunSummaryDto>> {
     return this.runs.list(user, id, query);
@@ -67,7 +68,7 @@ export class SolveRunsController {
   @Get('solve-runs/:id')
   @RequirePermissions('rosters:plan')
   @ApiOkResponse({ type: SolveRunResponse })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SolveRunDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SolveRunDto> {
     return this.runs.get(user, id);
   }
 
@@ -79,7 +80,7 @@ export class SolveRunsController {
     description: 'The run once stopped; a running solve keeps its best roster',
   })
   @ApiConflictResponse({ description: 'The run has already ended' })
-  cancel(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SolveRunDto> {
+  cancel(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SolveRunDto> {
     return this.runs.cancel(user, id);
   }
 
@@ -96,7 +97,7 @@ export class SolveRunsController {
   @ApiOkResponse({ description: 'A text/event-stream of status, progress and end events' })
   async events(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Req() req: Request,
     @Res() res: Response,
   ): Promise<void> {

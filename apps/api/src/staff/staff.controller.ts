@@ -6,12 +6,12 @@ import {
   Header,
   HttpCode,
   Param,
-  ParseUUIDPipe,
   Patch,
   Post,
   Query,
   Req,
 } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiBadRequestResponse,
   ApiBody,
@@ -96,7 +96,7 @@ export class StaffController {
   @Get(':id')
   @Authenticated()
   @ApiOkResponse({ type: StaffMemberResponse })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<StaffMemberDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<StaffMemberDto> {
     return this.staff.get(user, id);
   }
 
@@ -112,7 +112,7 @@ export class StaffController {
   @ApiOkResponse({ type: StaffMemberResponse })
   update(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateStaffMemberDto,
   ): Promise<StaffMemberDto> {
     return this.staff.update(user, id, body);
@@ -122,7 +122,7 @@ export class StaffController {
   @HttpCode(204)
   @RequirePermissions('rosters:plan')
   @ApiNoContentResponse()
-  remove(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.staff.remove(user, id);
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -69,7 +70,7 @@ export class SwapsController {
   @Get(':id')
   @Authenticated()
   @ApiOkResponse({ description: 'One swap, offer or open-shift claim the caller takes part in or manages' })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SwapRequestDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SwapRequestDto> {
     return this.swaps.get(user, id);
   }
 
@@ -80,7 +81,7 @@ export class SwapsController {
   @ApiConflictResponse({ description: 'Already decided, or the roster changed since the proposal' })
   decide(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: SwapDecisionBody,
   ): Promise<SwapRequestDto> {
     return this.swaps.decide(user, id, body);
@@ -90,7 +91,7 @@ export class SwapsController {
   @HttpCode(200)
   @Authenticated() // only the proposer may cancel: checked by the service
   @ApiOkResponse({ description: 'The cancelled request' })
-  cancel(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SwapRequestDto> {
+  cancel(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SwapRequestDto> {
     return this.swaps.cancel(user, id);
   }
 }

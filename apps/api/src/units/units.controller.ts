@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -29,7 +30,7 @@ export class UnitsController {
   @Get(':id')
   @RequirePermissions('units:read')
   @ApiOkResponse({ type: UnitResponse })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<UnitDto> {
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<UnitDto> {
     return this.units.get(user, id);
   }
 
@@ -46,7 +47,7 @@ export class UnitsController {
   @ApiOkResponse({ type: UnitResponse })
   update(
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateUnitDto,
   ): Promise<UnitDto> {
     return this.units.update(user, id, body);
@@ -57,7 +58,7 @@ export class UnitsController {
   @RequirePermissions('units:write')
   @ApiNoContentResponse()
   @ApiConflictResponse({ description: 'The unit still has people' })
-  remove(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.units.remove(user, id);
   }
 }

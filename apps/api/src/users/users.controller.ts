@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiAcceptedResponse,
   ApiConflictResponse,
@@ -29,7 +30,7 @@ export class UsersController {
   @Get(':id')
   @RequirePermissions('users:read')
   @ApiOkResponse({ type: UserResponse })
-  get(@CurrentUser() caller: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<UserDto> {
+  get(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<UserDto> {
     return this.users.get(caller, id);
   }
 
@@ -46,7 +47,7 @@ export class UsersController {
   @ApiOkResponse({ type: UserResponse })
   update(
     @CurrentUser() caller: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateUserDto,
   ): Promise<UserDto> {
     return this.users.update(caller, id, body);
@@ -56,7 +57,7 @@ export class UsersController {
   @HttpCode(200)
   @RequirePermissions('users:write')
   @ApiOkResponse({ type: UserResponse })
-  deactivate(@CurrentUser() caller: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<UserDto> {
+  deactivate(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<UserDto> {
     return this.users.setActive(caller, id, false);
   }
 
@@ -64,7 +65,7 @@ export class UsersController {
   @HttpCode(200)
   @RequirePermissions('users:write')
   @ApiOkResponse({ type: UserResponse })
-  reactivate(@CurrentUser() caller: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<UserDto> {
+  reactivate(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<UserDto> {
     return this.users.setActive(caller, id, true);
   }
 
@@ -72,7 +73,7 @@ export class UsersController {
   @HttpCode(202)
   @RequirePermissions('users:write')
   @ApiAcceptedResponse({ description: 'A new invitation e-mail was sent; earlier links stop working' })
-  resendInvitation(@CurrentUser() caller: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  resendInvitation(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
     return this.users.resendInvitation(caller, id);
   }
 }
