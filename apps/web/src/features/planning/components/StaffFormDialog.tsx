@@ -198,7 +198,7 @@ export function StaffFormDialog({
                 </Field>
                 <Field
                   label="Hourly cost"
-                  hint="Per paid hour; only planners see it."
+                  hint="Per paid hour, in the currency you pay in; reports add these up as cost units. Only planners see it."
                   validationMessage={error('hourlyCost')}
                   validationState={state('hourlyCost')}
                 >

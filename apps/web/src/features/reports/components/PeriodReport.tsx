@@ -31,7 +31,7 @@ export function PeriodReport({ report }: { report: PeriodReportDto }) {
           </MessageBarBody>
         </MessageBar>
       )}
-      <ReportTotals totals={report.totals} />
+      <ReportTotals totals={report.totals} cover={report.cover} />
       <HoursChart people={report.people} />
       <NightsWeekendsChart people={report.people} />
       <CoverChart days={report.coverByDay} cover={report.cover} />

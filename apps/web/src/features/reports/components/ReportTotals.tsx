@@ -1,6 +1,6 @@
 import { Caption1, makeStyles, Subtitle2, tokens } from '@fluentui/react-components';
-import type { ReportTotalsDto } from '@rotaplex/contracts';
-import { formatHours, formatMoney } from '../utils/reportFigures';
+import type { CoverReportRowDto, ReportTotalsDto } from '@rotaplex/contracts';
+import { formatCost, formatHours, shiftsBelowMinimum } from '../utils/reportFigures';
 
 const useStyles = makeStyles({
   list: {
@@ -23,18 +23,30 @@ const useStyles = makeStyles({
 });
 
 /** The period's headline figures, as a description list (term: label, definition: value). */
-export function ReportTotals({ totals }: { totals: ReportTotalsDto }) {
+export function ReportTotals({
+  totals,
+  cover,
+}: {
+  totals: ReportTotalsDto;
+  cover: readonly CoverReportRowDto[];
+}) {
   const styles = useStyles();
+  const below = shiftsBelowMinimum(cover);
   const items: [string, string][] = [
     ['Shifts', String(totals.shifts)],
     ['Paid hours', formatHours(totals.paidMinutes)],
     [
       'Labour cost',
-      `${formatMoney(totals.labourCost)}${totals.peopleWithoutCost ? ` (${totals.peopleWithoutCost} without a rate)` : ''}`,
+      `${formatCost(totals.labourCost)}${totals.peopleWithoutCost ? ` (${totals.peopleWithoutCost} without a rate)` : ''}`,
     ],
     ['Needs at minimum', `${totals.needsMetMin} of ${totals.needs}`],
     ['Needs at target', `${totals.needsMetTarget} of ${totals.needs}`],
-    ['People short of minimums', String(totals.shortOfMin)],
+    [
+      'Shifts below minimum',
+      below.shifts
+        ? `${below.shifts} (${below.missing} ${below.missing === 1 ? 'person' : 'people'} missing)`
+        : '0',
+    ],
     ['Requests honoured', `${totals.requestsHonoured} of ${totals.requests}`],
     ['Night shifts', String(totals.nights)],
     ['Rule findings', String(totals.violations)],

@@ -3,9 +3,11 @@ import {
   coverDayRows,
   fileNameFromDisposition,
   formatHours,
+  formatCost,
   formatMoney,
   hoursRows,
   hoursStatus,
+  shiftsBelowMinimum,
 } from './reportFigures';
 
 const person = (over: Partial<PersonReportDto>): PersonReportDto => ({
@@ -46,6 +48,7 @@ describe('report figures', () => {
     expect(formatHours(1440)).toBe('24');
     expect(formatHours(1000)).toBe('16.67');
     expect(formatMoney(1032.45)).toBe('1,032.45');
+    expect(formatCost(1032.45)).toBe('1,032.45 cost units');
   });
 
   it('splits each day’s needs into met target, met minimum only and below minimum', () => {
@@ -62,6 +65,33 @@ describe('report figures', () => {
     ]);
     expect(row).toMatchObject({ label: 'Mon 7 Jan', metTarget: 3, metMinOnly: 1, belowMin: 2 });
     expect(row.metTarget + row.metMinOnly + row.belowMin).toBe(row.needs);
+  });
+
+  it('counts shifts below minimum, not the people missing on them', () => {
+    const need = (date: string, shiftTypeId: string, skillId: string | null, shortOfMin: number) => ({
+      date,
+      shiftTypeId,
+      shiftCode: shiftTypeId,
+      skillId,
+      skillCode: skillId,
+      min: 2,
+      target: 2,
+      assigned: 2 - shortOfMin,
+      shortOfMin,
+      shortOfTarget: 0,
+      over: 0,
+    });
+    // Monday's night short of 2 nurses and 1 assistant is one shift; Tuesday's night is another;
+    // Tuesday's early is staffed.
+    expect(
+      shiftsBelowMinimum([
+        need('2030-01-07', 'N', 'rn', 2),
+        need('2030-01-07', 'N', 'hca', 1),
+        need('2030-01-08', 'N', 'rn', 1),
+        need('2030-01-08', 'E', 'rn', 0),
+      ]),
+    ).toEqual({ shifts: 2, missing: 4 });
+    expect(shiftsBelowMinimum([])).toEqual({ shifts: 0, missing: 0 });
   });
 
   it('reads the file name of a Content-Disposition header (RFC 6266)', () => {

@@ -1,4 +1,4 @@
-import type { CoverDayReportDto, PersonReportDto } from '@rotaplex/contracts';
+import type { CoverDayReportDto, CoverReportRowDto, PersonReportDto } from '@rotaplex/contracts';
 
 const dayFormat = new Intl.DateTimeFormat('en-GB', {
   weekday: 'short',
@@ -15,8 +15,26 @@ export const formatDate = (date: string) => dayFormat.format(new Date(`${date}T0
 /** Minutes as hours with up to two decimals: 990 → "16.5". */
 export const formatHours = (minutes: number) => hoursFormat.format(minutes / 60);
 
-/** An amount in the unit's currency with two decimals and thousands separators: 1032.45 → "1,032.45". */
+/** An amount with two decimals and thousands separators: 1032.45 → "1,032.45". */
 export const formatMoney = (value: number) => moneyFormat.format(value);
+
+/**
+ * An amount of labour cost: the hourly rates carry no currency (the organisation has no currency
+ * setting), so the amount says plainly that it is in the rates' units: "1,032.45 cost units".
+ */
+export const formatCost = (value: number) => `${formatMoney(value)} cost units`;
+
+/**
+ * Shifts (a date and a shift type) with at least one need below its minimum, and the people missing
+ * on them: a shift short of two nurses and one healthcare assistant is one shift, three people.
+ */
+export function shiftsBelowMinimum(cover: readonly CoverReportRowDto[]): { shifts: number; missing: number } {
+  const short = cover.filter((c) => c.shortOfMin > 0);
+  return {
+    shifts: new Set(short.map((c) => `${c.date}|${c.shiftTypeId}`)).size,
+    missing: short.reduce((total, c) => total + c.shortOfMin, 0),
+  };
+}
 
 /** Minutes to hours rounded to two decimals, for chart values. */
 export const toHours = (minutes: number) => Math.round((minutes / 60) * 100) / 100;
