@@ -16,7 +16,8 @@ export function SwapDecisionPage() {
         <SwapDecisionView token={token} />
       ) : (
         <LinkOutcome intent="error" title="This link is incomplete">
-          Open the link from the e-mail again, or decide in Rotaplex under Swaps.
+          Open the link from the e-mail again, or decide in Rotaplex: under Swaps, or under Swap approvals if
+          you approve swaps.
         </LinkOutcome>
       )}
     </AuthLayout>
