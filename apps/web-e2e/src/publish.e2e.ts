@@ -76,6 +76,25 @@ describe('publishing a roster as the demo manager', () => {
     expect(await page.getByRole('button', { name: 'Publish' }).isEnabled()).toBe(true);
   }, 150_000);
 
+  it('pins a generated cell; the board reads the period again, so the publish below sends its new version', async () => {
+    const { page } = browser;
+    const read = async () =>
+      (await apiCall<RosterPeriodDto>(token, 'GET', P.rosterPeriod(period.id))).version;
+    const before = await read();
+    await page
+      .getByRole('table', { name: 'Planning board' })
+      .locator('button[data-row="0"][data-col="1"]')
+      .focus();
+    await page.keyboard.press('Enter');
+    const dialog = page.getByRole('dialog');
+    await dialog.getByRole('button', { name: 'Pin' }).click();
+    await dialog.getByText('Pinned: a new Generate keeps this cell as it is.').waitFor();
+    await dialog.getByRole('button', { name: 'Close' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    // The pin went through the period's writer; a publish with the version read before it is a 409.
+    expect(await read()).toBe(before + 1);
+  });
+
   it('publishes after the publish check, an acknowledgement and a reason; the board is then read-only', async () => {
     const { page } = browser;
     await page.getByRole('button', { name: 'Publish' }).click();
