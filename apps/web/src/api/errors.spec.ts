@@ -1,5 +1,5 @@
 import { IsEmail, IsNotEmpty, IsUUID, MinLength, validate, type ValidationError } from 'class-validator';
-import { ApiRequestError, formErrors, splitMessages, toApiError } from './errors';
+import { ApiRequestError, formErrors, isForbidden, splitMessages, toApiError } from './errors';
 
 /**
  * The messages come from the real class-validator (the library the API validates with) rather
@@ -70,5 +70,17 @@ describe('field messages from the API', () => {
     expect(fromProxy.statusCode).toBe(502);
     expect(fromProxy.message).toMatch(/server could not complete/);
     expect(toApiError(404, 'Not Found', undefined).message).toBe('The request failed (404 Not Found).');
+  });
+});
+
+describe('isForbidden', () => {
+  it('is true only for a 403 from the API, which a retry cannot change', () => {
+    const refusal = (statusCode: number) =>
+      new ApiRequestError({ statusCode, error: 'x', message: 'Your role (staff) may not do this' });
+    expect(isForbidden(refusal(403))).toBe(true);
+    expect(isForbidden(refusal(401))).toBe(false);
+    expect(isForbidden(refusal(500))).toBe(false);
+    expect(isForbidden(new Error('Failed to fetch'))).toBe(false);
+    expect(isForbidden(undefined)).toBe(false);
   });
 });

@@ -90,6 +90,11 @@ function networkMessage(error: Error): string {
 }
 
 /** One readable sentence for any error (banners, toasts). */
+/** Whether the server refused the caller (403): trying again cannot help, only another role or unit. */
+export function isForbidden(error: unknown): boolean {
+  return error instanceof ApiRequestError && error.status === 403;
+}
+
 export function errorText(error: unknown): string {
   if (error instanceof ApiRequestError) return error.messages.map(sentenceCase).join(' ');
   if (error instanceof Error) return networkMessage(error);
