@@ -1,3 +1,4 @@
+import { PLANNING_ROUTES as P, type Page as PageOf, type RosterPeriodDto } from '@rotaplex/contracts';
 import {
   DEMO_PASSWORD,
   eventually,
@@ -9,6 +10,7 @@ import {
   unnamedControls,
   type Session,
 } from './support/browser';
+import { apiCall, apiSignIn, findWard } from './support/api';
 
 // Issue 2, "Done when": the demo sign-ins work and each role sees its own navigation; wrong
 // passwords and wrong roles are refused. Demo accounts are those the README lists.
@@ -112,6 +114,29 @@ describe('signing in by role', () => {
     expect(await page.getByRole('button', { name: 'Invite person' }).count()).toBe(0);
     await page.goto('/admin/organisation');
     await page.getByRole('heading', { level: 1, name: "You don't have access to this page" }).waitFor();
+  });
+
+  it('tells a manager who opens another unit’s board that they have no access, with the way home and no retry', async () => {
+    const { page } = browser;
+    // A period of the contact centre, which manager@example.com does not plan (demo data).
+    const other = await apiSignIn('manager2@example.com');
+    const contact = await findWard(other, 'Contact Centre North');
+    const periods = await apiCall<PageOf<RosterPeriodDto>>(
+      other,
+      'GET',
+      `${P.rosterPeriods}?unitId=${encodeURIComponent(contact.id)}`,
+    );
+    await signIn(page, 'manager@example.com');
+    await page.goto(`/planning/periods/${periods.items[0].id}/board`);
+    const refusal = page.getByRole('alert').filter({ hasText: "You don't have access to this page" });
+    await refusal.waitFor();
+    await refusal.getByText('You do not have access to this unit').waitFor();
+    // A 403 is not a failure a retry can mend.
+    expect(await page.getByRole('button', { name: 'Try again' }).count()).toBe(0);
+    await screenshot(page, 'forbidden-board');
+    await refusal.getByRole('button', { name: 'Go to the overview' }).click();
+    await page.waitForURL((url) => url.pathname === '/');
+    await page.getByRole('navigation', { name: 'Main' }).waitFor();
   });
 
   it('gives staff no administration and refuses the people page', async () => {
