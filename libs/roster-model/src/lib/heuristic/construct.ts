@@ -20,6 +20,7 @@ import { requestHonoured } from '../goals/requests';
 import { NO_PIN, ProblemIndex, type Grid } from '../model/context';
 import { RULES } from '../rules';
 import { paidMinutesOf } from '../rules/min-paid-minutes';
+import { mulberry32 } from '../random';
 
 export interface ConstructOptions {
   /** Seed of the random moves (same seed and iteration limit → same roster). */
@@ -28,18 +29,6 @@ export interface ConstructOptions {
   timeLimitMs?: number;
   /** When set, the local search stops after this many moves whatever the time (repeatable results). */
   maxIterations?: number;
-}
-
-/** Small fast seeded generator (mulberry32). */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 /** The search state: a grid with incrementally maintained cover counts and per-person scores. */
@@ -365,7 +354,7 @@ interface Budget {
  * (soft terms only break ties); then on the full score with hard rules dominating.
  */
 function localSearch(search: Search, options: ConstructOptions): void {
-  const random = rng(options.seed ?? 1);
+  const random = mulberry32(options.seed ?? 1);
   const started = Date.now();
   let from = 0;
   if (search.hard > 0) {

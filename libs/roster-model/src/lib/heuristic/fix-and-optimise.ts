@@ -13,6 +13,7 @@ import type { Roster } from '../problem';
 import { checkRoster } from '../check/checker';
 import type { HighsModelArrays } from '../model/builder';
 import type { BuiltModel } from '../model/build-model';
+import { mulberry32 } from '../random';
 
 export interface SubMipResult {
   /** Column values of the best solution found, or null when none. */
@@ -52,17 +53,6 @@ export interface FixAndOptimiseResult {
   improvements: number;
   /** Rosters taken over from `incoming` because they were better. */
   adopted: number;
-}
-
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 /** x columns of each (person, day). */
@@ -178,7 +168,7 @@ export async function fixAndOptimise(
   options: FixAndOptimiseOptions,
 ): Promise<FixAndOptimiseResult> {
   const deadline = Date.now() + options.timeLimitSeconds * 1000;
-  const random = rng(options.seed ?? 1);
+  const random = mulberry32(options.seed ?? 1);
   const startCheck = checkRoster(built.problem, start, built.index);
   if (startCheck.violations.length && !built.elastic) {
     throw new Error(

@@ -1,17 +1,10 @@
 /** Seeded random small roster problems for tests (invented data), using every rule and goal. */
 import type { RosterProblem } from '../problem';
+import { mulberry32 } from '../random';
 import { EARLY, LATE, NIGHT, person, problem } from './fixtures.test-helpers';
 
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded generator for tests (mulberry32). */
+export const seeded = mulberry32;
 
 export function randomProblem(seed: number, people = 5, days = 7): RosterProblem {
   const r = seeded(seed);

@@ -22,18 +22,7 @@ import { needWeights } from '../goals/cover';
 import { nightEligible } from '../goals/fair-nights';
 import { NO_PIN, type Grid, type ProblemIndex } from '../model/context';
 import { LineCost, type LineScore } from './line-cost';
-
-/** Small fast seeded generator (mulberry32). */
-export function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { mulberry32 } from '../random';
 
 /** Max and min of counts kept as a histogram (values 0 … size − 1). */
 class Spread {
