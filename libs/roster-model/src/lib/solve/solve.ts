@@ -393,6 +393,7 @@ function emptyResult(
   built: BuiltModel,
   conflicts: ConflictExplanation | null,
   setupSeconds: number,
+  seconds: number,
 ): RosterSolveResult {
   return {
     setupSeconds,
@@ -401,7 +402,7 @@ function emptyResult(
     objective: null,
     bound: run.bound,
     gap: null,
-    seconds: run.seconds,
+    seconds,
     secondsToBest: null,
     check: null,
     quality: qualityStatement({ status: run.status, objective: null, bound: run.bound }),
@@ -579,7 +580,7 @@ export async function solveRoster(
     const conflicts = explain
       ? explainConflicts(session, built, { cancelled: () => isCancelled(options) })
       : null;
-    return emptyResult(run, built, conflicts, setupSeconds);
+    return emptyResult(run, built, conflicts, setupSeconds, Math.max(run.seconds, elapsed()));
   }
   let values = run.values;
   let solverObjective = run.objective;
@@ -597,7 +598,8 @@ export async function solveRoster(
     );
     secondsToBest = found ? found.seconds : setupSeconds;
   }
-  if (values === null || solverObjective === null) return emptyResult(run, built, null, setupSeconds);
+  if (values === null || solverObjective === null)
+    return emptyResult(run, built, null, setupSeconds, Math.max(run.seconds, elapsed()));
 
   const roster = built.decode(values);
   const check = checkRoster(problem, roster, built.index);
