@@ -40,6 +40,7 @@ import { requestMarks } from '../utils/requestMarks';
 import { BoardGrid } from './BoardGrid';
 import { CellDialog } from './CellDialog';
 import { SolvePanel } from './SolvePanel';
+import { draftContents } from '../utils/draftContents';
 import { PublishControls } from '@/features/publishing/components/PublishControls';
 import type { CalendarLayout } from './PeriodCalendar';
 import { ViolationsPanel } from './ViolationsPanel';
@@ -144,6 +145,8 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
     void queryClient.invalidateQueries({ queryKey: ['roster-periods'] });
   };
 
+  const draft = useMemo(() => draftContents(grid.data), [grid.data]);
+
   const failed = [grid, shiftTypes, skills, contracts, staff, needs, units].find((q) => q.isError);
   const running = solve.run?.status === 'queued' || solve.run?.status === 'running';
   const openRow = open && grid.data?.rows.find((r) => r.staffMemberId === open.staffMemberId);
@@ -158,6 +161,7 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
           shiftTypes={maps.shiftTypeMap}
           skills={maps.skillMap}
           staffNames={maps.names}
+          draft={draft}
         />
         <PublishControls period={period} solveActive={running} />
       </section>

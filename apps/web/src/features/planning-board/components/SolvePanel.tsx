@@ -20,7 +20,9 @@ import {
   type SkillDto,
   type SolveRunStatus,
 } from '@rotaplex/contracts';
+import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import type { SolveRunState } from '../hooks/useSolveRun';
+import { type DraftContents, replaceWarning } from '../utils/draftContents';
 import { ExplanationsPanel } from './ExplanationsPanel';
 
 const useStyles = makeStyles({
@@ -54,13 +56,17 @@ export interface SolvePanelProps {
   shiftTypes: Map<string, ShiftTypeDto>;
   skills: Map<string, SkillDto>;
   staffNames: Map<string, string>;
+  /** What the draft holds now: Generate asks before it replaces any unpinned shift. */
+  draft: DraftContents;
 }
 
 /** Generate with a time limit, the live progress of the run, Stop, and the result once it ends. */
-export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames }: SolvePanelProps) {
+export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames, draft }: SolvePanelProps) {
   const styles = useStyles();
   const [limit, setLimit] = useState('30');
   const [limitError, setLimitError] = useState<string | null>(null);
+  /** Seconds of a Generate waiting for the planner to confirm that it replaces the draft. */
+  const [confirming, setConfirming] = useState<number | null>(null);
   const { run, progress } = solve;
   const active = run?.status === 'queued' || run?.status === 'running';
 
@@ -77,7 +83,13 @@ export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames }: 
       return;
     }
     setLimitError(null);
-    solve.start(seconds);
+    if (draft.replaced > 0) setConfirming(seconds);
+    else solve.start(seconds);
+  };
+
+  const handleConfirm = () => {
+    if (confirming !== null) solve.start(confirming);
+    setConfirming(null);
   };
 
   const elapsed = progress?.elapsedSeconds ?? 0;
@@ -118,6 +130,15 @@ export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames }: 
           )}
         </div>
       )}
+      <ConfirmDialog
+        open={confirming !== null}
+        title="Replace the draft?"
+        confirmLabel="Replace and generate"
+        onConfirm={handleConfirm}
+        onCancel={() => setConfirming(null)}
+      >
+        {replaceWarning(draft)}
+      </ConfirmDialog>
       {solve.error && (
         <MessageBar intent="error">
           <MessageBarBody>{solve.error}</MessageBarBody>
