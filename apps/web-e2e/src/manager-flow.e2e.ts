@@ -3,6 +3,7 @@ import { apiCall, apiSignIn } from './support/api';
 import {
   openBrowser,
   openDemoDraft,
+  pressGenerate,
   screenshot,
   signIn,
   unnamedControls,
@@ -29,7 +30,7 @@ describe('the contact centre planner generates and publishes the demo period', (
     const { page } = browser;
     await openDemoDraft(page, /^Planning board: Contact Centre North/);
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('30');
-    await page.getByRole('button', { name: 'Generate' }).click();
+    await pressGenerate(page);
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
     const explanations = page.getByRole('region', { name: 'Explanations' });
     await explanations.getByText(/Unmet needs \([1-9]\d*\)/).waitFor();

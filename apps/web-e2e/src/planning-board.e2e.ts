@@ -1,6 +1,7 @@
 import {
   openBrowser,
   openDemoDraft,
+  pressGenerate,
   screenshot,
   signIn,
   unnamedControls,
@@ -37,7 +38,7 @@ describe('planning board as the demo manager', () => {
   it('generates with a time limit, shows progress, then the quality statement and explanations', async () => {
     const { page } = browser;
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('45');
-    await page.getByRole('button', { name: 'Generate' }).click();
+    await pressGenerate(page);
     // While the run is queued or running the Stop button and the time bar are shown.
     await page.getByRole('button', { name: 'Stop' }).waitFor();
     await page.getByRole('progressbar', { name: 'Time used of the limit' }).waitFor();
@@ -174,7 +175,20 @@ describe('planning board as the demo manager', () => {
   it('stops a new Generate on request and keeps the pinned cell', async () => {
     const { page } = browser;
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('120');
-    await page.getByRole('button', { name: 'Generate' }).click();
+    // The draft has generated shifts, an edit made by hand and a pin: Generate asks first, says what
+    // it replaces and that the pin is kept; Cancel starts nothing.
+    await page.getByRole('button', { name: 'Generate', exact: true }).click();
+    const confirm = page.getByRole('alertdialog', { name: 'Replace the draft?' });
+    await confirm.waitFor();
+    expect(await confirm.innerText()).toMatch(
+      /Generate replaces the \d+ shifts of this draft that are not pinned, including changes made by hand\. The 1 pinned cell stays as it is\./,
+    );
+    await screenshot(page, 'planning-board-replace-draft');
+    await confirm.getByRole('button', { name: 'Cancel' }).click();
+    await confirm.waitFor({ state: 'detached' });
+    expect(await page.getByRole('button', { name: 'Stop' }).count()).toBe(0);
+    await page.getByRole('button', { name: 'Generate', exact: true }).click();
+    await confirm.getByRole('button', { name: 'Replace and generate' }).click();
     const status = page.getByRole('status', { name: 'Solve progress' });
     await status.getByText(/^Generating/).waitFor({ timeout: 30_000 });
     await page.getByRole('button', { name: 'Stop' }).click();

@@ -8,6 +8,7 @@ import { apiCall, managerPeriod, shiftIdsByCode } from './support/api';
 import {
   eventually,
   openBrowser,
+  pressGenerate,
   screenshot,
   signIn,
   signOut,
@@ -24,7 +25,7 @@ import {
 // so no roster meets it and publishing needs an acknowledgement with a written reason.
 describe('publishing a roster as the demo manager', () => {
   const START = '2024-09-02'; // a Monday
-  const SUBJECT = 'Your roster for Ward 7 Acute Medicine, 2024-09-02 to 2024-09-08';
+  const SUBJECT = 'Your roster for Ward 7 Acute Medicine, Mon 2 Sep 2024 to Sun 8 Sep 2024';
   const REASON = 'Bank nurses booked for the Monday early; escalated to the site manager';
   let token: string;
   let period: RosterPeriodDto;
@@ -71,7 +72,7 @@ describe('publishing a roster as the demo manager', () => {
     await page.goto(`/planning/periods/${period.id}/board`);
     await page.getByRole('heading', { name: /^Planning board: / }).waitFor();
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('20');
-    await page.getByRole('button', { name: 'Generate' }).click();
+    await pressGenerate(page);
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
     expect(await page.getByRole('button', { name: 'Publish' }).isEnabled()).toBe(true);
   }, 150_000);
