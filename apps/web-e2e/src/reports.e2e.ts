@@ -65,7 +65,16 @@ describe('reports of a period as the demo manager', () => {
     const texts = await totals.allInnerTexts();
     expect(texts).toEqual(expect.arrayContaining(['2', '16.5']));
     // Other journeys may add people without an hourly rate; the cost then says how many.
-    expect(texts.some((t) => /^404\.25( \(\d+ without a rate\))?$/.test(t))).toBe(true);
+    // The rates carry no currency, so the amount says its units plainly.
+    expect(texts.some((t) => /^404\.25 cost units( \(\d+ without a rate\))?$/.test(t))).toBe(true);
+    // Shortfalls are counted as shifts, with the people missing on them.
+    await page.getByRole('term').filter({ hasText: 'Shifts below minimum' }).waitFor();
+    expect(
+      await page
+        .getByRole('term')
+        .filter({ hasText: /People short/ })
+        .count(),
+    ).toBe(0);
 
     // The table alternative of the hours chart: Priya's row.
     const hours = page.getByRole('region', { name: 'Hours against contract' });
