@@ -1,5 +1,5 @@
 import { PLANNING_ROUTES as P, REQUESTS_ROUTES as Q, type UnitDto } from '@rotaplex/contracts';
-import { localDate } from '../src/demo/demo-planning';
+import { localDate } from '../src/common/dates';
 import { addDays } from '../src/roster-periods/roster-periods.service';
 import { createPeriod, findUnit } from './support/planning';
 import { expressRoutes } from './support/routes';

@@ -1,5 +1,6 @@
 import { type ContractRules } from '@rotaplex/contracts';
 import { type EntityManager } from 'typeorm';
+import { localDate } from '../common/dates';
 import { ContractEntity } from '../contracts/contract.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
@@ -128,16 +129,6 @@ export function demoPeriodStart(today: string): string {
   const earliest = addDays(today, 21);
   const weekday = new Date(`${earliest}T00:00:00Z`).getUTCDay(); // 0 = Sunday, 1 = Monday
   return addDays(earliest, (8 - weekday) % 7);
-}
-
-/** Today's date in a time zone, "YYYY-MM-DD". */
-export function localDate(now: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-CA', {
-    timeZone,
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-  }).format(now);
 }
 
 type Need = { shift: string; skill: string | null; min: number; target: number };

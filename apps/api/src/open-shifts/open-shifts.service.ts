@@ -14,7 +14,7 @@ import { DataSource, In } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
-import { localDate } from '../demo/demo-planning';
+import { localDate } from '../common/dates';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';

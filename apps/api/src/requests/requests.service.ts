@@ -27,7 +27,7 @@ import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitEntity } from '../units/unit.entity';
 import { dateInWords, dateRangeInWords } from '../common/text/date-words';
-import { localDate } from '../demo/demo-planning';
+import { localDate } from '../common/dates';
 import { UserEntity } from '../users/user.entity';
 import {
   type CreateDateRequestDto,

@@ -3,7 +3,7 @@ import { Cron, CronExpression } from '@nestjs/schedule';
 import { type SwapStatus } from '@rotaplex/contracts';
 import { Brackets, DataSource } from 'typeorm';
 import { dateInWords } from '../common/text/date-words';
-import { localDate } from '../demo/demo-planning';
+import { localDate } from '../common/dates';
 import { sqliteUtc } from '../outbox/outbox-delivery.service';
 import { UnitEntity } from '../units/unit.entity';
 import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';

@@ -29,7 +29,7 @@ import { assertUnitAccess, canAccessUnit } from '../common/unit-scope';
 import { AppConfig } from '../config/app-config';
 import { AuditService } from '../audit/audit.service';
 import { PeriodWriter } from '../roster-periods/period-writer';
-import { localDate } from '../demo/demo-planning';
+import { localDate } from '../common/dates';
 import { MailService, type OutgoingMail } from '../mail/mail.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
