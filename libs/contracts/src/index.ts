@@ -10,3 +10,4 @@ export * from './lib/requests';
 export * from './lib/publishing';
 export * from './lib/my-roster';
 export * from './lib/guard-rails';
+export * from './lib/demand';
