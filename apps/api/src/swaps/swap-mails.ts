@@ -1,4 +1,8 @@
+import { type SwapPreviewDto } from '@rotaplex/contracts';
 import { type OutgoingMail } from '../mail/mail.service';
+import { type RosterInput } from '../roster-input/roster-input.service';
+import { type StaffMemberEntity } from '../staff/staff-member.entity';
+import { type StoredCellChange, type SwapRequestEntity } from './swap-request.entity';
 import { dateInWords } from '../common/text/date-words';
 import { escapeHtml } from '../mail/templates';
 
@@ -48,4 +52,49 @@ ${button}
 <p style="margin:24px 0 0;font-size:12px;color:#5a6b69">${escapeHtml(footer)}</p>
 </body></html>`;
   return { to: p.to, subject: p.subject, text: `${text}\n`, html };
+}
+
+// ---------------------------------------------------------------- requests in words
+
+/** The shift type of an id (undefined for a day off or an unknown id). */
+export function shiftOf(input: Pick<RosterInput, 'shiftTypes'>, id: string | null) {
+  return id === null ? undefined : input.shiftTypes.find((s) => s.id === id);
+}
+
+export function staffName(input: Pick<RosterInput, 'staff'>, id: string): string {
+  return input.staff.find((s) => s.id === id)?.name ?? 'someone';
+}
+
+/** The messages of the checker's findings that the change would add. */
+export function newMessages(p: SwapPreviewDto): string[] {
+  return p.violations.filter((v) => v.isNew).map((v) => v.message);
+}
+
+/** The request in words: who works what after the change. */
+export function summary(input: RosterInput, row: Pick<SwapRequestEntity, 'changes'>): string {
+  const changes = JSON.parse(row.changes) as StoredCellChange[];
+  return changes
+    .filter((c) => c.after !== null)
+    .map((c) => `${staffName(input, c.staffMemberId)} works ${shiftWords(shiftOf(input, c.after), c.date)}`)
+    .join(' and ');
+}
+
+/** What a proposed swap or offer asks of the colleague, for their mail. */
+export function describe(
+  input: RosterInput,
+  changes: StoredCellChange[],
+  me: StaffMemberEntity,
+  colleague: StaffMemberEntity,
+  kind: 'swap' | 'offer',
+): string[] {
+  const give = changes.find((c) => c.staffMemberId === me.id && c.before !== null)!;
+  if (kind === 'offer') {
+    return [`${me.name} offers you their shift ${shiftWords(shiftOf(input, give.before), give.date)}.`];
+  }
+  const take = changes.find((c) => c.staffMemberId === colleague.id && c.before !== null)!;
+  return [
+    `${me.name} asks to swap: you would work ${shiftWords(shiftOf(input, give.before), give.date)}, ` +
+      `and they would work your shift ${shiftWords(shiftOf(input, take.before), take.date)}.`,
+    'Rotaplex checked both rosters after the swap: it breaks no rule.',
+  ];
 }

@@ -26,13 +26,19 @@ import {
   SwapListQuery,
   SwapOptionsQuery,
 } from './dto/swap.dto';
-import { SwapsService } from './swaps.service';
+import { SwapDecisions } from './swap-decisions.service';
+import { SwapPlanning } from './swap-planning.service';
+import { SwapReads } from './swap-reads.service';
 
 /** Swaps and offers between staff of a published roster, and their approval by a manager. */
 @ApiTags('swaps')
 @Controller('swaps')
 export class SwapsController {
-  constructor(private readonly swaps: SwapsService) {}
+  constructor(
+    private readonly reads: SwapReads,
+    private readonly planning: SwapPlanning,
+    private readonly decisions: SwapDecisions,
+  ) {}
 
   @Get()
   @Authenticated()
@@ -41,14 +47,14 @@ export class SwapsController {
       'A page of { items, total, page, pageSize }, newest first. Staff: requests they are part of; managers: requests of their units',
   })
   list(@CurrentUser() user: AuthUser, @Query() query: SwapListQuery): Promise<Page<SwapRequestDto>> {
-    return this.swaps.list(user, query);
+    return this.reads.list(user, query);
   }
 
   @Get('options')
   @RequirePermissions('requests:own')
   @ApiOkResponse({ description: 'My shifts in a published period and colleagues to swap with' })
   options(@CurrentUser() user: AuthUser, @Query() query: SwapOptionsQuery): Promise<SwapOptionsDto> {
-    return this.swaps.options(user, query.rosterPeriodId);
+    return this.reads.options(user, query.rosterPeriodId);
   }
 
   @Post('preview')
@@ -56,7 +62,7 @@ export class SwapsController {
   @RequirePermissions('requests:own')
   @ApiOkResponse({ description: "The checker's findings for both people after the change; nothing is saved" })
   preview(@CurrentUser() user: AuthUser, @Body() body: ProposeSwapBody): Promise<SwapPreviewDto> {
-    return this.swaps.preview(user, body);
+    return this.planning.preview(user, body);
   }
 
   @Post()
@@ -64,14 +70,14 @@ export class SwapsController {
   @ApiCreatedResponse({ description: 'The request, waiting for the colleague' })
   @ApiUnprocessableEntityResponse({ description: 'The change breaks a hard rule (findings in the body)' })
   propose(@CurrentUser() user: AuthUser, @Body() body: ProposeSwapBody): Promise<SwapRequestDto> {
-    return this.swaps.propose(user, body);
+    return this.planning.propose(user, body);
   }
 
   @Get(':id')
   @Authenticated()
   @ApiOkResponse({ description: 'One swap, offer or open-shift claim the caller takes part in or manages' })
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SwapRequestDto> {
-    return this.swaps.get(user, id);
+    return this.reads.get(user, id);
   }
 
   @Post(':id/decision')
@@ -84,7 +90,7 @@ export class SwapsController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: SwapDecisionBody,
   ): Promise<SwapRequestDto> {
-    return this.swaps.decide(user, id, body);
+    return this.decisions.decide(user, id, body);
   }
 
   @Post(':id/cancel')
@@ -92,7 +98,7 @@ export class SwapsController {
   @Authenticated() // only the proposer may cancel: checked by the service
   @ApiOkResponse({ description: 'The cancelled request' })
   cancel(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<SwapRequestDto> {
-    return this.swaps.cancel(user, id);
+    return this.decisions.cancel(user, id);
   }
 }
 
@@ -103,12 +109,12 @@ export class SwapsController {
 @ApiTags('swaps')
 @Controller('swap-links')
 export class SwapLinksController {
-  constructor(private readonly swaps: SwapsService) {}
+  constructor(private readonly decisions: SwapDecisions) {}
 
   @Get()
   @Public()
   view(@Query() query: SwapLinkQuery): Promise<SwapLinkViewDto> {
-    return this.swaps.viewLink(query.token);
+    return this.decisions.viewLink(query.token);
   }
 
   @Post()
@@ -116,6 +122,6 @@ export class SwapLinksController {
   @HttpCode(200)
   decide(@Body() body: SwapLinkDecisionBody): Promise<SwapRequestDto> {
     const { token, ...decision } = body;
-    return this.swaps.decideByLink(token, decision);
+    return this.decisions.decideByLink(token, decision);
   }
 }

@@ -3,7 +3,12 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
 import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
+import { SwapDecisions } from './swap-decisions.service';
 import { SwapExpiryService } from './swap-expiry.service';
+import { SwapLinks } from './swap-links';
+import { SwapMailer } from './swap-mailer';
+import { SwapPlanning } from './swap-planning.service';
+import { SwapReads } from './swap-reads.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';
 import { SwapLinksController, SwapsController } from './swaps.controller';
 import { SwapsService } from './swaps.service';
@@ -16,7 +21,7 @@ import { SwapsService } from './swaps.service';
     MailModule,
   ],
   controllers: [SwapsController, SwapLinksController],
-  providers: [SwapsService, SwapExpiryService],
+  providers: [SwapsService, SwapReads, SwapPlanning, SwapDecisions, SwapLinks, SwapMailer, SwapExpiryService],
   exports: [SwapsService, SwapExpiryService],
 })
 export class SwapsModule {}

@@ -1,0 +1,377 @@
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  GoneException,
+  Injectable,
+  UnprocessableEntityException,
+} from '@nestjs/common';
+import {
+  hasPermission,
+  SWAP_FINAL_STATUSES,
+  type SwapDecisionDto,
+  type SwapLinkViewDto,
+  type SwapPreviewDto,
+  type SwapRequestDto,
+  type SwapStatus,
+} from '@rotaplex/contracts';
+import { DataSource, type EntityManager } from 'typeorm';
+import { AssignmentEntity } from '../assignments/assignment.entity';
+import { AuditService } from '../audit/audit.service';
+import { type AuthUser } from '../common/auth-user';
+import { canAccessUnit } from '../common/unit-scope';
+import { dateInWords } from '../common/text/date-words';
+import { type OutgoingMail } from '../mail/mail.service';
+import { PeriodWriter } from '../roster-periods/period-writer';
+import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
+import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { UserEntity } from '../users/user.entity';
+import { evaluateChanges, staleCells } from './swap-evaluation';
+import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.service';
+import { SwapLinks } from './swap-links';
+import { SwapMailer } from './swap-mailer';
+import { newMessages, staffName, summary } from './swap-mails';
+import { SwapReads } from './swap-reads.service';
+import { type StoredCellChange, SwapRequestEntity } from './swap-request.entity';
+
+/** What a decision produced: mails (queued in its transaction), and a refusal to report after the commit. */
+interface Outcome {
+  mails: OutgoingMail[];
+  refusal?: { status: 409 | 410 | 422; message: string; findings?: SwapPreviewDto };
+}
+
+type Actor = AuthUser;
+
+/**
+ * Decisions on swaps, offers and open-shift claims: the proposer's cancel, the colleague's answer,
+ * the manager's approval (in the app or through a single-use e-mail link) and the change itself,
+ * applied through the period's writer in one transaction only if the roster still holds the cells
+ * recorded at proposal and the rules still hold. Every decision re-checks expiry itself.
+ */
+@Injectable()
+export class SwapDecisions {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly input: RosterInputService,
+    private readonly reads: SwapReads,
+    private readonly links: SwapLinks,
+    private readonly mailer: SwapMailer,
+    private readonly auditTrail: AuditService,
+    private readonly writer: PeriodWriter,
+  ) {}
+
+  async cancel(user: AuthUser, id: string): Promise<SwapRequestDto> {
+    const outcome = await this.dataSource.transaction(async (em): Promise<Outcome> => {
+      const row = await this.reads.visibleRequest(em, user, id);
+      const me = await em.findOneBy(StaffMemberEntity, { id: row.proposerStaffMemberId, userId: user.id });
+      if (!me) throw new ForbiddenException('Only the person who asked can cancel this request');
+      if (row.status !== 'proposed' && row.status !== 'accepted') {
+        throw new ConflictException(`This request is already ${row.status}`);
+      }
+      const input = await this.input.load(row.rosterPeriodId, {}, em);
+      const overdue = await this.expireIfOverdue(em, row, input);
+      if (overdue) return overdue;
+      await this.setStatus(em, row, 'cancelled', `Cancelled by ${me.name}`, null);
+      const mails: OutgoingMail[] = [];
+      if (row.colleagueStaffMemberId) {
+        mails.push(
+          ...(await this.mailer.mailPeople(
+            em,
+            input,
+            [row.colleagueStaffMemberId],
+            `${me.name} cancelled a swap`,
+            [`${me.name} cancelled their request: ${summary(input, row)}.`, 'Your roster stays as it was.'],
+          )),
+        );
+      }
+      await this.mailer.queue(em, mails);
+      return { mails };
+    });
+    await this.finish(outcome);
+    return this.reads.get(user, id);
+  }
+
+  /** A decision in the app by the signed-in user. */
+  async decide(user: AuthUser, id: string, body: SwapDecisionDto): Promise<SwapRequestDto> {
+    const outcome = await this.dataSource.transaction(async (em) => {
+      const row = await this.reads.visibleRequest(em, user, id);
+      const result = await this.decideIn(em, row, user, body);
+      await this.mailer.queue(em, result.mails);
+      return result;
+    });
+    await this.finish(outcome);
+    return this.reads.get(user, id);
+  }
+
+  /** What an e-mail link shows before the person confirms. Changes nothing (mail scanners may fetch it). */
+  async viewLink(token: string): Promise<SwapLinkViewDto> {
+    const m = this.dataSource.manager;
+    const link = await this.links.valid(m, token);
+    const row = await m.findOneByOrFail(SwapRequestEntity, { id: link.swapRequestId });
+    const actor = await this.actorOf(m, link.userId);
+    const input = await this.input.load(row.rosterPeriodId, {}, m);
+    const dto = await this.reads.dtoOf(m, row, actor);
+    return {
+      decisions: link.role === 'colleague' ? ['accept', 'decline'] : ['approve', 'refuse'],
+      role: link.role,
+      actorName: actor.displayName,
+      swap: dto,
+      unitName: input.unit.name,
+      timeZone: input.unit.timeZone,
+    };
+  }
+
+  /** A decision made through an e-mail link: uses the token up in the same transaction as the decision. */
+  async decideByLink(token: string, body: SwapDecisionDto): Promise<SwapLinkViewDto['swap']> {
+    const outcome = await this.dataSource.transaction(async (em) => {
+      const link = await this.links.valid(em, token);
+      const allowed = link.role === 'colleague' ? ['accept', 'decline'] : ['approve', 'refuse'];
+      if (!allowed.includes(body.decision)) {
+        throw new BadRequestException([`decision: this link can only ${allowed.join(' or ')}`]);
+      }
+      await this.links.useUp(em, link);
+      const row = await em.findOneByOrFail(SwapRequestEntity, { id: link.swapRequestId });
+      const actor = await this.actorOf(em, link.userId);
+      const result = await this.decideIn(em, row, actor, body);
+      await this.mailer.queue(em, result.mails);
+      return { ...result, id: row.id, actor };
+    });
+    await this.finish(outcome);
+    const m = this.dataSource.manager;
+    const row = await m.findOneByOrFail(SwapRequestEntity, { id: outcome.id });
+    return this.reads.dtoOf(m, row, outcome.actor);
+  }
+
+  /** Reports a refusal (recorded in the committed transaction) as an error. */
+  private async finish(outcome: Outcome): Promise<void> {
+    if (outcome.refusal) {
+      const body = { statusCode: outcome.refusal.status, message: outcome.refusal.message };
+      if (outcome.refusal.status === 422) {
+        throw new UnprocessableEntityException({ ...body, findings: outcome.refusal.findings });
+      }
+      if (outcome.refusal.status === 410) throw new GoneException(body);
+      throw new ConflictException(body);
+    }
+  }
+
+  private async decideIn(
+    em: EntityManager,
+    row: SwapRequestEntity,
+    actor: Actor,
+    body: SwapDecisionDto,
+  ): Promise<Outcome> {
+    if (row.status === 'expired') throw new GoneException(expiredMessage(row));
+    const input = await this.input.load(row.rosterPeriodId, {}, em);
+    // Its day may have passed since the last scheduled sweep: decide nothing, record the expiry.
+    const overdue = await this.expireIfOverdue(em, row, input);
+    if (overdue) return overdue;
+    const reason = body.reason?.trim() || null;
+    if (body.decision === 'accept' || body.decision === 'decline') {
+      const colleague = row.colleagueStaffMemberId
+        ? await em.findOneBy(StaffMemberEntity, { id: row.colleagueStaffMemberId })
+        : null;
+      if (!colleague || colleague.userId !== actor.id) {
+        throw new ForbiddenException('Only the colleague asked can accept or decline this request');
+      }
+      if (row.status !== 'proposed') throw new ConflictException(`This request is already ${row.status}`);
+      const proposer = await em.findOneByOrFail(StaffMemberEntity, { id: row.proposerStaffMemberId });
+      await this.links.retire(em, row.id, 'colleague');
+      if (body.decision === 'decline') {
+        await this.setStatus(
+          em,
+          row,
+          'declined',
+          `Declined by ${colleague.name}${reason ? `: ${reason}` : ''}`,
+          null,
+        );
+        return {
+          mails: await this.mailer.mailPeople(
+            em,
+            input,
+            [proposer.id],
+            `${colleague.name} declined your swap`,
+            [
+              `${colleague.name} declined: ${summary(input, row)}.`,
+              ...(reason ? [`Their reason: "${reason}"`] : []),
+              'Your roster stays as it was.',
+            ],
+          ),
+        };
+      }
+      await this.setStatus(em, row, 'accepted', null, null);
+      const mails = await this.mailer.mailPeople(
+        em,
+        input,
+        [proposer.id],
+        `${colleague.name} accepted your swap`,
+        [
+          `${colleague.name} accepted: ${summary(input, row)}.`,
+          'A manager of the unit now approves or declines it; you will hear the result.',
+        ],
+      );
+      mails.push(
+        ...(await this.mailer.managerLinks(
+          em,
+          input,
+          row,
+          `Swap to approve: ${proposer.name} and ${colleague.name}`,
+          [
+            `${proposer.name} and ${colleague.name} agreed: ${summary(input, row)}.`,
+            'When it was proposed, Rotaplex checked both rosters after the change: it broke no rule. Approving checks again. Please approve or decline.',
+          ],
+        )),
+      );
+      return { mails };
+    }
+
+    // approve / refuse: a manager of the unit (or an admin of the organisation)
+    if (!hasPermission(actor.role, 'requests:approve') || !canAccessUnit(actor, row.unitId)) {
+      throw new ForbiddenException('Only a manager of the unit can approve or decline this request');
+    }
+    if (row.status !== 'accepted') {
+      throw new ConflictException(
+        row.status === 'proposed'
+          ? 'The colleague has not accepted this request yet'
+          : `This request is already ${row.status}`,
+      );
+    }
+    await this.links.retire(em, row.id, 'manager');
+    const involved = [
+      row.proposerStaffMemberId,
+      ...(row.colleagueStaffMemberId ? [row.colleagueStaffMemberId] : []),
+    ];
+    const what = summary(input, row);
+    const refuse = async (outcome: string, refusal: Outcome['refusal']): Promise<Outcome> => {
+      await this.setStatus(em, row, 'refused', outcome, actor.id);
+      const mails = await this.mailer.mailPeople(em, input, involved, 'A roster change was declined', [
+        `Not approved: ${what}.`,
+        outcome,
+        'Your roster stays as it was.',
+      ]);
+      mails.push(
+        this.mailer.managerNote(input, actor, 'A roster change was declined', [
+          `Not approved: ${what}.`,
+          outcome,
+        ]),
+      );
+      return { mails, refusal };
+    };
+    if (body.decision === 'refuse') {
+      return refuse(`Declined by ${actor.displayName}${reason ? `: ${reason}` : ''}`, undefined);
+    }
+
+    // Approve: optimistic lock on the cells, the period still published, the rules still hold.
+    if (input.period.status !== 'published') {
+      const message = `The roster period is no longer published (it is ${input.period.status}): nothing was changed`;
+      return refuse(message, { status: 409, message });
+    }
+    const changes = JSON.parse(row.changes) as StoredCellChange[];
+    const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: row.rosterPeriodId });
+    const stale = staleCells(rows, changes);
+    if (stale.length) {
+      const cells = stale
+        .map((c) => `${staffName(input, c.staffMemberId)} on ${dateInWords(c.date)}`)
+        .join(', ');
+      const message = `The roster changed since this was asked (${cells}): nothing was changed`;
+      return refuse(message, { status: 409, message });
+    }
+    if (row.kind === 'claim') {
+      const c = changes[0];
+      const day = input.dates.indexOf(c.date);
+      const need = input.problem.coverNeeds.find(
+        (n) => n.day === day && n.shiftTypeId === c.after && n.skillId === row.skillId,
+      );
+      const have = rows.filter(
+        (r) =>
+          r.date === c.date &&
+          r.shiftTypeId === c.after &&
+          (row.skillId === null ||
+            input.staff.find((s) => s.id === r.staffMemberId)?.skills.some((k) => k.id === row.skillId)),
+      ).length;
+      if (!need || have >= need.target) {
+        const message = 'The open shift has been filled meanwhile: nothing was changed';
+        return refuse(message, { status: 409, message });
+      }
+    }
+    const findings = evaluateChanges(input, rows, changes);
+    if (findings.blocked) {
+      const message = 'The change would now break a rule: ' + newMessages(findings).join('; ');
+      return refuse(message, { status: 422, message, findings });
+    }
+    // Through the period's writer: the cells and the period's version change together.
+    const cells = changes.map((c) => ({
+      staffMemberId: c.staffMemberId,
+      date: c.date,
+      shiftTypeId: c.after,
+      pinned:
+        c.after !== null &&
+        (rows.find((r) => r.staffMemberId === c.staffMemberId && r.date === c.date)?.pinned ?? false),
+    }));
+    await this.writer.writeCells(em, row.rosterPeriodId, cells, {
+      kind: row.kind === 'claim' ? 'open-shift-claim' : 'swap',
+      actorUserId: actor.id,
+    });
+    await this.setStatus(em, row, 'approved', `Approved by ${actor.displayName}`, actor.id);
+    await this.auditTrail.record(em, {
+      rosterPeriodId: row.rosterPeriodId,
+      actorUserId: actor.id,
+      kind: row.kind === 'claim' ? 'open-shift-claim' : 'swap',
+      summary: `${row.kind === 'claim' ? 'Open shift claim' : row.kind === 'swap' ? 'Swap' : 'Shift given away'}: ${what}`,
+      before: changes.map((c) => ({ staffMemberId: c.staffMemberId, date: c.date, shiftTypeId: c.before })),
+      after: changes.map((c) => ({ staffMemberId: c.staffMemberId, date: c.date, shiftTypeId: c.after })),
+    });
+    const mails = await this.mailer.mailPeople(em, input, involved, 'Your roster has changed', [
+      `Approved by ${actor.displayName}: ${what}.`,
+      'Your roster and calendar now show the change.',
+    ]);
+    mails.push(this.mailer.managerNote(input, actor, 'You approved a roster change', [`Approved: ${what}.`]));
+    return { mails };
+  }
+
+  /**
+   * A pending request whose first day has passed (in the unit's time zone) expires now, in the
+   * caller's transaction; the refusal (410) is reported after the commit.
+   */
+  private async expireIfOverdue(
+    em: EntityManager,
+    row: SwapRequestEntity,
+    input: RosterInput,
+  ): Promise<Outcome | null> {
+    if (!isOverdue(row, this.reads.today(input))) return null;
+    await this.setStatus(em, row, 'expired', EXPIRED_OUTCOME, null);
+    return { mails: [], refusal: { status: 410, message: expiredMessage(row) } };
+  }
+
+  private async setStatus(
+    em: EntityManager,
+    row: SwapRequestEntity,
+    status: SwapStatus,
+    outcome: string | null,
+    decidedById: string | null,
+  ): Promise<void> {
+    // Optimistic: only from the status read in this transaction (a racing decision makes this 0 rows).
+    const { affected } = await em.update(
+      SwapRequestEntity,
+      { id: row.id, status: row.status, version: row.version },
+      { status, outcome, decidedById: decidedById ?? row.decidedById, version: row.version + 1 },
+    );
+    if (affected !== 1) throw new ConflictException('This request was decided meanwhile: reload it');
+    if (SWAP_FINAL_STATUSES.includes(status)) await this.links.retireAll(em, row.id);
+    row.status = status;
+    row.version += 1;
+  }
+
+  private async actorOf(em: EntityManager, userId: string): Promise<Actor> {
+    const user = await em.findOne(UserEntity, { where: { id: userId }, relations: { units: true } });
+    if (!user || !user.active)
+      throw new ForbiddenException('The account this link was sent to is no longer active');
+    return {
+      id: user.id,
+      role: user.role,
+      unitIds: user.units.map((u) => u.id),
+      organisationId: user.organisationId,
+      displayName: user.displayName,
+      email: user.email,
+    };
+  }
+}
