@@ -32,6 +32,8 @@ describe('the contact centre planner generates and publishes the demo period', (
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('30');
     await pressGenerate(page);
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
+    // The explanations open in a side panel, so the grid stays in view.
+    await page.getByRole('button', { name: /^Explanations \(\d+\)$/ }).click();
     const explanations = page.getByRole('region', { name: 'Explanations' });
     await explanations.getByText(/Unmet needs \([1-9]\d*\)/).waitFor();
     await explanations
@@ -40,6 +42,8 @@ describe('the contact centre planner generates and publishes the demo period', (
       .waitFor();
     expect(await unnamedControls(page)).toEqual([]);
     await screenshot(page, 'manager-flow-generated');
+    await page.getByRole('button', { name: 'Close the explanations' }).click();
+    await explanations.waitFor({ state: 'detached' });
     const id = /\/planning\/periods\/([^/]+)\/board/.exec(page.url())?.[1];
     const token = await apiSignIn('manager2@example.com');
     period = await apiCall<RosterPeriodDto>(token, 'GET', PLANNING_ROUTES.rosterPeriod(id!));

@@ -51,10 +51,18 @@ describe('planning board as the demo manager', () => {
     expect(await safety.innerText()).toMatch(
       /Below minimum staffing[\s\S]*\d+ shifts? (is|are) below minimum staffing \(\d+ (person|people) short[\s\S]*bank or agency staff/,
     );
-    await page
-      .getByRole('region', { name: 'Explanations' })
-      .getByText(/Unmet needs \(\d+\)/)
-      .waitFor();
+    // The quality line is in words: no solver figures on the face of the board.
+    expect(await page.getByTestId('quality-statement').innerText()).not.toMatch(/objective|bound|gap/i);
+    expect(await page.getByText('Best objective').count()).toBe(0);
+    await screenshot(page, 'planning-board-generated-grid');
+    // Explanations open in a side panel, grouped by severity: below minimum first.
+    await page.getByRole('button', { name: /^Explanations \(\d+\)$/ }).click();
+    const explanations = page.getByRole('region', { name: 'Explanations' });
+    await explanations.getByText(/Unmet needs \(\d+\): \d+ below minimum, \d+ below target/).waitFor();
+    await explanations.getByRole('heading', { name: /^Below minimum staffing \(\d+\)$/ }).waitFor();
+    await screenshot(page, 'planning-board-explanations');
+    await page.getByRole('button', { name: 'Close the explanations' }).click();
+    await explanations.waitFor({ state: 'detached' });
     expect(await page.getByRole('status', { name: 'Solve progress' }).innerText()).toMatch(
       /Finished|Stopped/,
     );

@@ -245,7 +245,8 @@ export function BoardGrid({
             <th scope="colgroup" colSpan={grid.dates.length + 2} className={styles.coverHead}>
               <div className={styles.coverTitle}>
                 <span className={styles.stickyLeft}>
-                  Cover against needs (people on the shift / minimum–target)
+                  Cover against needs: people on each shift; “short 1” is one below the minimum, “target −1”
+                  one below the target
                 </span>
               </div>
             </th>
@@ -264,13 +265,10 @@ export function BoardGrid({
                   <td
                     key={date}
                     className={styles[state]}
-                    title={`${formatDay(date)}, ${line.shiftType.name}${line.skill ? ` (${line.skill.name})` : ''}: ${day.count} on${day.need ? ` against ${day.need.min}–${day.need.target}` : ', no need set'}${words ? `, ${words}` : ''}`}
+                    title={`${formatDay(date)}, ${line.shiftType.name}${line.skill ? ` (${line.skill.name})` : ''}: ${day.count} on${day.need ? `, minimum ${day.need.min}, target ${day.need.target}` : ', no need set'}${words ? `, ${words}` : ''}`}
                   >
-                    {day.count}
-                    {day.need ? `/${day.need.min}–${day.need.target}` : ''}
-                    {state === 'short' || state === 'over' || state === 'belowTarget' ? (
-                      <div>{words}</div>
-                    ) : null}
+                    <strong>{day.count}</strong>
+                    {day.need && <div>{coverWords(state, day.count, day.need)}</div>}
                   </td>
                 );
               })}
@@ -281,6 +279,14 @@ export function BoardGrid({
       </table>
     </div>
   );
+}
+
+/** The state of one cover cell in a word or two: how far below the minimum or target, met, or over. */
+function coverWords(state: CoverState, count: number, need: { min: number; target: number }): string {
+  if (state === 'short') return `short ${need.min - count}`;
+  if (state === 'belowTarget') return `target −${need.target - count}`;
+  if (state === 'over') return `over ${count - need.target}`;
+  return state === 'met' ? 'met' : '';
 }
 
 /** One icon for a cell's date requests: outlined and green when all are honoured, filled and orange if not. */

@@ -37,6 +37,7 @@ import {
 import { useSolveRun } from '../hooks/useSolveRun';
 import { coverLines, hoursAgainstContract } from '../utils/boardSummary';
 import { requestMarks } from '../utils/requestMarks';
+import { gradeUnmetNeeds, qualityLine } from '../utils/boardQuality';
 import { BoardGrid } from './BoardGrid';
 import { CellDialog } from './CellDialog';
 import { SolvePanel } from './SolvePanel';
@@ -146,6 +147,16 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
   };
 
   const draft = useMemo(() => draftContents(grid.data), [grid.data]);
+  const result = solve.run?.result ?? null;
+  const graded = useMemo(
+    () =>
+      result && grid.data ? gradeUnmetNeeds(result.explanations.unmetNeeds, cover, grid.data.dates) : [],
+    [result, cover, grid.data],
+  );
+  const qualityText = useMemo(
+    () => (result ? qualityLine({ result, hours, marks }) : null),
+    [result, hours, marks],
+  );
 
   const failed = [grid, shiftTypes, skills, contracts, staff, needs, units].find((q) => q.isError);
   const running = solve.run?.status === 'queued' || solve.run?.status === 'running';
@@ -162,6 +173,8 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
           skills={maps.skillMap}
           staffNames={maps.names}
           draft={draft}
+          graded={graded}
+          qualityText={qualityText}
         />
         <PublishControls period={period} solveActive={running} />
       </section>

@@ -2,17 +2,21 @@ import { useState } from 'react';
 import {
   Body1,
   Button,
+  DrawerBody,
+  DrawerHeader,
+  DrawerHeaderTitle,
   Field,
   Input,
   makeStyles,
   MessageBar,
   MessageBarBody,
   MessageBarTitle,
+  OverlayDrawer,
   ProgressBar,
   Subtitle2,
   tokens,
 } from '@fluentui/react-components';
-import { PlayRegular, StopRegular } from '@fluentui/react-icons';
+import { DismissRegular, PlayRegular, StopRegular, TextBulletListLtrRegular } from '@fluentui/react-icons';
 import {
   SOLVE_TIME_LIMIT_MAX_SECONDS,
   SOLVE_TIME_LIMIT_MIN_SECONDS,
@@ -23,12 +27,14 @@ import {
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import type { SolveRunState } from '../hooks/useSolveRun';
 import { type DraftContents, replaceWarning } from '../utils/draftContents';
+import { gapPercent, type GradedNeed } from '../utils/boardQuality';
 import { ExplanationsPanel } from './ExplanationsPanel';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
   controls: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', gap: tokens.spacingHorizontalM },
   limit: { width: '9rem' },
+  quality: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalM },
   figures: {
     display: 'flex',
     flexWrap: 'wrap',
@@ -48,7 +54,6 @@ const STATUS_TEXT: Record<SolveRunStatus, string> = {
 };
 
 const number = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1 });
-const percent = new Intl.NumberFormat('en-GB', { style: 'percent', maximumFractionDigits: 2 });
 
 export interface SolvePanelProps {
   solve: SolveRunState;
@@ -58,11 +63,18 @@ export interface SolvePanelProps {
   staffNames: Map<string, string>;
   /** What the draft holds now: Generate asks before it replaces any unpinned shift. */
   draft: DraftContents;
+  /** The last run's unmet needs graded against the board's cover, worst first. */
+  graded: GradedNeed[];
+  /** The roster's quality in words (shortfalls, requests, hours, how much better is possible). */
+  qualityText: string | null;
 }
 
 /** Generate with a time limit, the live progress of the run, Stop, and the result once it ends. */
-export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames, draft }: SolvePanelProps) {
+export function SolvePanel(props: SolvePanelProps) {
+  const { solve, readOnly, shiftTypes, skills, staffNames, draft, graded, qualityText } = props;
   const styles = useStyles();
+  const [details, setDetails] = useState(false);
+  const [explaining, setExplaining] = useState(false);
   const [limit, setLimit] = useState('30');
   const [limitError, setLimitError] = useState<string | null>(null);
   /** Seconds of a Generate waiting for the planner to confirm that it replaces the draft. */
@@ -162,20 +174,33 @@ export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames, dr
               />
             </Field>
           )}
-          <dl className={styles.figures}>
-            <div>
-              <dt>Best objective</dt>
-              <dd>{progress?.objective != null ? number.format(progress.objective) : 'none yet'}</dd>
-            </div>
-            <div>
-              <dt>Bound</dt>
-              <dd>{progress?.bound != null ? number.format(progress.bound) : 'unknown'}</dd>
-            </div>
-            <div>
-              <dt>Gap</dt>
-              <dd>{progress?.gap != null ? percent.format(progress.gap) : 'unknown'}</dd>
-            </div>
-          </dl>
+          {active && progress?.gap != null && (
+            <Body1 block>
+              At most {gapPercent(progress.gap)} better is possible than the best roster so far.
+            </Body1>
+          )}
+          {details && (
+            <dl className={styles.figures} aria-label="Solver figures">
+              <div>
+                <dt>Best objective</dt>
+                <dd>{progress?.objective != null ? number.format(progress.objective) : 'none yet'}</dd>
+              </div>
+              <div>
+                <dt>Bound</dt>
+                <dd>{progress?.bound != null ? number.format(progress.bound) : 'unknown'}</dd>
+              </div>
+              <div>
+                <dt>Gap</dt>
+                <dd>{progress?.gap != null ? gapPercent(progress.gap) : 'unknown'}</dd>
+              </div>
+              {run.result && (
+                <div>
+                  <dt>Solver's statement</dt>
+                  <dd>{run.result.quality}</dd>
+                </div>
+              )}
+            </dl>
+          )}
         </div>
       )}
       {run?.status === 'failed' && (
@@ -202,15 +227,48 @@ export function SolvePanel({ solve, readOnly, shiftTypes, skills, staffNames, dr
           >
             <MessageBarBody>
               <MessageBarTitle>Quality</MessageBarTitle>
-              <span data-testid="quality-statement">{run.result.quality}</span>
+              <span data-testid="quality-statement">{qualityText ?? run.result.quality}</span>
             </MessageBarBody>
           </MessageBar>
-          <ExplanationsPanel
-            explanations={run.result.explanations}
-            shiftTypes={shiftTypes}
-            skills={skills}
-            staffNames={staffNames}
-          />
+          <div className={styles.quality}>
+            <Button icon={<TextBulletListLtrRegular />} onClick={() => setExplaining(true)}>
+              Explanations ({graded.length + run.result.explanations.requestsNotHonoured.length})
+            </Button>
+            <Button appearance="subtle" aria-expanded={details} onClick={() => setDetails(!details)}>
+              {details ? 'Hide solver figures' : 'Solver figures'}
+            </Button>
+          </div>
+          <OverlayDrawer
+            position="end"
+            size="medium"
+            open={explaining}
+            onOpenChange={(_, d) => setExplaining(d.open)}
+            aria-label="Why the roster is not perfect"
+          >
+            <DrawerHeader>
+              <DrawerHeaderTitle
+                action={
+                  <Button
+                    appearance="subtle"
+                    aria-label="Close the explanations"
+                    icon={<DismissRegular />}
+                    onClick={() => setExplaining(false)}
+                  />
+                }
+              >
+                Why the roster is not perfect
+              </DrawerHeaderTitle>
+            </DrawerHeader>
+            <DrawerBody>
+              <ExplanationsPanel
+                explanations={run.result.explanations}
+                graded={graded}
+                shiftTypes={shiftTypes}
+                skills={skills}
+                staffNames={staffNames}
+              />
+            </DrawerBody>
+          </OverlayDrawer>
         </>
       )}
     </section>
