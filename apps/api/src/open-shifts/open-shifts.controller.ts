@@ -1,10 +1,21 @@
 import { Body, Controller, Get, Post, Query } from '@nestjs/common';
 import { ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
-import { type OpenShiftDto, type Page, type SwapRequestDto } from '@rotaplex/contracts';
+import {
+  type NotifyOpenShiftResultDto,
+  type OpenShiftDto,
+  type Page,
+  type SwapRequestDto,
+} from '@rotaplex/contracts';
 import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { ClaimOpenShiftBody, OpenShiftPageResponse, OpenShiftQuery } from './dto/open-shift.dto';
+import {
+  ClaimOpenShiftBody,
+  NotifyOpenShiftBody,
+  NotifyOpenShiftResponse,
+  OpenShiftPageResponse,
+  OpenShiftQuery,
+} from './dto/open-shift.dto';
 import { OpenShiftsService } from './open-shifts.service';
 
 /** Cover still unmet on published rosters; staff see only what they may claim. */
@@ -22,6 +33,20 @@ export class OpenShiftsController {
   })
   list(@CurrentUser() user: AuthUser, @Query() query: OpenShiftQuery): Promise<Page<OpenShiftDto>> {
     return this.openShifts.list(user, query);
+  }
+
+  @Post('notify')
+  @RequirePermissions('rosters:plan')
+  @ApiCreatedResponse({
+    type: NotifyOpenShiftResponse,
+    description: 'How many people who may take it were e-mailed',
+  })
+  @ApiConflictResponse({ description: 'The shift is not open' })
+  notify(
+    @CurrentUser() user: AuthUser,
+    @Body() body: NotifyOpenShiftBody,
+  ): Promise<NotifyOpenShiftResultDto> {
+    return this.openShifts.notify(user, body);
   }
 
   @Post('claims')

@@ -1,3 +1,4 @@
+import { type CheckResult } from '@rotaplex/roster-model';
 import {
   BadRequestException,
   ConflictException,
@@ -6,6 +7,8 @@ import {
 } from '@nestjs/common';
 import {
   type ClaimOpenShiftDto,
+  type NotifyOpenShiftDto,
+  type NotifyOpenShiftResultDto,
   type OpenShiftDto,
   type Page,
   type SwapRequestDto,
@@ -27,13 +30,22 @@ import { SwapRequestEntity, type StoredCellChange } from '../swaps/swap-request.
 import { SwapsService } from '../swaps/swaps.service';
 import { dateInWords } from '../common/text/date-words';
 import { type OpenShiftQuery } from './dto/open-shift.dto';
+import { AppConfig } from '../config/app-config';
+import { MailService } from '../mail/mail.service';
+import { openShiftMail, ruleInWords } from './open-shift-words';
 
 type Cell = Pick<AssignmentEntity, 'staffMemberId' | 'date' | 'shiftTypeId'>;
 
 /** A need of a published period with fewer people on it than its target (from today on). */
 export function unmetNeeds(input: RosterInput, rows: Cell[], fromDate: string) {
   const skillsOf = new Map(input.staff.map((s) => [s.id, new Set(s.skills.map((k) => k.id))]));
-  const out: { date: string; shiftTypeId: string; skillId: string | null; short: number }[] = [];
+  const out: {
+    date: string;
+    shiftTypeId: string;
+    skillId: string | null;
+    short: number;
+    belowMinimum: number;
+  }[] = [];
   for (const need of input.problem.coverNeeds) {
     const date = input.dates[need.day];
     if (date === undefined || date < fromDate) continue;
@@ -44,7 +56,13 @@ export function unmetNeeds(input: RosterInput, rows: Cell[], fromDate: string) {
         (need.skillId === null || skillsOf.get(r.staffMemberId)?.has(need.skillId)),
     ).length;
     if (need.target > have) {
-      out.push({ date, shiftTypeId: need.shiftTypeId, skillId: need.skillId, short: need.target - have });
+      out.push({
+        date,
+        shiftTypeId: need.shiftTypeId,
+        skillId: need.skillId,
+        short: need.target - have,
+        belowMinimum: Math.max(0, need.min - have),
+      });
     }
   }
   return out.sort((a, b) => a.date.localeCompare(b.date) || a.shiftTypeId.localeCompare(b.shiftTypeId));
@@ -58,6 +76,8 @@ interface PeriodOpenShifts {
   check: ClaimCheck;
   /** Per staff member: the open shifts they may claim (filled on first ask). */
   claimable: Map<string, OpenShiftDto[]>;
+  /** Per staff member: every open shift with whether they may take it and why not (filled on first ask). */
+  withReasons: Map<string, OpenShiftDto[]>;
 }
 
 /**
@@ -76,6 +96,8 @@ export class OpenShiftsService {
     private readonly dataSource: DataSource,
     private readonly input: RosterInputService,
     private readonly swaps: SwapsService,
+    private readonly mail: MailService,
+    private readonly config: AppConfig,
     writes: WriteGeneration,
   ) {
     this.cache = new GenerationCache(writes, { maxEntries: 32 });
@@ -114,10 +136,12 @@ export class OpenShiftsService {
         continue;
       }
       const me = open.input.staff.find((s) => s.userId === user.id);
-      if (me) all.push(...this.claimableBy(open, me));
+      if (me) all.push(...(query.withBlocked ? this.withReasons(open, me) : this.claimableBy(open, me)));
     }
+    // With the blocked ones too, the shifts the caller may take come first.
     all.sort(
       (a, b) =>
+        Number(b.mayTake ?? false) - Number(a.mayTake ?? false) ||
         a.date.localeCompare(b.date) ||
         a.unitId.localeCompare(b.unitId) ||
         a.shiftCode.localeCompare(b.shiftCode) ||
@@ -161,13 +185,21 @@ export class OpenShiftsService {
         skillId: need.skillId,
         skillCode: need.skillId ? (skills.get(need.skillId) ?? null) : null,
         short: need.short,
+        belowMinimum: need.belowMinimum,
         pendingClaims: claims.filter(
           (c) =>
             c.change?.date === need.date && c.change.after === need.shiftTypeId && c.skillId === need.skillId,
         ).length,
       };
     });
-    return { input, rows, open, check: new ClaimCheck(input, rows), claimable: new Map() };
+    return {
+      input,
+      rows,
+      open,
+      check: new ClaimCheck(input, rows),
+      claimable: new Map(),
+      withReasons: new Map(),
+    };
   }
 
   /** The open shifts a person has the skill for, is free on, and may take without a new violation. */
@@ -186,6 +218,79 @@ export class OpenShiftsService {
       open.claimable.set(me.id, mine);
     }
     return mine;
+  }
+
+  /**
+   * Every open shift of the period with whether this person may take it and, if not, why in words:
+   * the skill, a shift already that day, then each rule the checker finds broken anew (the same test as
+   * `claimableBy`, which the `mayTake` flag always agrees with).
+   */
+  private withReasons(open: PeriodOpenShifts, me: StaffMemberEntity): OpenShiftDto[] {
+    let mine = open.withReasons.get(me.id);
+    if (mine) return mine;
+    const may = new Set(this.claimableBy(open, me));
+    const cache: { before?: CheckResult } = {};
+    mine = open.open.map((o) => {
+      if (may.has(o)) return { ...o, mayTake: true, whyNot: [] };
+      const whyNot: string[] = [];
+      if (o.skillId && !me.skills.some((k) => k.id === o.skillId)) {
+        whyNot.push(`It needs ${o.skillCode ?? 'a skill'}, which is not on your staff record.`);
+      }
+      const working = open.rows.find(
+        (r) => r.staffMemberId === me.id && r.date === o.date && r.shiftTypeId !== null,
+      );
+      if (working) {
+        const shift = open.input.shiftTypes.find((t) => t.id === working.shiftTypeId);
+        whyNot.push(`You already work ${shift ? `the ${shift.name} shift` : 'a shift'} that day.`);
+      } else if (whyNot.length === 0) {
+        const change: StoredCellChange = {
+          staffMemberId: me.id,
+          date: o.date,
+          before: null,
+          after: o.shiftTypeId,
+        };
+        const findings = evaluateChanges(open.input, open.rows, [change], cache);
+        for (const v of findings.violations.filter((f) => f.isNew)) whyNot.push(ruleInWords(v, me.name));
+      }
+      if (whyNot.length === 0) whyNot.push('Taking it would break a rule of your contract.');
+      return { ...o, mayTake: false, whyNot };
+    });
+    open.withReasons.set(me.id, mine);
+    return mine;
+  }
+
+  /**
+   * E-mails every member of the period's unit who may take this open shift (through the outbox, in one
+   * transaction). Answers how many were e-mailed; 409 when the shift is not open.
+   */
+  async notify(user: AuthUser, body: NotifyOpenShiftDto): Promise<NotifyOpenShiftResultDto> {
+    // Read first (the one SQLite connection holds other queries while a transaction runs), then write
+    // the messages in one transaction.
+    const input = await this.input.load(body.rosterPeriodId);
+    assertUnitAccess(user, input.period.unitId);
+    if (input.period.status !== 'published') {
+      throw new ConflictException(
+        `Open shifts are for published rosters; this period is ${input.period.status}`,
+      );
+    }
+    const today = localDate(new Date(), input.unit.timeZone);
+    const open = await this.cache.get(`${input.period.id}|${today}`, () =>
+      this.compute(input.period.id, today),
+    );
+    const shift = open.open.find(
+      (o) =>
+        o.date === body.date && o.shiftTypeId === body.shiftTypeId && o.skillId === (body.skillId ?? null),
+    );
+    if (!shift) {
+      throw new ConflictException('This shift is not open (it is covered, past or not a need of the roster)');
+    }
+    const eligible = open.input.staff.filter((s) => s.email && this.claimableBy(open, s).includes(shift));
+    await this.dataSource.transaction(async (em) => {
+      for (const person of eligible) {
+        await this.mail.send(openShiftMail(person, shift, input.unit, this.config.publicUrl), em);
+      }
+    });
+    return { notified: eligible.length };
   }
 
   private async timeZones(unitIds: string[]): Promise<Map<string, string>> {

@@ -125,8 +125,38 @@ export interface OpenShiftDto {
   skillCode: string | null;
   /** People still wanted (target minus assigned with the skill). */
   short: number;
+  /** Of those, people short of the minimum (0 when only the target is unmet): a safety shortfall. */
+  belowMinimum: number;
   /** Pending claims on this shift. */
   pendingClaims: number;
+  /**
+   * Staff asking with `withBlocked=true` only: whether the caller may take this shift, and if not why,
+   * in words (skill, already working, rest, hours, runs of days, weekends, leave). Absent otherwise.
+   */
+  mayTake?: boolean;
+  whyNot?: string[];
+}
+
+/** Query of GET /open-shifts. */
+export interface OpenShiftListQuery {
+  page?: number;
+  pageSize?: number;
+  rosterPeriodId?: string;
+  /** Staff: list every open shift, those the caller may not take too, with the reasons (`whyNot`). */
+  withBlocked?: boolean;
+}
+
+/** Body of POST /open-shifts/notify: e-mail the staff who may take one open shift. */
+export interface NotifyOpenShiftDto {
+  rosterPeriodId: string;
+  date: string;
+  shiftTypeId: string;
+  skillId: string | null;
+}
+
+export interface NotifyOpenShiftResultDto {
+  /** People e-mailed (those who may take the shift). */
+  notified: number;
 }
 
 export interface ClaimOpenShiftDto {
@@ -158,6 +188,7 @@ export const SWAP_ROUTES = {
   swapCancel: (id: string) => `/swaps/${encodeURIComponent(id)}/cancel`,
   swapLink: '/swap-links',
   openShifts: '/open-shifts',
+  openShiftsNotify: '/open-shifts/notify',
   openShiftClaims: '/open-shifts/claims',
 } as const;
 
