@@ -1,4 +1,4 @@
-import { type DynamicModule, Logger, Module } from '@nestjs/common';
+import { type DynamicModule, Module } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { ScheduleModule } from '@nestjs/schedule';
 import { TypeOrmModule } from '@nestjs/typeorm';
@@ -8,11 +8,9 @@ import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { PermissionsGuard } from './common/guards/permissions.guard';
 import { AppConfig } from './config/app-config';
 import { ConfigModule } from './config/config.module';
-import { narrowDataFileModes, prepareDataFiles } from './database/data-files';
-import { dataSourceOptions } from './database/data-source-options';
-import { serialiseTransactions } from './database/serialised-transactions';
+import { databaseTarget, dataSourceOptions } from './database/data-source-options';
+import { openDatabase } from './database/open-database';
 import { WriteGenerationModule } from './database/write-generation';
-import { DataSource } from 'typeorm';
 import { DemoModule } from './demo/demo.module';
 import { RequestsModule } from './requests/requests.module';
 import { SwapsModule } from './swaps/swaps.module';
@@ -45,17 +43,9 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(config),
         TypeOrmModule.forRootAsync({
-          useFactory: () => dataSourceOptions(config.databaseFile),
-          dataSourceFactory: async (options) => {
-            // Data directory 0700, database file 0600 before SQLite opens it (and its -wal, -shm after).
-            const logger = new Logger('Database');
-            prepareDataFiles(config.databaseFile).forEach((note) => logger.warn(note));
-            const dataSource = new DataSource(options!);
-            serialiseTransactions(dataSource);
-            await dataSource.initialize();
-            narrowDataFileModes(config.databaseFile).forEach((note) => logger.warn(note));
-            return dataSource;
-          },
+          // SQLite file by default, PostgreSQL when DATABASE_URL is set (database/open-database.ts).
+          useFactory: () => dataSourceOptions(databaseTarget(config)),
+          dataSourceFactory: (options) => openDatabase(databaseTarget(config), options!),
         }),
         WriteGenerationModule,
         // Time-driven work: expiry of swap requests and their links, outbox retention.

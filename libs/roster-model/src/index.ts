@@ -31,3 +31,4 @@ export {
 export * from './lib/solve';
 export * from './lib/pool';
 export * from './lib/explain';
+export * from './lib/demand';

@@ -1,0 +1,4 @@
+export * from './erlang';
+export * from './ward';
+export * from './covering';
+export * from './plan';
