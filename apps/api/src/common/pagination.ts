@@ -43,7 +43,10 @@ export function toPage<T>(items: T[], total: number, query: PageQueryDto): Page<
   return { items, total, page: query.page, pageSize: query.pageSize };
 }
 
-/** Escapes % and _ for a SQL LIKE with ESCAPE '\'. */
+/**
+ * Escapes % and _ for a SQL LIKE with ESCAPE '\'. Searches compare `LOWER(column) LIKE LOWER(:q)`:
+ * SQLite's LIKE ignores case and PostgreSQL's does not, so both sides are lowered on both.
+ */
 export function likePattern(text: string): string {
   return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }

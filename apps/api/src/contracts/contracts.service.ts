@@ -81,7 +81,7 @@ export class ContractsService {
     const contract = await this.load(user, id);
     await this.assertMayWrite(user, contract.unitId);
     await this.dataSource.transaction(async (em) => {
-      const [{ n }] = await em.query(`SELECT COUNT(*) AS n FROM staff_members WHERE contractId = ?`, [id]);
+      const [{ n }] = await em.query(`SELECT COUNT(*) AS n FROM staff_members WHERE "contractId" = ?`, [id]);
       if (Number(n) > 0) {
         throw new ConflictException(
           `Contract "${contract.name}" is held by ${n} staff member(s): give them another contract first`,

@@ -2,6 +2,7 @@ import { Injectable, Module, type OnModuleDestroy } from '@nestjs/common';
 import type Database from 'better-sqlite3';
 import { DataSource, type EntityManager } from 'typeorm';
 import { AppConfig } from '../config/app-config';
+import { createDataSource, databaseTarget } from './data-source-options';
 import { ENTITIES } from './entities';
 
 /**
@@ -11,6 +12,10 @@ import { ENTITIES } from './entities';
  * sees the last committed state and never the open transaction's writes, and it never blocks a
  * writer. Use it for reads that write nothing; a read that then decides to write re-reads inside
  * its transaction on the main connection.
+ *
+ * On PostgreSQL readers never wait for writers anyway (MVCC); this is then a small second pool
+ * whose sessions are read-only (`default_transaction_read_only`), so the same rule holds: it sees
+ * committed data only and cannot write.
  */
 @Injectable()
 export class ReadConnection implements OnModuleDestroy {
@@ -18,6 +23,19 @@ export class ReadConnection implements OnModuleDestroy {
 
   /** Opens the connection once the main one has created and migrated the file. */
   static async open(config: AppConfig): Promise<ReadConnection> {
+    const target = databaseTarget(config);
+    if (target.type === 'postgres') {
+      const pg = createDataSource({
+        type: 'postgres',
+        url: target.url,
+        entities: ENTITIES,
+        migrationsRun: false,
+        synchronize: false,
+        extra: { max: 4, options: '-c default_transaction_read_only=on' },
+      });
+      await pg.initialize();
+      return new ReadConnection(pg);
+    }
     const dataSource = new DataSource({
       type: 'better-sqlite3',
       database: config.databaseFile,

@@ -1,5 +1,5 @@
 import { Global, Injectable, Module } from '@nestjs/common';
-import { DataSource, type EntitySubscriberInterface, type EntityMetadata } from 'typeorm';
+import { DataSource, type EntitySubscriberInterface, type EntityMetadata, type QueryRunner } from 'typeorm';
 
 /**
  * Tables whose writes never change what a roster read shows (sessions, mail, solver progress,
@@ -25,17 +25,18 @@ const IGNORED_TABLES = new Set([
 @Injectable()
 export class WriteGeneration {
   private generation = 0;
-  private dirty = false;
+  /** Connections whose open transaction wrote something reads depend on. */
+  private readonly dirty = new WeakSet<QueryRunner>();
 
   constructor(dataSource: DataSource) {
     const subscriber: EntitySubscriberInterface = {
-      afterInsert: (e) => this.wrote(e.metadata),
-      afterUpdate: (e) => this.wrote(e.metadata),
-      afterRemove: (e) => this.wrote(e.metadata),
-      afterSoftRemove: (e) => this.wrote(e.metadata),
-      afterRecover: (e) => this.wrote(e.metadata),
-      afterTransactionCommit: () => this.settled(),
-      afterTransactionRollback: () => this.settled(),
+      afterInsert: (e) => this.wrote(e.metadata, e.queryRunner),
+      afterUpdate: (e) => this.wrote(e.metadata, e.queryRunner),
+      afterRemove: (e) => this.wrote(e.metadata, e.queryRunner),
+      afterSoftRemove: (e) => this.wrote(e.metadata, e.queryRunner),
+      afterRecover: (e) => this.wrote(e.metadata, e.queryRunner),
+      afterTransactionCommit: (e) => this.settled(e.queryRunner),
+      afterTransactionRollback: (e) => this.settled(e.queryRunner),
     };
     dataSource.subscribers.push(subscriber);
   }
@@ -44,17 +45,18 @@ export class WriteGeneration {
     return this.generation;
   }
 
-  private wrote(metadata: EntityMetadata | undefined): void {
+  private wrote(metadata: EntityMetadata | undefined, runner: QueryRunner | undefined): void {
     if (metadata && IGNORED_TABLES.has(metadata.tableName)) return;
     this.generation++;
-    this.dirty = true;
+    if (runner) this.dirty.add(runner);
   }
 
-  private settled(): void {
-    // Transactions are serialised (see serialised-transactions.ts), so the flag belongs to the
-    // transaction that just ended.
-    if (!this.dirty) return;
-    this.dirty = false;
+  private settled(runner: QueryRunner | undefined): void {
+    // The flag belongs to the connection whose transaction just ended: on SQLite the one shared
+    // connection (transactions are serialised, see serialised-transactions.ts), on PostgreSQL the
+    // pooled connection that ran it, while other transactions may still be open on others.
+    if (!runner || !this.dirty.has(runner)) return;
+    this.dirty.delete(runner);
     this.generation++;
   }
 }

@@ -45,7 +45,7 @@ export class MailboxController {
       .take(query.pageSize);
     if (query.q) {
       qb.where(
-        `(m.subject LIKE :q ESCAPE '\\' OR m."to" LIKE :q ESCAPE '\\' OR m."from" LIKE :q ESCAPE '\\')`,
+        `(LOWER(m.subject) LIKE LOWER(:q) ESCAPE '\\' OR LOWER(m."to") LIKE LOWER(:q) ESCAPE '\\' OR LOWER(m."from") LIKE LOWER(:q) ESCAPE '\\')`,
         {
           q: likePattern(query.q),
         },

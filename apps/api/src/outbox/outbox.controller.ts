@@ -86,9 +86,12 @@ export class OutboxController {
       .take(query.pageSize);
     if (query.status) qb.andWhere('m.status = :status', { status: query.status });
     if (query.q) {
-      qb.andWhere(`(m.subject LIKE :q ESCAPE '\\' OR m."to" LIKE :q ESCAPE '\\')`, {
-        q: likePattern(query.q),
-      });
+      qb.andWhere(
+        `(LOWER(m.subject) LIKE LOWER(:q) ESCAPE '\\' OR LOWER(m."to") LIKE LOWER(:q) ESCAPE '\\')`,
+        {
+          q: likePattern(query.q),
+        },
+      );
     }
     const [rows, total] = await qb.getManyAndCount();
     return toPage(rows.map(toOutboxDto), total, query);

@@ -52,8 +52,8 @@ export class ShiftTypesService {
     await this.load(user, unitId, id);
     await this.dataSource.transaction(async (em) => {
       const [{ n }] = await em.query(
-        `SELECT (SELECT COUNT(*) FROM cover_pattern_rows WHERE shiftTypeId = ?)
-              + (SELECT COUNT(*) FROM cover_overrides WHERE shiftTypeId = ?) AS n`,
+        `SELECT (SELECT COUNT(*) FROM cover_pattern_rows WHERE "shiftTypeId" = ?)
+              + (SELECT COUNT(*) FROM cover_overrides WHERE "shiftTypeId" = ?) AS n`,
         [id, id],
       );
       if (Number(n) > 0) {

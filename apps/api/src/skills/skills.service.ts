@@ -48,9 +48,9 @@ export class SkillsService {
       const skill = await em.findOneBy(SkillEntity, { id, organisationId: user.organisationId });
       if (!skill) throw new NotFoundException('Skill not found');
       const [{ n }] = await em.query(
-        `SELECT (SELECT COUNT(*) FROM staff_member_skills WHERE skillId = ?)
-              + (SELECT COUNT(*) FROM cover_pattern_rows WHERE skillId = ?)
-              + (SELECT COUNT(*) FROM cover_overrides WHERE skillId = ?) AS n`,
+        `SELECT (SELECT COUNT(*) FROM staff_member_skills WHERE "skillId" = ?)
+              + (SELECT COUNT(*) FROM cover_pattern_rows WHERE "skillId" = ?)
+              + (SELECT COUNT(*) FROM cover_overrides WHERE "skillId" = ?) AS n`,
         [id, id, id],
       );
       if (Number(n) > 0) {

@@ -57,7 +57,9 @@ export class StaffService {
     }
     if (query.unitId) qb.andWhere('s.unitId = :unitId', { unitId: query.unitId });
     if (query.q) {
-      qb.andWhere(`(s.name LIKE :q ESCAPE '\\' OR s.email LIKE :q ESCAPE '\\')`, { q: likePattern(query.q) });
+      qb.andWhere(`(LOWER(s.name) LIKE LOWER(:q) ESCAPE '\\' OR LOWER(s.email) LIKE LOWER(:q) ESCAPE '\\')`, {
+        q: likePattern(query.q),
+      });
     }
     if (query.active !== undefined) qb.andWhere('s.active = :active', { active: query.active ? 1 : 0 });
     if (query.skill) {

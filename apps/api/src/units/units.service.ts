@@ -53,7 +53,7 @@ export class UnitsService {
     await this.dataSource.transaction(async (em) => {
       const unit = await em.findOneBy(UnitEntity, { id, organisationId: user.organisationId });
       if (!unit) throw new NotFoundException('Unit not found');
-      const [{ n }] = await em.query(`SELECT COUNT(*) AS n FROM user_units WHERE unitId = ?`, [id]);
+      const [{ n }] = await em.query(`SELECT COUNT(*) AS n FROM user_units WHERE "unitId" = ?`, [id]);
       if (Number(n) > 0) {
         throw new ConflictException(
           `Unit "${unit.name}" still has ${n} ${Number(n) === 1 ? 'person' : 'people'}: move them to another unit before deleting it`,

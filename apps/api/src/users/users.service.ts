@@ -51,9 +51,12 @@ export class UsersService {
       );
     }
     if (query.q) {
-      qb.andWhere(`(u.email LIKE :q ESCAPE '\\' OR u.displayName LIKE :q ESCAPE '\\')`, {
-        q: likePattern(query.q),
-      });
+      qb.andWhere(
+        `(LOWER(u.email) LIKE LOWER(:q) ESCAPE '\\' OR LOWER(u.displayName) LIKE LOWER(:q) ESCAPE '\\')`,
+        {
+          q: likePattern(query.q),
+        },
+      );
     }
     if (query.role) qb.andWhere('u.role = :role', { role: query.role });
     if (query.active !== undefined) qb.andWhere('u.active = :active', { active: query.active ? 1 : 0 });

@@ -1,12 +1,13 @@
 import { type NestExpressApplication } from '@nestjs/platform-express';
 import { API_PREFIX, REFRESH_COOKIE, type TokenResponse } from '@rotaplex/contracts';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { createApp } from '../../src/app';
 import { type AppConfig, loadConfig, resolveJwtSecret } from '../../src/config/app-config';
+import { createTestDatabase, testsOnPostgres } from '../../src/database/postgres-cluster';
 import { DEMO_PASSWORD } from '../../src/demo/demo-data';
 
 export interface TestApp {
@@ -30,12 +31,15 @@ export const api = (path: string) => `${API_PREFIX}${path}`;
 /**
  * The real application on a fresh SQLite file in a temporary DATA_DIR, migrations run, demo data
  * seeded, the mail catcher on a random loopback port. Argon2 cost is lowered for speed only.
+ * With ROTAPLEX_TEST_DATABASE=postgres (jest.postgres.config.js) the data goes to a fresh database
+ * in the run's PostgreSQL cluster instead; restarting on the same DATA_DIR reopens that database.
  */
 export async function startTestApp(
   env: Record<string, string> = {},
   reuseDataDir?: string,
 ): Promise<TestApp> {
   const dataDir = reuseDataDir ?? mkdtempSync(join(tmpdir(), 'rotaplex-api-test-'));
+  const database = testsOnPostgres() ? { DATABASE_URL: await testDatabaseUrl(dataDir) } : {};
   const config = resolveJwtSecret(
     loadConfig({
       NODE_ENV: 'test',
@@ -46,6 +50,7 @@ export async function startTestApp(
       ARGON2_TIME_COST: '1',
       ARGON2_MEMORY_KIB: '1024',
       WEB_DIST_DIR: join(dataDir, 'no-web-app'),
+      ...database,
       ...env,
     }),
   );
@@ -74,6 +79,15 @@ export async function startTestApp(
       if (!reuseDataDir) rmSync(dataDir, { recursive: true, force: true });
     },
   };
+}
+
+/** The test database of a DATA_DIR: created on its first start, the same one on a restart. */
+async function testDatabaseUrl(dataDir: string): Promise<string> {
+  const file = join(dataDir, 'test-database-url');
+  if (existsSync(file)) return readFileSync(file, 'utf8');
+  const url = await createTestDatabase();
+  writeFileSync(file, url, { mode: 0o600 });
+  return url;
 }
 
 /** The refresh token value from a response's Set-Cookie header ('' when absent or cleared). */

@@ -13,13 +13,24 @@ export class DatabaseErrorFilter implements ExceptionFilter {
   catch(error: QueryFailedError, host: ArgumentsHost): void {
     const res = host.switchToHttp().getResponse<Response>();
     const message = error.message;
-    if (/UNIQUE constraint failed/i.test(message)) {
+    // SQLite says it in the message; PostgreSQL gives an SQLSTATE code (Appendix A of its manual).
+    const code = (error.driverError as { code?: unknown } | undefined)?.code;
+    if (code === '40001' || code === '40P01') {
+      // A serializable transaction that still conflicted after its retries (postgres-transactions.ts).
+      res.status(HttpStatus.CONFLICT).json({
+        statusCode: 409,
+        error: 'Conflict',
+        message: 'The data changed while this request ran: try again',
+      });
+      return;
+    }
+    if (/UNIQUE constraint failed/i.test(message) || code === '23505') {
       res
         .status(HttpStatus.CONFLICT)
         .json({ statusCode: 409, error: 'Conflict', message: 'A record with these values already exists' });
       return;
     }
-    if (/FOREIGN KEY constraint failed/i.test(message)) {
+    if (/FOREIGN KEY constraint failed/i.test(message) || code === '23503') {
       res.status(HttpStatus.CONFLICT).json({
         statusCode: 409,
         error: 'Conflict',

@@ -1,0 +1,13 @@
+import { PostgresBaseline1765540800000 } from './1765540800000-postgres-baseline';
+
+/**
+ * PostgreSQL's migrations, in the order they run, written by TypeORM's schema diff against a real
+ * PostgreSQL (generate-postgres-migration.ts). The first one creates the whole schema as of
+ * SQLite's RosterPeriodChanges1765540800000 (PostgreSQL support began there; no PostgreSQL
+ * database predates it). Every later SQLite migration in ../index.ts has a twin of the same name
+ * here, in the same order; migrations.spec.ts fails until it has.
+ */
+export const POSTGRES_MIGRATIONS = [PostgresBaseline1765540800000];
+
+/** The SQLite migration that {@link PostgresBaseline1765540800000} catches up with. */
+export const POSTGRES_BASELINE_COVERS = 'RosterPeriodChanges1765540800000';
