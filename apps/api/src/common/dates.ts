@@ -8,3 +8,14 @@ import { format } from 'date-fns';
 export function localDate(now: Date, timeZone: string): string {
   return format(new TZDate(now.getTime(), timeZone), 'yyyy-MM-dd');
 }
+
+/** A real calendar date "YYYY-MM-DD" (not 2030-02-30). */
+export function isRealDate(date: string): boolean {
+  const d = new Date(`${date}T00:00:00Z`);
+  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === date;
+}
+
+/** Days from `a` to `b` ("YYYY-MM-DD"), b - a. */
+export function daysBetween(a: string, b: string): number {
+  return Math.round((Date.parse(`${b}T00:00:00Z`) - Date.parse(`${a}T00:00:00Z`)) / 86_400_000);
+}

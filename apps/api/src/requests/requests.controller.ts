@@ -42,7 +42,10 @@ import {
   RequestPageResponse,
   RequestPeriodResponse,
 } from './dto/requests-response.dto';
-import { RequestsService } from './requests.service';
+import { AvailabilityService } from './availability.service';
+import { DateRequestsService } from './date-requests.service';
+import { LeaveService } from './leave.service';
+import { RequestViews } from './request-views.service';
 
 /**
  * Staff input: weekly availability, date requests and leave. Staff change only their own (403 for
@@ -51,7 +54,12 @@ import { RequestsService } from './requests.service';
 @ApiTags('requests')
 @Controller()
 export class RequestsController {
-  constructor(private readonly requests: RequestsService) {}
+  constructor(
+    private readonly views: RequestViews,
+    private readonly availabilityInput: AvailabilityService,
+    private readonly dateRequests: DateRequestsService,
+    private readonly leave: LeaveService,
+  ) {}
 
   @Get('me/requests')
   @RequirePermissions('requests:own')
@@ -60,7 +68,7 @@ export class RequestsController {
     description: 'Your staff memberships, periods, date requests and leave',
   })
   mine(@CurrentUser() user: AuthUser): Promise<MyRequestsDto> {
-    return this.requests.mine(user);
+    return this.views.mine(user);
   }
 
   @Get('staff/:staffMemberId/availability')
@@ -73,7 +81,7 @@ export class RequestsController {
     @CurrentUser() user: AuthUser,
     @Param('staffMemberId', ParseIdPipe) staffMemberId: string,
   ): Promise<AvailabilityDto> {
-    return this.requests.getAvailability(user, staffMemberId);
+    return this.availabilityInput.get(user, staffMemberId);
   }
 
   @Put('staff/:staffMemberId/availability')
@@ -84,7 +92,7 @@ export class RequestsController {
     @Param('staffMemberId', ParseIdPipe) staffMemberId: string,
     @Body() body: ReplaceAvailabilityDto,
   ): Promise<AvailabilityDto> {
-    return this.requests.replaceAvailability(user, staffMemberId, body);
+    return this.availabilityInput.replace(user, staffMemberId, body);
   }
 
   @Get('date-requests')
@@ -97,7 +105,7 @@ export class RequestsController {
     @CurrentUser() user: AuthUser,
     @Query() query: DateRequestQueryDto,
   ): Promise<Page<DateRequestDto>> {
-    return this.requests.listDateRequests(user, query);
+    return this.dateRequests.list(user, query);
   }
 
   @Post('date-requests')
@@ -110,7 +118,7 @@ export class RequestsController {
     @CurrentUser() user: AuthUser,
     @Body() body: CreateDateRequestDto,
   ): Promise<DateRequestDto> {
-    return this.requests.createDateRequest(user, body);
+    return this.dateRequests.create(user, body);
   }
 
   @Patch('date-requests/:id')
@@ -121,7 +129,7 @@ export class RequestsController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateDateRequestDto,
   ): Promise<DateRequestDto> {
-    return this.requests.updateDateRequest(user, id, body);
+    return this.dateRequests.update(user, id, body);
   }
 
   @Delete('date-requests/:id')
@@ -129,7 +137,7 @@ export class RequestsController {
   @RequirePermissions('requests:own')
   @ApiNoContentResponse()
   deleteDateRequest(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
-    return this.requests.deleteDateRequest(user, id);
+    return this.dateRequests.delete(user, id);
   }
 
   @Get('leave')
@@ -139,7 +147,7 @@ export class RequestsController {
     description: 'A page of leave, by first day: your own, or of your units for managers',
   })
   listLeave(@CurrentUser() user: AuthUser, @Query() query: LeaveQueryDto): Promise<Page<LeaveDto>> {
-    return this.requests.listLeave(user, query);
+    return this.leave.list(user, query);
   }
 
   @Post('leave')
@@ -147,14 +155,14 @@ export class RequestsController {
   @ApiCreatedResponse({ type: LeaveResponse, description: 'The leave request (pending)' })
   @ApiConflictResponse({ description: 'Overlaps your pending or approved leave' })
   createLeave(@CurrentUser() user: AuthUser, @Body() body: CreateLeaveDto): Promise<LeaveDto> {
-    return this.requests.createLeave(user, body);
+    return this.leave.create(user, body);
   }
 
   @Delete('leave/:id')
   @RequirePermissions('requests:own')
   @ApiOkResponse({ type: LeaveResponse, description: 'The cancelled leave' })
   cancelLeave(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<LeaveDto> {
-    return this.requests.cancelLeave(user, id);
+    return this.leave.cancel(user, id);
   }
 
   @Post('leave/:id/approve')
@@ -167,7 +175,7 @@ export class RequestsController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: DecideLeaveDto,
   ): Promise<LeaveDto> {
-    return this.requests.decideLeave(user, id, true, body.note);
+    return this.leave.decide(user, id, true, body.note);
   }
 
   @Post('leave/:id/decline')
@@ -180,7 +188,7 @@ export class RequestsController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: DecideLeaveDto,
   ): Promise<LeaveDto> {
-    return this.requests.decideLeave(user, id, false, body.note);
+    return this.leave.decide(user, id, false, body.note);
   }
 
   @Get('requests')
@@ -193,7 +201,7 @@ export class RequestsController {
     @CurrentUser() user: AuthUser,
     @Query() query: RequestListQueryDto,
   ): Promise<Page<RequestRowDto>> {
-    return this.requests.listRequests(user, query);
+    return this.views.listRequests(user, query);
   }
 
   @Get('roster-periods/:id/requests')
@@ -203,7 +211,7 @@ export class RequestsController {
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIdPipe) id: string,
   ): Promise<PeriodRequestsDto> {
-    return this.requests.periodRequests(user, id);
+    return this.views.periodRequests(user, id);
   }
 
   @Put('roster-periods/:id/request-limit')
@@ -214,6 +222,6 @@ export class RequestsController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateRequestLimitDto,
   ): Promise<RequestPeriodDto> {
-    return this.requests.setRequestLimit(user, id, body.requestLimit);
+    return this.views.setRequestLimit(user, id, body.requestLimit);
   }
 }

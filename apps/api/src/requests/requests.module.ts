@@ -1,11 +1,26 @@
 import { Module } from '@nestjs/common';
+import { AvailabilityService } from './availability.service';
+import { DateRequestsService } from './date-requests.service';
+import { LeaveService } from './leave.service';
+import { RequestAccess } from './request-access';
+import { RequestDtos } from './request-dtos';
+import { RequestViews } from './request-views.service';
 import { RequestsController } from './requests.controller';
-import { RequestsService } from './requests.service';
 
-/** Availability, date requests and leave (entities are registered in database/entities.ts). */
+/**
+ * Staff input: availability, date requests and leave, split by job (who may see and change what,
+ * the answers' rows, each kind of input, and the views over them). The entities are registered in
+ * database/entities.ts.
+ */
 @Module({
   controllers: [RequestsController],
-  providers: [RequestsService],
-  exports: [RequestsService],
+  providers: [
+    RequestAccess,
+    RequestDtos,
+    AvailabilityService,
+    DateRequestsService,
+    LeaveService,
+    RequestViews,
+  ],
 })
 export class RequestsModule {}

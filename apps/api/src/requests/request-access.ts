@@ -1,0 +1,99 @@
+import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { hasPermission } from '@rotaplex/contracts';
+import { DataSource, type EntityManager, In } from 'typeorm';
+import { type AuthUser } from '../common/auth-user';
+import { localDate } from '../common/dates';
+import { canAccessUnit, visibleUnitIds } from '../common/unit-scope';
+import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { UnitEntity } from '../units/unit.entity';
+
+/**
+ * Who is who for staff input: a staff member sees and changes only their own (the staff members
+ * whose userId is the caller); managers read everything of their units and decide leave.
+ */
+@Injectable()
+export class RequestAccess {
+  constructor(private readonly dataSource: DataSource) {}
+
+  private get m(): EntityManager {
+    return this.dataSource.manager;
+  }
+
+  /** Whether the caller reads other people's requests in the units they manage. */
+  isApprover(user: AuthUser): boolean {
+    return hasPermission(user.role, 'requests:approve');
+  }
+
+  async staffOrFail(id: string): Promise<StaffMemberEntity> {
+    const staff = await this.m.findOneBy(StaffMemberEntity, { id });
+    if (!staff) throw new NotFoundException('Staff member not found');
+    return staff;
+  }
+
+  /** The caller's own staff member `id`; 403 for anyone else's. */
+  async ownStaff(user: AuthUser, id: string): Promise<StaffMemberEntity> {
+    const staff = await this.staffOrFail(id);
+    if (staff.userId !== user.id) throw new ForbiddenException('You can only change your own requests');
+    return staff;
+  }
+
+  /** Readable by the person themselves, or by an approver with access to the unit. */
+  async readableStaff(user: AuthUser, id: string): Promise<StaffMemberEntity> {
+    const staff = await this.staffOrFail(id);
+    if (staff.userId === user.id) return staff;
+    if (this.isApprover(user) && canAccessUnit(user, staff.unitId) && (await this.inOrg(user, staff.unitId)))
+      return staff;
+    throw new ForbiddenException("You cannot see this person's requests");
+  }
+
+  async inOrg(user: AuthUser, unitId: string): Promise<boolean> {
+    return (await this.m.countBy(UnitEntity, { id: unitId, organisationId: user.organisationId })) > 0;
+  }
+
+  /** The caller's own active staff memberships (an inactive one takes no new requests). */
+  async myStaff(user: AuthUser): Promise<StaffMemberEntity[]> {
+    return this.m.find(StaffMemberEntity, {
+      where: { userId: user.id, active: true },
+      order: { name: 'ASC' },
+    });
+  }
+
+  /** Staff member ids whose requests the caller may read (null: none beyond the unit filter). */
+  async readableStaffIds(user: AuthUser, unitId?: string): Promise<string[]> {
+    if (unitId && !canAccessUnit(user, unitId))
+      throw new ForbiddenException('You do not have access to this unit');
+    if (!this.isApprover(user)) {
+      return (await this.myStaff(user)).filter((s) => !unitId || s.unitId === unitId).map((s) => s.id);
+    }
+    const visible = visibleUnitIds(user);
+    const units = await this.m.findBy(UnitEntity, {
+      organisationId: user.organisationId,
+      ...(unitId ? { id: unitId } : visible !== null ? { id: In(visible) } : {}),
+    });
+    if (!units.length) return [];
+    const staff = await this.m.findBy(StaffMemberEntity, { unitId: In(units.map((u) => u.id)) });
+    return staff.map((s) => s.id);
+  }
+
+  async periodOrFail(id: string): Promise<RosterPeriodEntity> {
+    const period = await this.m.findOneBy(RosterPeriodEntity, { id });
+    if (!period) throw new NotFoundException('Roster period not found');
+    return period;
+  }
+
+  /** A period of a unit the caller manages (planners and approvers). */
+  async managedPeriod(user: AuthUser, id: string): Promise<RosterPeriodEntity> {
+    const period = await this.periodOrFail(id);
+    if (!canAccessUnit(user, period.unitId) || !(await this.inOrg(user, period.unitId))) {
+      throw new ForbiddenException('You do not have access to this unit');
+    }
+    return period;
+  }
+
+  /** Today in the unit's time zone, "YYYY-MM-DD". */
+  async unitToday(unitId: string): Promise<string> {
+    const unit = await this.m.findOneBy(UnitEntity, { id: unitId });
+    return localDate(new Date(), unit?.timeZone ?? 'UTC');
+  }
+}
