@@ -1,7 +1,10 @@
 import { JwtService } from '@nestjs/jwt';
 import { REFRESH_COOKIE, type TokenResponse } from '@rotaplex/contracts';
 import { createHmac } from 'node:crypto';
+import { IsNull, Not } from 'typeorm';
 import { JWT_AUDIENCE, JWT_ISSUER } from '../src/auth/jwt.strategy';
+import { RefreshTokenEntity } from '../src/auth/refresh-token.entity';
+import { UserEntity } from '../src/users/user.entity';
 import { DEMO_ORGANISATION, DEMO_PASSWORD } from '../src/demo/demo-data';
 import {
   api,
@@ -179,9 +182,9 @@ describe('sign-in, tokens and sessions', () => {
         .expect(200);
       expect(refreshCookieOf(twin)).not.toBe(second);
       // ...but after it, reuse of the first token is refused and the whole family is revoked.
-      await t.dataSource.query(
-        `UPDATE refresh_tokens SET replacedAt = datetime('now', '-1 minute') WHERE replacedAt IS NOT NULL`,
-      );
+      await t.dataSource
+        .getRepository(RefreshTokenEntity)
+        .update({ replacedAt: Not(IsNull()) }, { replacedAt: new Date(Date.now() - 60_000) });
       const reuse = await t.http().post(api('/auth/refresh')).set('Cookie', cookie(first.refreshCookie));
       expect(reuse.status).toBe(401);
       expect(reuse.body.message).toMatch(/already used/);
@@ -204,10 +207,12 @@ describe('sign-in, tokens and sessions', () => {
 
     it('refuses an expired refresh token', async () => {
       const s = await t.login('declan.marsh@example.com');
-      await t.dataSource.query(
-        `UPDATE refresh_tokens SET expiresAt = datetime('now', '-1 minute') WHERE revokedAt IS NULL AND userId = (SELECT id FROM users WHERE email = ?)`,
-        ['declan.marsh@example.com'],
-      );
+      const declan = await t.dataSource
+        .getRepository(UserEntity)
+        .findOneByOrFail({ email: 'declan.marsh@example.com' });
+      await t.dataSource
+        .getRepository(RefreshTokenEntity)
+        .update({ revokedAt: IsNull(), userId: declan.id }, { expiresAt: new Date(Date.now() - 60_000) });
       const res = await t.http().post(api('/auth/refresh')).set('Cookie', cookie(s.refreshCookie));
       expect(res.status).toBe(401);
       expect(res.body.message).toMatch(/expired/);
