@@ -91,6 +91,32 @@ export function unhonouredLeave(input: RosterInput, roster: Roster): UnhonouredL
   return out.sort((a, b) => a.date.localeCompare(b.date) || a.name.localeCompare(b.name));
 }
 
+/** Whole days from `from` to `to` ("YYYY-MM-DD", calendar days, no time zone involved). */
+function daysBetween(from: string, to: string): number {
+  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
+}
+
+/**
+ * A caution when a roster is published with less notice than the unit aims to give: `today` in the
+ * unit's time zone, the period's first day, and the unit's publish lead time in days. Null when the
+ * notice is enough. Lead times: 6 weeks is a common hospital aim (Drake, J Adv Nurs 2018;74(8):1831-38);
+ * fair-workweek laws ask for 14 days (e.g. Seattle SMC 14.22); local law and agreements decide.
+ */
+export function leadTimeCaution(today: string, startDate: string, leadDays: number): string | null {
+  const notice = daysBetween(today, startDate);
+  if (notice >= leadDays) return null;
+  const given =
+    notice <= 0
+      ? 'This period has already started'
+      : `This roster starts in ${notice} ${notice === 1 ? 'day' : 'days'}`;
+  return (
+    `${given}: less notice than the ${leadDays} days this unit aims to give. Late rosters make it harder ` +
+    'for people to plan their lives and often mean more bank or agency shifts. Where a fair-workweek law or ' +
+    'agreement applies, changes inside its notice window may carry predictability pay: local law and ' +
+    'agreements decide.'
+  );
+}
+
 /**
  * Cautions on the settings a roster uses: the contracts of people with shifts on it that go beyond
  * the working-time presets, and shift types on it longer than 12 hours.

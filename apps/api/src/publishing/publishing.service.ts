@@ -29,7 +29,8 @@ import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { type SolveRunMode, SolveRunsService } from '../solve-runs/solve-runs.service';
 import { toCsv } from '../staff/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
-import { belowMinimum, settingCautions, unhonouredLeave } from './publish-check';
+import { belowMinimum, leadTimeCaution, settingCautions, unhonouredLeave } from './publish-check';
+import { localDate } from '../common/dates';
 import { formatShiftTimes, type MailShift, rosterMail } from './roster-mail';
 
 /** Publishing a draft roster, repairing a published one, and the period's audit trail and export. */
@@ -78,7 +79,16 @@ export class PublishingService {
       belowMinimum: short,
       ruleFindings: checkDto(input, roster).violations,
       unhonouredLeave: unhonouredLeave(input, roster),
-      cautions: settingCautions(input, roster, contracts),
+      cautions: [
+        ...[
+          leadTimeCaution(
+            localDate(new Date(), input.unit.timeZone),
+            input.period.startDate,
+            input.unit.publishLeadDays,
+          ),
+        ].filter((c): c is string => c !== null),
+        ...settingCautions(input, roster, contracts),
+      ],
       blockers,
       needsAcknowledgement: short.length > 0,
     };

@@ -31,6 +31,10 @@ export class UnitEntity {
   @Column({ type: 'varchar', length: 64 })
   timeZone!: string;
 
+  /** Days before a period starts by which its roster should be published (PUBLISH_LEAD_DAYS_DEFAULT). */
+  @Column({ type: 'integer', default: 42 })
+  publishLeadDays!: number;
+
   @CreateDateColumn({ type: 'datetime' })
   createdAt!: Date;
 

@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { type UnitDto } from '@rotaplex/contracts';
+import { PUBLISH_LEAD_DAYS_DEFAULT, type UnitDto } from '@rotaplex/contracts';
 import { DataSource, In, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
@@ -34,6 +34,7 @@ export class UnitsService {
       organisationId: user.organisationId,
       name: body.name,
       timeZone: body.timeZone,
+      publishLeadDays: body.publishLeadDays ?? PUBLISH_LEAD_DAYS_DEFAULT,
     });
     return toUnitDto(await this.units.save(unit));
   }
@@ -45,6 +46,7 @@ export class UnitsService {
       unit.name = body.name;
     }
     if (body.timeZone !== undefined) unit.timeZone = body.timeZone;
+    if (body.publishLeadDays !== undefined) unit.publishLeadDays = body.publishLeadDays;
     return toUnitDto(await this.units.save(unit));
   }
 
@@ -92,5 +94,11 @@ export class UnitsService {
 }
 
 export function toUnitDto(u: UnitEntity): UnitDto {
-  return { id: u.id, name: u.name, timeZone: u.timeZone, createdAt: u.createdAt.toISOString() };
+  return {
+    id: u.id,
+    name: u.name,
+    timeZone: u.timeZone,
+    publishLeadDays: u.publishLeadDays,
+    createdAt: u.createdAt.toISOString(),
+  };
 }

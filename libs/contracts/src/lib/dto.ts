@@ -114,13 +114,26 @@ export interface UnitDto {
   name: string;
   /** IANA time zone, e.g. "Europe/London". */
   timeZone: string;
+  /** Days before a period starts by which its roster should be published (default 42, six weeks). */
+  publishLeadDays: number;
   createdAt: string;
 }
 
 export interface CreateUnitRequest {
   name: string;
   timeZone: string;
+  /** Days of notice the unit aims to give (0 to PUBLISH_LEAD_DAYS_MAX; default PUBLISH_LEAD_DAYS_DEFAULT). */
+  publishLeadDays?: number;
 }
+
+/**
+ * Publish lead time: many hospitals aim to approve a roster 6 weeks before it starts; late approval
+ * drives temporary-staff use (Drake, J Adv Nurs 2018;74(8):1831-38). New South Wales health guidance
+ * sets at least 2 weeks (same source). Fair-workweek laws (e.g. Seattle SMC 14.22, Chicago) ask for
+ * 14 days. Local law and agreements decide; this is the unit's own aim.
+ */
+export const PUBLISH_LEAD_DAYS_DEFAULT = 42;
+export const PUBLISH_LEAD_DAYS_MAX = 365;
 
 export type UpdateUnitRequest = Partial<CreateUnitRequest>;
 

@@ -9,6 +9,7 @@ import { SwapFirstDate1765281600000 } from './1765281600000-swap-first-date';
 import { OutboxSealedBody1765368000000 } from './1765368000000-outbox-sealed-body';
 import { SolveRunMode1765454400000 } from './1765454400000-solve-run-mode';
 import { RosterPeriodChanges1765540800000 } from './1765540800000-roster-period-changes';
+import { UnitPublishLead1765713600000 } from './1765713600000-unit-publish-lead';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
 export const MIGRATIONS = [
@@ -23,4 +24,5 @@ export const MIGRATIONS = [
   OutboxSealedBody1765368000000,
   SolveRunMode1765454400000,
   RosterPeriodChanges1765540800000,
+  UnitPublishLead1765713600000,
 ];

@@ -1,7 +1,12 @@
-import { ApiProperty, PartialType } from '@nestjs/swagger';
-import { type CreateUnitRequest, type UpdateUnitRequest } from '@rotaplex/contracts';
+import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import {
+  type CreateUnitRequest,
+  PUBLISH_LEAD_DAYS_DEFAULT,
+  PUBLISH_LEAD_DAYS_MAX,
+  type UpdateUnitRequest,
+} from '@rotaplex/contracts';
 import { Transform } from 'class-transformer';
-import { IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { IsIanaTimeZone } from '../../common/decorators/is-iana-time-zone.decorator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
@@ -18,6 +23,18 @@ export class CreateUnitDto implements CreateUnitRequest {
   @Transform(trim)
   @IsIanaTimeZone()
   timeZone!: string;
+
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: PUBLISH_LEAD_DAYS_MAX,
+    default: PUBLISH_LEAD_DAYS_DEFAULT,
+    description: 'Days before a period starts by which its roster should be published',
+  })
+  @IsOptional()
+  @IsInt({ message: 'publishLeadDays must be a whole number of days' })
+  @Min(0, { message: 'publishLeadDays must be at least 0' })
+  @Max(PUBLISH_LEAD_DAYS_MAX, { message: `publishLeadDays must be at most ${PUBLISH_LEAD_DAYS_MAX}` })
+  publishLeadDays?: number;
 }
 
 export class UpdateUnitDto extends PartialType(CreateUnitDto) implements UpdateUnitRequest {}
