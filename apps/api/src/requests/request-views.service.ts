@@ -13,7 +13,7 @@ import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitEntity } from '../units/unit.entity';
-import { type RequestListQueryDto } from './dto/requests.dto';
+import { type MyRequestsQueryDto, type RequestListQueryDto } from './dto/requests.dto';
 import { RequestAccess } from './request-access';
 import { RequestDtos, toPeriodDto } from './request-dtos';
 import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from './requests.entities';
@@ -35,7 +35,8 @@ export class RequestViews {
     return this.dataSource.manager;
   }
 
-  async mine(user: AuthUser): Promise<MyRequestsDto> {
+  /** The caller's staff memberships and open periods, with a page of their date requests and leave. */
+  async mine(user: AuthUser, query: MyRequestsQueryDto): Promise<MyRequestsDto> {
     const staff = await this.access.myStaff(user);
     const ids = staff.map((s) => s.id);
     const unitIds = [...new Set(staff.map((s) => s.unitId))];
@@ -47,6 +48,21 @@ export class RequestViews {
           order: { startDate: 'ASC' },
         })
       : [];
+    const page = { skip: (query.page - 1) * query.pageSize, take: query.pageSize };
+    const [dateRequests, dateRequestsTotal] = ids.length
+      ? await this.m.findAndCount(DateRequestEntity, {
+          where: { staffMemberId: In(ids) },
+          order: { date: 'ASC', createdAt: 'ASC', id: 'ASC' },
+          ...page,
+        })
+      : [[], 0];
+    const [leave, leaveTotal] = ids.length
+      ? await this.m.findAndCount(LeaveRequestEntity, {
+          where: { staffMemberId: In(ids) },
+          order: { startDate: 'ASC', createdAt: 'ASC', id: 'ASC' },
+          ...page,
+        })
+      : [[], 0];
     return {
       staffMembers: staff.map((s) => ({
         id: s.id,
@@ -56,22 +72,12 @@ export class RequestViews {
         timeZone: unitById.get(s.unitId)?.timeZone ?? 'UTC',
       })),
       periods: periods.map(toPeriodDto),
-      dateRequests: ids.length
-        ? await this.dtos.dateRequests(
-            await this.m.find(DateRequestEntity, {
-              where: { staffMemberId: In(ids) },
-              order: { date: 'ASC' },
-            }),
-          )
-        : [],
-      leave: ids.length
-        ? await this.dtos.leave(
-            await this.m.find(LeaveRequestEntity, {
-              where: { staffMemberId: In(ids) },
-              order: { startDate: 'ASC' },
-            }),
-          )
-        : [],
+      dateRequests: await this.dtos.dateRequests(dateRequests),
+      leave: await this.dtos.leave(leave),
+      dateRequestsTotal,
+      leaveTotal,
+      page: query.page,
+      pageSize: query.pageSize,
     };
   }
 

@@ -26,6 +26,7 @@ import {
   DateRequestQueryDto,
   DecideLeaveDto,
   LeaveQueryDto,
+  MyRequestsQueryDto,
   ReplaceAvailabilityDto,
   RequestListQueryDto,
   UpdateDateRequestDto,
@@ -65,10 +66,11 @@ export class RequestsController {
   @RequirePermissions('requests:own')
   @ApiOkResponse({
     type: MyRequestsResponse,
-    description: 'Your staff memberships, periods, date requests and leave',
+    description:
+      'Your staff memberships and open periods, with a page of your date requests and of your leave (oldest first) and their totals',
   })
-  mine(@CurrentUser() user: AuthUser): Promise<MyRequestsDto> {
-    return this.views.mine(user);
+  mine(@CurrentUser() user: AuthUser, @Query() query: MyRequestsQueryDto): Promise<MyRequestsDto> {
+    return this.views.mine(user, query);
   }
 
   @Get('staff/:staffMemberId/availability')

@@ -200,13 +200,25 @@ export interface RequestPeriodDto {
   requestLimit: number;
 }
 
-/** Everything the "My requests" and "My availability" pages need, for the signed-in user only. */
+/**
+ * Everything the "My requests" and "My availability" pages need, for the signed-in user only.
+ * `dateRequests` and `leave` are one page each (MyRequestsQuery), oldest first, with their totals.
+ */
 export interface MyRequestsDto {
   staffMembers: MyStaffMemberDto[];
   periods: RequestPeriodDto[];
   dateRequests: DateRequestDto[];
   leave: LeaveDto[];
+  /** All of the caller's date requests, of which `dateRequests` is page `page`. */
+  dateRequestsTotal: number;
+  /** All of the caller's leave, of which `leave` is page `page`. */
+  leaveTotal: number;
+  page: number;
+  pageSize: number;
 }
+
+/** GET /me/requests: page (from 1) and pageSize (1 to MAX_PAGE_SIZE, default MAX_PAGE_SIZE). */
+export type MyRequestsQuery = Pick<PageQuery, 'page' | 'pageSize'>;
 
 /** A period's requests for managers (the planning board and the requests table). */
 export interface PeriodRequestsDto {
@@ -270,7 +282,7 @@ const e = encodeURIComponent;
 
 /** Paths of the staff-input resources, relative to API_PREFIX. */
 export const REQUESTS_ROUTES = {
-  /** GET: the signed-in user's staff memberships, periods, date requests and leave (MyRequestsDto). */
+  /** GET (MyRequestsQuery): the signed-in user's staff memberships, periods, a page of date requests and leave (MyRequestsDto). */
   mine: '/me/requests',
   /** GET, PUT: a staff member's weekly availability (the person themselves; managers read). */
   availability: (staffMemberId: string) => `/staff/${e(staffMemberId)}/availability`,

@@ -93,6 +93,11 @@ export class MyRequestsResponse implements MyRequestsDto {
   @ApiProperty({ type: [RequestPeriodResponse] }) periods!: RequestPeriodResponse[];
   @ApiProperty({ type: [DateRequestResponse] }) dateRequests!: DateRequestResponse[];
   @ApiProperty({ type: [LeaveResponse] }) leave!: LeaveResponse[];
+  @ApiProperty({ description: 'All date requests of the caller; dateRequests is one page of them' })
+  dateRequestsTotal!: number;
+  @ApiProperty({ description: 'All leave of the caller; leave is one page of it' }) leaveTotal!: number;
+  @ApiProperty() page!: number;
+  @ApiProperty() pageSize!: number;
 }
 
 export class PeriodRequestsResponse implements PeriodRequestsDto {

@@ -15,7 +15,9 @@ import {
   LEAVE_TYPES,
   type LeaveStatus,
   type LeaveType,
+  MAX_PAGE_SIZE,
   MAX_REQUEST_LIMIT,
+  type MyRequestsQuery,
   REQUEST_NOTE_MAX_LENGTH,
   REQUEST_ROW_STATUSES,
   REQUEST_ROW_TYPES,
@@ -124,6 +126,20 @@ export class UpdateDateRequestDto implements UpdateDateRequestRequest {
     message: `note must be at most ${REQUEST_NOTE_MAX_LENGTH} characters`,
   })
   note?: string | null;
+}
+
+/**
+ * GET /me/requests: page (from 1) and pageSize (1 to MAX_PAGE_SIZE); the page size defaults to
+ * MAX_PAGE_SIZE, so one read usually holds everything the page shows.
+ */
+export class MyRequestsQueryDto extends PickType(PageQueryDto, ['page'] as const) implements MyRequestsQuery {
+  @ApiPropertyOptional({ minimum: 1, maximum: MAX_PAGE_SIZE, default: MAX_PAGE_SIZE })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: `pageSize must be a whole number from 1 to ${MAX_PAGE_SIZE}` })
+  @Min(1, { message: `pageSize must be a whole number from 1 to ${MAX_PAGE_SIZE}` })
+  @Max(MAX_PAGE_SIZE, { message: `pageSize must be a whole number from 1 to ${MAX_PAGE_SIZE}` })
+  pageSize: number = MAX_PAGE_SIZE;
 }
 
 /** Filters, page (from 1) and pageSize (1 to MAX_PAGE_SIZE, default 20); by date, oldest first. */
