@@ -1,7 +1,7 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { type RosterChangeKind, type RosterPeriodChangeDto, type StaleVersionDto } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
-import { type EntityManager, MoreThan } from 'typeorm';
+import { type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { UserEntity } from '../users/user.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
@@ -124,6 +124,25 @@ export class PeriodWriter {
   async changesSince(em: EntityManager, periodId: string, version: number): Promise<RosterPeriodChangeDto[]> {
     const rows = await em.find(RosterPeriodChangeEntity, {
       where: { rosterPeriodId: periodId, version: MoreThan(version) },
+      order: { version: 'ASC', id: 'ASC' },
+      take: 100,
+    });
+    return rows.map((r) => ({
+      version: r.version,
+      kind: r.kind,
+      cells: r.cells,
+      actorName: r.actorName,
+      at: r.at.toISOString(),
+    }));
+  }
+
+  /**
+   * The cell changes recorded at or after `since`, oldest first: what changed since a request
+   * was made (a swap or claim holds the period as it was when it was asked for).
+   */
+  async changesAfter(em: EntityManager, periodId: string, since: Date): Promise<RosterPeriodChangeDto[]> {
+    const rows = await em.find(RosterPeriodChangeEntity, {
+      where: { rosterPeriodId: periodId, at: MoreThanOrEqual(since) },
       order: { version: 'ASC', id: 'ASC' },
       take: 100,
     });

@@ -13,6 +13,7 @@ import {
   type SwapLinkViewDto,
   type SwapPreviewDto,
   type SwapRequestDto,
+  type StaleVersionDto,
   type SwapStatus,
 } from '@rotaplex/contracts';
 import { DataSource, type EntityManager } from 'typeorm';
@@ -37,7 +38,13 @@ import { type StoredCellChange, SwapRequestEntity } from './swap-request.entity'
 /** What a decision produced: mails (queued in its transaction), and a refusal to report after the commit. */
 interface Outcome {
   mails: OutgoingMail[];
-  refusal?: { status: 409 | 410 | 422; message: string; findings?: SwapPreviewDto };
+  refusal?: {
+    status: 409 | 410 | 422;
+    message: string;
+    findings?: SwapPreviewDto;
+    /** A stale roster: the period's version now and the cell changes since the request was made. */
+    stale?: Pick<StaleVersionDto, 'version' | 'changes'>;
+  };
 }
 
 type Actor = AuthUser;
@@ -150,7 +157,7 @@ export class SwapDecisions {
         throw new UnprocessableEntityException({ ...body, findings: outcome.refusal.findings });
       }
       if (outcome.refusal.status === 410) throw new GoneException(body);
-      throw new ConflictException(body);
+      throw new ConflictException({ ...body, error: 'Conflict', ...outcome.refusal.stale });
     }
   }
 
@@ -267,13 +274,24 @@ export class SwapDecisions {
     }
     const changes = JSON.parse(row.changes) as StoredCellChange[];
     const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: row.rosterPeriodId });
+    // The request holds the period as it was when asked for: its own cells are the lock (the
+    // period's writer records who changed what since), and the rules are checked again below on
+    // the roster as it is now, whatever else changed meanwhile.
     const stale = staleCells(rows, changes);
     if (stale.length) {
       const cells = stale
         .map((c) => `${staffName(input, c.staffMemberId)} on ${dateInWords(c.date)}`)
         .join(', ');
-      const message = `The roster changed since this was asked (${cells}): nothing was changed`;
-      return refuse(message, { status: 409, message });
+      const since = await this.writer.changesAfter(em, row.rosterPeriodId, row.createdAt);
+      const by = [...new Set(since.map((c) => `${c.kind} by ${c.actorName}`))].slice(0, 5);
+      const message =
+        `The roster changed since this was asked (${cells}): nothing was changed` +
+        (by.length ? `. Changed since: ${by.join(', ')}` : '');
+      return refuse(message, {
+        status: 409,
+        message,
+        stale: { version: input.period.version, changes: since },
+      });
     }
     if (row.kind === 'claim') {
       const c = changes[0];
