@@ -25,6 +25,7 @@ import { ShiftTypesModule } from './shift-types/shift-types.module';
 import { ContractsModule } from './contracts/contracts.module';
 import { StaffModule } from './staff/staff.module';
 import { CoverNeedsModule } from './cover-needs/cover-needs.module';
+import { DemandModule } from './demand/demand.module';
 import { RosterPeriodsModule } from './roster-periods/roster-periods.module';
 import { SolveRunsModule } from './solve-runs/solve-runs.module';
 import { AssignmentsModule } from './assignments/assignments.module';
@@ -61,6 +62,7 @@ export class AppModule {
         ContractsModule,
         StaffModule,
         CoverNeedsModule,
+        DemandModule,
         RosterPeriodsModule,
         SolveRunsModule,
         AssignmentsModule,

@@ -9,5 +9,6 @@ import { CoverNeedsService } from './cover-needs.service';
   imports: [TypeOrmModule.forFeature([CoverPatternRowEntity, CoverOverrideEntity]), UnitsModule],
   controllers: [CoverNeedsController],
   providers: [CoverNeedsService],
+  exports: [CoverNeedsService],
 })
 export class CoverNeedsModule {}

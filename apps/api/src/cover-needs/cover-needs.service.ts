@@ -210,6 +210,44 @@ export class CoverNeedsService {
   }
 
   /**
+   * Date overrides written inside the caller's transaction (the demand plan's accept step, which
+   * records its acceptance in the same transaction). Checks every row like the other writes (400,
+   * nothing written). Answers the overrides of the same date, shift type and skill before, the
+   * saved ones, and the cautions of minimums lowered to 0.
+   */
+  async writeOverridesIn(
+    em: EntityManager,
+    user: AuthUser,
+    unitId: string,
+    rows: readonly OverrideRow[],
+  ): Promise<{ before: CoverOverrideDto[]; saved: CoverOverrideDto[]; cautions: string[] }> {
+    const refs = await this.references(user, unitId);
+    const errors: string[] = [];
+    const seen = new Set<string>();
+    rows.forEach((r, i) => {
+      const at = `rows.${i}`;
+      if (!isRealDate(r.date)) errors.push(`${at}.date must be a real calendar date`);
+      if (!refs.shiftIds.has(r.shiftTypeId))
+        errors.push(`${at}.shiftTypeId must be a shift type of this unit`);
+      if (r.skillId !== null && !refs.skillIds.has(r.skillId)) errors.push(`${at}.skillId must be a skill`);
+      if (r.target < r.min) errors.push(`${at}.target must be at least min`);
+      const key = `${r.date}|${r.shiftTypeId}|${r.skillId}`;
+      if (seen.has(key)) errors.push(`${at} repeats the date, shift type and skill of an earlier row`);
+      seen.add(key);
+    });
+    if (errors.length) throw new BadRequestException(errors);
+    const dates = [...new Set(rows.map((r) => r.date))];
+    const earlier = dates.length ? await em.findBy(CoverOverrideEntity, { unitId, date: In(dates) }) : [];
+    const keys = new Set(rows.map((r) => `${r.date}|${r.shiftTypeId}|${r.skillId}`));
+    const before = earlier
+      .filter((o) => keys.has(`${o.date}|${o.shiftTypeId}|${o.skillId}`))
+      .map(toOverrideDto);
+    const cautions = await this.importCautions(unitId, refs, [], [...rows]);
+    const saved = (await this.writeOverrides(em, unitId, [...rows])).map(toOverrideDto);
+    return { before, saved, cautions };
+  }
+
+  /**
    * Minimums above 0 that an upload sets to 0: pattern rows it replaces (when it has any) and
    * dates whose override or pattern row asked for someone.
    */

@@ -19,6 +19,7 @@ import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from '.
 import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
 import { AuditEntryEntity } from '../audit/audit-entry.entity';
 import { RosterPublicationEntity } from '../publishing/roster-publication.entity';
+import { DemandAcceptanceEntity, UnitDemandEntity } from '../demand/demand.entities';
 
 /** Every entity of the schema; the migrations in ./migrations must produce exactly these tables. */
 export const ENTITIES = [
@@ -48,4 +49,6 @@ export const ENTITIES = [
   LeaveRequestEntity,
   SwapRequestEntity,
   SwapLinkTokenEntity,
+  UnitDemandEntity,
+  DemandAcceptanceEntity,
 ];

@@ -12,6 +12,7 @@ import { OrganisationEntity } from '../organisation/organisation.entity';
 import { UnitEntity } from '../units/unit.entity';
 import { UserEntity } from '../users/user.entity';
 import { DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_UNITS, DEMO_USERS } from './demo-data';
+import { seedDemoDemand } from './demo-demand';
 import { seedDemoPlanning } from './demo-planning';
 
 /**
@@ -66,6 +67,7 @@ export class FirstRunService implements OnApplicationBootstrap {
         usersByEmail.set(u.email, saved);
       }
       await seedDemoPlanning(em, org.id, units, usersByEmail, new Date());
+      await seedDemoDemand(em, units);
     });
     this.logger.log(
       `Demo data seeded: ${DEMO_USERS.length} people. Sign in as admin@example.com, manager@example.com or staff@example.com with the password "${DEMO_PASSWORD}".`,

@@ -10,6 +10,7 @@ import { OutboxSealedBody1765368000000 } from './1765368000000-outbox-sealed-bod
 import { SolveRunMode1765454400000 } from './1765454400000-solve-run-mode';
 import { RosterPeriodChanges1765540800000 } from './1765540800000-roster-period-changes';
 import { UnitPublishLead1765713600000 } from './1765713600000-unit-publish-lead';
+import { Demand1765800000000 } from './1765800000000-demand';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
 export const MIGRATIONS = [
@@ -25,4 +26,5 @@ export const MIGRATIONS = [
   SolveRunMode1765454400000,
   RosterPeriodChanges1765540800000,
   UnitPublishLead1765713600000,
+  Demand1765800000000,
 ];
