@@ -227,7 +227,7 @@ describe('demand: forecast, plan and accept', () => {
       const shifts = await shiftTypesByCode(t, admin, centre.id);
       const wardShifts = await shiftTypesByCode(t, admin, ward.id);
       const ok = { date: centrePeriod.startDate, shiftTypeId: shifts.D.id, skillId: null, min: 1, target: 2 };
-      const probes: unknown[] = [
+      const probes: object[] = [
         { rows: [ok, { ...ok, date: '1999-01-01' }] },
         { rows: [ok, { ...ok, date: centrePeriod.startDate, shiftTypeId: wardShifts.E.id }] },
         { rows: [{ ...ok, min: 3, target: 2 }] },
@@ -291,7 +291,7 @@ describe('demand: forecast, plan and accept', () => {
       const before = await storedRow(centre.id);
       const shifts = await shiftTypesByCode(t, admin, ward.id);
       const cc = valid().contactCentre!;
-      const probes: unknown[] = [
+      const probes: object[] = [
         { ...valid(), contactCentre: { ...cc, intervalMinutes: 20 } },
         { ...valid(), contactCentre: { ...cc, service: { ...cc.service, targetPercent: 100 } } },
         { ...valid(), contactCentre: { ...cc, service: { ...cc.service, shrinkagePercent: 90 } } },
