@@ -1,10 +1,11 @@
-import { Badge, Body1, Caption1, makeStyles, Subtitle1, Title2, tokens } from '@fluentui/react-components';
-import { CheckmarkCircleRegular, GridRegular } from '@fluentui/react-icons';
+import { Body1, Caption1, makeStyles, Subtitle1, Title2, tokens } from '@fluentui/react-components';
+import { GridRegular } from '@fluentui/react-icons';
 import { isUnitScoped } from '@rotaplex/contracts';
 import { useQuery } from '@tanstack/react-query';
-import { PERMISSION_TEXT, ROLE_LABELS, ROLE_SUMMARIES } from '@/features/auth/roleText';
+import { ROLE_LABELS, ROLE_SUMMARIES } from '@/features/auth/roleText';
 import { useCan, useCurrentUser } from '@/features/auth/hooks/useCurrentUser';
-import { NextSteps } from '@/features/home/components/NextSteps';
+import { WaitingForYou } from '@/features/home/components/WaitingForYou';
+import { YourNextShifts } from '@/features/home/components/YourNextShifts';
 import { unitsQuery } from '@/features/units/api/units.queries';
 import { localTime, utcOffset } from '@/features/units/timeZones';
 import { usersCountQuery } from '@/features/users/api/users.queries';
@@ -69,6 +70,10 @@ export function HomePage() {
   const canReadUsers = useCan('users:read');
   const people = useQuery({ ...usersCountQuery(), enabled: canReadUsers });
   const firstName = me.displayName.split(' ')[0];
+  const canPlan = useCan('rosters:plan');
+  const canApprove = useCan('requests:approve');
+  const canPlanOrApprove = canPlan || canApprove;
+  const isStaff = useCan('requests:own');
 
   return (
     <>
@@ -77,31 +82,12 @@ export function HomePage() {
           {greeting(new Date())}, {firstName}
         </Title2>
         <Body1 className={styles.muted}>
-          {me.organisation.name} · {ROLE_LABELS[me.role]}
+          {me.organisation.name} · {ROLE_LABELS[me.role]}: {ROLE_SUMMARIES[me.role]}
         </Body1>
       </div>
       <div className={styles.grid}>
-        <section className={surface.panel} aria-labelledby="home-role">
-          <div className={styles.panelHead}>
-            <Subtitle1 as="h2" id="home-role">
-              Your role
-            </Subtitle1>
-            <Badge appearance="tint" color="brand">
-              {ROLE_LABELS[me.role]}
-            </Badge>
-          </div>
-          <Body1>{ROLE_SUMMARIES[me.role]}</Body1>
-          <ul className={styles.list} aria-label="What your role allows">
-            {me.permissions.map((permission) => (
-              <li key={permission} className={styles.can}>
-                <span className={styles.tick} aria-hidden="true">
-                  <CheckmarkCircleRegular />
-                </span>
-                <Body1>{PERMISSION_TEXT[permission]}</Body1>
-              </li>
-            ))}
-          </ul>
-        </section>
+        {canPlanOrApprove && <WaitingForYou />}
+        {isStaff && <YourNextShifts />}
         <section className={surface.panel} aria-labelledby="home-units">
           <div className={styles.panelHead}>
             <Subtitle1 as="h2" id="home-units">
@@ -109,7 +95,8 @@ export function HomePage() {
             </Subtitle1>
             {canReadUsers && people.data !== undefined && units.data && (
               <Caption1 className={styles.muted}>
-                {units.data.length} units · {people.data} people
+                {units.data.length} {units.data.length === 1 ? 'unit' : 'units'} · {people.data}{' '}
+                {people.data === 1 ? 'person' : 'people'}
               </Caption1>
             )}
           </div>
@@ -136,13 +123,6 @@ export function HomePage() {
           )}
         </section>
       </div>
-      <section aria-labelledby="home-next">
-        <Subtitle1 as="h2" id="home-next" block>
-          Where to go next
-        </Subtitle1>
-        <br />
-        <NextSteps permissions={me.permissions} />
-      </section>
     </>
   );
 }

@@ -32,7 +32,7 @@ import { RowActions } from '@/features/planning/components/RowActions';
 import { UnitPicker } from '@/features/planning/components/UnitPicker';
 import { UnitScope } from '@/features/planning/components/UnitScope';
 import { useSelectedUnit } from '@/features/planning/hooks/useSelectedUnit';
-import { lastDay, suggestedStart } from '@/features/planning/utils/periodDates';
+import { lastDay, publishDeadline, suggestedStart } from '@/features/planning/utils/periodDates';
 import { PATHS } from '@/app/paths';
 import { AppLink } from '@/ui/AppLink';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
@@ -116,6 +116,7 @@ export function RosterPeriodsPage() {
                     <TableHeaderCell>To</TableHeaderCell>
                     <TableHeaderCell>Days</TableHeaderCell>
                     <TableHeaderCell>Status</TableHeaderCell>
+                    <TableHeaderCell>Publish by ({unit.publishLeadDays} days’ notice)</TableHeaderCell>
                     <TableHeaderCell className={styles.actionsCol}>
                       <span className="visually-hidden">Actions</span>
                     </TableHeaderCell>
@@ -133,6 +134,9 @@ export function RosterPeriodsPage() {
                         <Badge appearance="tint" shape="rounded" color={STATUS[p.status].color}>
                           {STATUS[p.status].label}
                         </Badge>
+                      </TableCell>
+                      <TableCell className={styles.nowrap}>
+                        <PublishBy period={p} leadDays={unit.publishLeadDays} today={today} />
                       </TableCell>
                       <TableCell>
                         <RowActions
@@ -206,6 +210,50 @@ export function RosterPeriodsPage() {
             ? 'An archived period is kept for the record and can no longer be changed or published.'
             : 'The draft and anything planned in it are deleted.'}
         </ConfirmDialog>
+      )}
+    </>
+  );
+}
+
+/** When a period should be (or was) published, against the unit's lead time; a late draft is marked. */
+function PublishBy({
+  period,
+  leadDays,
+  today,
+}: {
+  period: RosterPeriodDto;
+  leadDays: number;
+  today: string;
+}) {
+  const due = publishDeadline(period, leadDays, today);
+  if (period.status !== 'draft') {
+    if (!period.publishedAt) return <>{fmt(due.publishBy)}</>;
+    const published = period.publishedAt.slice(0, 10);
+    return (
+      <>
+        {fmt(due.publishBy)}
+        {published > due.publishBy ? (
+          <>
+            {' '}
+            <Badge appearance="tint" color="warning">
+              Published late
+            </Badge>
+          </>
+        ) : null}
+      </>
+    );
+  }
+  return (
+    <>
+      {fmt(due.publishBy)}{' '}
+      {due.late ? (
+        <Badge appearance="filled" color="danger">
+          {-due.daysLeft} {due.daysLeft === -1 ? 'day' : 'days'} late
+        </Badge>
+      ) : (
+        <Badge appearance="tint" color="informative">
+          {due.daysLeft} {due.daysLeft === 1 ? 'day' : 'days'} left
+        </Badge>
       )}
     </>
   );

@@ -26,3 +26,30 @@ export function suggestedStart(periods: readonly RosterPeriodDto[], today: strin
   const ends = live.map((p) => addDays(p.startDate, p.days)).sort();
   return ends[ends.length - 1];
 }
+
+/** Whole calendar days from `from` to `to` ("YYYY-MM-DD"; negative when `to` is earlier). */
+export function daysFrom(from: string, to: string): number {
+  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
+}
+
+export interface PublishDeadline {
+  /** The last day to publish with the unit's lead time: the period's start minus the lead days. */
+  publishBy: string;
+  /** Days left until publishBy (negative: that many days late). */
+  daysLeft: number;
+  late: boolean;
+}
+
+/**
+ * When a draft should be published: `leadDays` before it starts (the unit's publish lead time; six
+ * weeks is a common hospital aim, Drake, J Adv Nurs 2018;74(8):1831-38). Late once today is past it.
+ */
+export function publishDeadline(
+  p: Pick<RosterPeriodDto, 'startDate'>,
+  leadDays: number,
+  today: string,
+): PublishDeadline {
+  const publishBy = addDays(p.startDate, -leadDays);
+  const daysLeft = daysFrom(today, publishBy);
+  return { publishBy, daysLeft, late: daysLeft < 0 };
+}

@@ -16,6 +16,7 @@ import { formErrors } from '@/api/errors';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
 import { createUnit, unitKeys, updateUnit } from '@/features/units/api/units.queries';
+import { PUBLISH_LEAD_DAYS_DEFAULT, PUBLISH_LEAD_DAYS_MAX } from '@rotaplex/contracts';
 import { isValidTimeZone } from '@/features/units/timeZones';
 import { TimeZonePicker } from './TimeZonePicker';
 import { FormDialogActions } from '@/ui/FormDialogActions';
@@ -40,28 +41,33 @@ export function UnitFormDialog({ unit, open, onClose }: UnitFormDialogProps) {
   const queryClient = useQueryClient();
   const [name, setName] = useState(unit?.name ?? '');
   const [timeZone, setTimeZone] = useState(unit?.timeZone ?? browserTimeZone());
-  const [localError, setLocalError] = useState<{ name?: string; timeZone?: string }>({});
+  const [lead, setLead] = useState(String(unit?.publishLeadDays ?? PUBLISH_LEAD_DAYS_DEFAULT));
+  const [localError, setLocalError] = useState<{ name?: string; timeZone?: string; lead?: string }>({});
 
   const mutation = useMutation({
     mutationFn: () =>
       unit
-        ? updateUnit(unit.id, { name: name.trim(), timeZone })
-        : createUnit({ name: name.trim(), timeZone }),
+        ? updateUnit(unit.id, { name: name.trim(), timeZone, publishLeadDays: Number(lead) })
+        : createUnit({ name: name.trim(), timeZone, publishLeadDays: Number(lead) }),
     onSuccess: async (saved) => {
       await queryClient.invalidateQueries({ queryKey: unitKeys.all });
       notify(unit ? `Saved ${saved.name}` : `Created ${saved.name}`);
       onClose();
     },
   });
-  const errors = formErrors(mutation.error, ['name', 'timeZone'] as const);
+  const errors = formErrors(mutation.error, ['name', 'timeZone', 'publishLeadDays'] as const);
 
   const handleSubmit = (event: FormEvent) => {
     event.preventDefault();
-    const next: { name?: string; timeZone?: string } = {};
+    const next: { name?: string; timeZone?: string; lead?: string } = {};
     if (!name.trim()) next.name = 'Give the unit a name, e.g. "Ward 7" or "Night desk".';
     if (!isValidTimeZone(timeZone)) next.timeZone = 'Pick a time zone from the list.';
+    const days = Number(lead);
+    if (!/^\d+$/.test(lead.trim()) || days > PUBLISH_LEAD_DAYS_MAX) {
+      next.lead = `Enter whole days from 0 to ${PUBLISH_LEAD_DAYS_MAX}.`;
+    }
     setLocalError(next);
-    if (next.name || next.timeZone) return;
+    if (next.name || next.timeZone || next.lead) return;
     mutation.mutate();
   };
 
@@ -87,6 +93,14 @@ export function UnitFormDialog({ unit, open, onClose }: UnitFormDialogProps) {
                 onChange={setTimeZone}
                 error={localError.timeZone ?? errors.fields.timeZone}
               />
+              <Field
+                label="Publish lead time (days before a period starts)"
+                hint="Six weeks (42 days) is a common aim for hospital rosters; fair-workweek laws often ask for 14 days. Local law and agreements decide."
+                validationMessage={localError.lead ?? errors.fields.publishLeadDays}
+                validationState={(localError.lead ?? errors.fields.publishLeadDays) ? 'error' : 'none'}
+              >
+                <Input inputMode="numeric" value={lead} onChange={(_, d) => setLead(d.value)} />
+              </Field>
             </DialogContent>
             <FormDialogActions
               pending={mutation.isPending}
