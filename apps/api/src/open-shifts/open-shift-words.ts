@@ -25,8 +25,13 @@ const RULE_WORDS: Record<string, string> = {
  * of rest between L on Fri 1 Jan 2027 and …", without the person's own name and with dates in words.
  */
 export function ruleInWords(v: Pick<RosterViolationDto, 'rule' | 'message'>, name: string): string {
+  const who = name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
   const message = v.message
-    .replace(new RegExp(`^${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}:\\s*`), '')
+    .replace(new RegExp(`^${who}:\\s*`), '')
+    .replace(new RegExp(`\\b${who} is\\b`, 'g'), 'you are')
+    .replace(new RegExp(`\\b${who} has\\b`, 'g'), 'you have')
+    .replace(new RegExp(`\\b${who}\\b`, 'g'), 'you')
+    .replace(/\bbut has shift\b/g, 'but would have shift')
     .replace(/\b(\d{4}-\d{2}-\d{2})\b/g, (d) => dateInWords(d))
     .replace(/\b1 day\(s\)/g, '1 day')
     .replace(/\bday\(s\)/g, 'days');

@@ -11,6 +11,7 @@ import {
   type NotifyOpenShiftResultDto,
   type OpenShiftDto,
   type Page,
+  ROSTER_PERIOD_MAX_DAYS,
   type SwapRequestDto,
 } from '@rotaplex/contracts';
 import { DataSource, In } from 'typeorm';
@@ -118,14 +119,18 @@ export class OpenShiftsService {
         org: user.organisationId,
         published: 'published',
       })
-      .andWhere(`date(p.startDate, '+' || (p.days - 1) || ' days') >= :yesterday`, { yesterday });
+      // No period is longer than ROSTER_PERIOD_MAX_DAYS; the exact last day is checked below (date
+      // arithmetic differs between SQLite and PostgreSQL, text comparison of ISO dates does not).
+      .andWhere('p.startDate >= :earliest', { earliest: addDays(yesterday, 1 - ROSTER_PERIOD_MAX_DAYS) });
     const visible = visibleUnitIds(user);
     if (visible !== null) {
       if (!visible.length) return { items: [], total: 0, page: query.page, pageSize: query.pageSize };
       qb.andWhere('p.unitId IN (:...visible)', { visible });
     }
     if (query.rosterPeriodId) qb.andWhere('p.id = :periodId', { periodId: query.rosterPeriodId });
-    const periods = await qb.orderBy('p.startDate', 'ASC').addOrderBy('p.id', 'ASC').getMany();
+    const periods = (await qb.orderBy('p.startDate', 'ASC').addOrderBy('p.id', 'ASC').getMany()).filter(
+      (p) => addDays(p.startDate, p.days - 1) >= yesterday,
+    );
     const zones = await this.timeZones(periods.map((p) => p.unitId));
     const all: OpenShiftDto[] = [];
     for (const period of periods) {

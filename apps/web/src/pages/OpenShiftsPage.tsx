@@ -1,3 +1,4 @@
+import { MessageBar, MessageBarBody, MessageBarTitle } from '@fluentui/react-components';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useCan } from '@/features/auth/hooks/useCurrentUser';
@@ -9,27 +10,51 @@ import { TableSkeleton } from '@/ui/LoadingState';
 import { PageHeader } from '@/ui/PageHeader';
 import { Pagination } from '@/ui/Pagination';
 
-/** Cover still short on published rosters: staff claim what they can take, managers see it all. */
+const shifts = (n: number) => `${n} ${n === 1 ? 'shift' : 'shifts'}`;
+
+/**
+ * Cover still short on published rosters. Staff see every open shift of their units: those they may
+ * take first (with Claim), the others with why not in words. Managers see them all and can e-mail the
+ * staff who may take one.
+ */
 export function OpenShiftsPage() {
   const canClaim = useCan('requests:own');
+  const canNotify = useCan('rosters:plan');
   const [page, setPage] = useState(1);
-  const open = useQuery(openShiftsQuery(page));
+  const open = useQuery(openShiftsQuery(page, canClaim));
+  // Staff: how many of the open shifts this person may take (the total of the plain list).
+  const mayTake = useQuery({ ...openShiftsQuery(1, false, 1), enabled: canClaim });
+  const total = open.data?.total ?? 0;
+  const mine = mayTake.data?.total;
   return (
     <>
       <PageHeader
         title="Open shifts"
         description={
           canClaim
-            ? 'Shifts still short of people that you have the skill for and can take without breaking a rule. A manager approves each claim.'
-            : 'Shifts of your units still short of people after publishing.'
+            ? 'Shifts of your units still short of people after publishing. You can claim those you have the skill for and can take without breaking a rule; a manager approves each claim.'
+            : 'Shifts of your units still short of people after publishing. Those below the minimum are a safety shortfall: e-mail the staff who may take them, or offer them to bank or agency staff as local policy says.'
         }
       />
       {open.error ? <ErrorBanner error={open.error} onRetry={() => void open.refetch()} /> : null}
+      {canClaim && total > 0 && mine !== undefined && (
+        <MessageBar intent={mine > 0 ? 'info' : 'warning'} data-testid="open-shift-summary">
+          <MessageBarBody>
+            <MessageBarTitle>
+              {total === 1 ? '1 shift is open' : `${total} shifts are open`};{' '}
+              {mine === 0 ? 'none you may take' : `you may take ${shifts(mine)}`}
+            </MessageBarTitle>
+            {mine === 0
+              ? 'Each shift shows why: a shortfall left on a published roster usually breaks someone’s rule, which is why it was left.'
+              : 'The shifts you may take are listed first.'}
+          </MessageBarBody>
+        </MessageBar>
+      )}
       {open.isPending ? (
         <TableSkeleton />
       ) : open.data?.items.length ? (
         <>
-          <OpenShiftList openShifts={open.data.items} canClaim={canClaim} />
+          <OpenShiftList openShifts={open.data.items} canClaim={canClaim} canNotify={canNotify} />
           <Pagination
             label="Open shifts"
             page={page}
@@ -47,7 +72,9 @@ export function OpenShiftsPage() {
           onPageChange={setPage}
         />
       ) : (
-        <EmptyState title="No open shifts">Every published shift you could take is covered.</EmptyState>
+        <EmptyState title="No open shifts">
+          Every shift on your units’ published rosters is covered.
+        </EmptyState>
       )}
     </>
   );

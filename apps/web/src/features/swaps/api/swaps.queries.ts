@@ -2,6 +2,8 @@ import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import {
   type ClaimOpenShiftDto,
   MAX_PAGE_SIZE,
+  type NotifyOpenShiftDto,
+  type NotifyOpenShiftResultDto,
   type OpenShiftDto,
   type Page,
   PLANNING_ROUTES,
@@ -79,14 +81,25 @@ export const swapOptionsQuery = (periodId: string) =>
 /** Open shifts on this many to a page (the server allows 1 to MAX_PAGE_SIZE). */
 export const OPEN_SHIFTS_PAGE_SIZE = 20;
 
-/** One page of the open shifts the caller sees, by date. */
-export const openShiftsQuery = (page = 1) =>
+/**
+ * One page of the open shifts the caller sees, by date. Staff with `withBlocked` get every open shift,
+ * those they may take first, the others with the reasons they may not.
+ */
+export const openShiftsQuery = (page = 1, withBlocked = false, pageSize = OPEN_SHIFTS_PAGE_SIZE) =>
   queryOptions({
-    queryKey: [...swapKeys.openShifts(), page] as const,
+    queryKey: [...swapKeys.openShifts(), page, withBlocked, pageSize] as const,
     queryFn: ({ signal }) =>
-      api.get<Page<OpenShiftDto>>(SWAP_ROUTES.openShifts, { page, pageSize: OPEN_SHIFTS_PAGE_SIZE }, signal),
+      api.get<Page<OpenShiftDto>>(
+        SWAP_ROUTES.openShifts,
+        { page, pageSize, withBlocked: withBlocked ? 'true' : undefined },
+        signal,
+      ),
     placeholderData: keepPreviousData,
   });
+
+/** E-mails the staff who may take one open shift; answers how many. */
+export const notifyOpenShift = (body: NotifyOpenShiftDto) =>
+  api.post<NotifyOpenShiftResultDto>(SWAP_ROUTES.openShiftsNotify, body);
 
 /** What an e-mailed link decides (no sign-in; reading it changes nothing). */
 export const swapLinkQuery = (token: string) =>

@@ -1,20 +1,34 @@
-import { Button, TableCell, TableRow } from '@fluentui/react-components';
+import { Badge, Button, makeStyles, TableCell, TableRow, tokens } from '@fluentui/react-components';
 import type { OpenShiftDto } from '@rotaplex/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { DataTable } from '@/ui/DataTable';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
-import { claimOpenShift, swapKeys } from '../api/swaps.queries';
+import { claimOpenShift, notifyOpenShift, swapKeys } from '../api/swaps.queries';
 import { dayLabel } from '../utils/swapText';
+
+const useStyles = makeStyles({
+  reasons: { margin: 0, paddingLeft: tokens.spacingHorizontalL, color: tokens.colorNeutralForeground2 },
+  need: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, alignItems: 'center' },
+});
 
 export interface OpenShiftListProps {
   openShifts: readonly OpenShiftDto[];
   /** Staff can claim; managers only see. */
   canClaim: boolean;
+  /** Managers who plan can e-mail the staff who may take a shift. */
+  canNotify?: boolean;
 }
 
-/** Cover still short on published rosters, with a Claim button for staff. */
-export function OpenShiftList({ openShifts, canClaim }: OpenShiftListProps) {
+const key = (o: OpenShiftDto) => `${o.rosterPeriodId}|${o.date}|${o.shiftTypeId}|${o.skillId ?? ''}`;
+
+/**
+ * Cover still short on published rosters. Staff get a Claim button on what they may take and, on the
+ * rest, the reasons they may not; managers see which are below the minimum and can e-mail the staff
+ * who may take one.
+ */
+export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenShiftListProps) {
+  const styles = useStyles();
   const queryClient = useQueryClient();
   const notify = useNotify();
   const claim = useMutation({
@@ -28,32 +42,73 @@ export function OpenShiftList({ openShifts, canClaim }: OpenShiftListProps) {
     onSuccess: () => notify('Claim sent: a manager will approve or decline it', 'success'),
     onSettled: () => queryClient.invalidateQueries({ queryKey: swapKeys.all }),
   });
+  const mail = useMutation({
+    mutationFn: (o: OpenShiftDto) =>
+      notifyOpenShift({
+        rosterPeriodId: o.rosterPeriodId,
+        date: o.date,
+        shiftTypeId: o.shiftTypeId,
+        skillId: o.skillId,
+      }),
+    onSuccess: (r) =>
+      notify(
+        r.notified === 0
+          ? 'Nobody on the roster may take this shift: offer it to bank or agency staff, as local policy says'
+          : `E-mailed ${r.notified} ${r.notified === 1 ? 'person' : 'people'} who may take it`,
+        r.notified === 0 ? 'warning' : 'success',
+      ),
+  });
+  const action = canClaim ? ['Can you take it?'] : canNotify ? ['Action'] : [];
   return (
     <>
       {claim.error ? <ErrorBanner error={claim.error} title="The shift was not claimed" /> : null}
+      {mail.error ? <ErrorBanner error={mail.error} title="No e-mail was sent" /> : null}
       <DataTable
         label="Open shifts"
-        columns={['Day', 'Shift', 'Skill', 'Still wanted', 'Claims waiting', ...(canClaim ? ['Action'] : [])]}
+        columns={['Day', 'Shift', 'Skill', 'Still wanted', 'Claims waiting', ...action]}
         size="small"
       >
         {openShifts.map((o) => (
-          <TableRow key={`${o.rosterPeriodId}|${o.date}|${o.shiftTypeId}|${o.skillId ?? ''}`}>
+          <TableRow key={key(o)}>
             <TableCell>{dayLabel(o.date)}</TableCell>
             <TableCell>
               {o.shiftName} ({o.shiftCode}) {o.start}–{o.end}
             </TableCell>
             <TableCell>{o.skillCode ?? 'Any'}</TableCell>
-            <TableCell>{o.short}</TableCell>
+            <TableCell>
+              <span className={styles.need}>
+                {o.short}
+                {o.belowMinimum > 0 && (
+                  <Badge appearance="filled" color="danger">
+                    {o.belowMinimum} below minimum
+                  </Badge>
+                )}
+              </span>
+            </TableCell>
             <TableCell>{o.pendingClaims}</TableCell>
             {canClaim ? (
               <TableCell>
-                <Button
-                  size="small"
-                  appearance="primary"
-                  disabled={claim.isPending}
-                  onClick={() => claim.mutate(o)}
-                >
-                  Claim
+                {o.mayTake === false ? (
+                  <ul className={styles.reasons} aria-label="Why you may not take it">
+                    {(o.whyNot ?? []).map((r) => (
+                      <li key={r}>{r}</li>
+                    ))}
+                  </ul>
+                ) : (
+                  <Button
+                    size="small"
+                    appearance="primary"
+                    disabled={claim.isPending}
+                    onClick={() => claim.mutate(o)}
+                  >
+                    Claim
+                  </Button>
+                )}
+              </TableCell>
+            ) : canNotify ? (
+              <TableCell>
+                <Button size="small" disabled={mail.isPending} onClick={() => mail.mutate(o)}>
+                  E-mail who may take it
                 </Button>
               </TableCell>
             ) : null}
