@@ -1,6 +1,7 @@
 /**
  * The covering model against textbook staffing examples with known optima, solved on HiGHS.
  */
+import { SolverPool } from '../pool/solver-pool';
 import { coverShifts, shiftIntervals, solveCovering } from './covering';
 
 describe('Post Office days-off problem as a covering problem (Winston, OR: Applications and Algorithms)', () => {
@@ -131,5 +132,35 @@ describe('shift intervals and the cap on people', () => {
     expect(r.short.every((s) => s === 0)).toBe(true);
     // three 8-hour shifts tile the day: 2 of each, 48 paid hours (common practice, no source)
     expect(r.cost).toBe(48);
+  });
+});
+
+describe('the covering model in a worker thread of the solver pool', () => {
+  it('gives the Union Airways optimum too (Hillier & Lieberman, as above)', async () => {
+    const pool = new SolverPool({ size: 1 });
+    try {
+      const requirement = new Array<number>(24).fill(0);
+      // the source's ten periods: 00-06 15, 06-08 48, 08-10 79, 10-12 65, 12-14 87, 14-16 64,
+      // 16-18 73, 18-20 82, 20-22 43, 22-24 52
+      const periods = [
+        15, 15, 15, 15, 15, 15, 48, 48, 79, 79, 65, 65, 87, 87, 64, 64, 73, 73, 82, 82, 43, 43, 52, 52,
+      ];
+      periods.forEach((r, h) => (requirement[h] = r));
+      const r = await coverShifts({
+        days: 1,
+        intervalMinutes: 60,
+        requirement,
+        shifts: [6, 8, 12, 16, 22].map((h, k) => ({
+          id: String(k + 1),
+          startMinute: h * 60,
+          lengthMinutes: 480,
+          cost: [170, 160, 175, 180, 195][k],
+        })),
+        solver: (data, options) => pool.solveMip(data, options),
+      });
+      expect(r.cost).toBe(30610);
+    } finally {
+      await pool.close();
+    }
   });
 });

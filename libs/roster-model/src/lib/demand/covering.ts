@@ -16,7 +16,18 @@
  * for a week pattern repeated.
  */
 import type { ModelData } from 'highs';
-import { solveMip } from '../solve/run-mip';
+import { type MipRunResult, solveMip } from '../solve/run-mip';
+
+/**
+ * Solves one covering model: by default on this thread's HiGHS session (`solveMip`); a server
+ * passes its worker pool's `solveMip` so the request thread stays free.
+ */
+export type CoveringSolver = (
+  data: ModelData,
+  options: { timeLimitSeconds: number },
+) => Promise<MipRunResult>;
+
+const onThisThread: CoveringSolver = (data, options) => solveMip(data, options);
 
 export interface CoverCandidate {
   /** Interval indices this candidate puts one person on. */
@@ -35,6 +46,7 @@ export interface CoveringProblem {
   /** Cost of one person short in one interval. Default 1000 x the dearest candidate. */
   shortCost?: number;
   timeLimitSeconds?: number;
+  solver?: CoveringSolver;
 }
 
 export interface CoveringResult {
@@ -148,7 +160,8 @@ export async function solveCovering(problem: CoveringProblem): Promise<CoveringR
     matrix: { format: 'csr', numRows, numCols, starts, indices, values },
     integrality,
   } as unknown as ModelData;
-  const run = await solveMip(data, { timeLimitSeconds: problem.timeLimitSeconds ?? 30, clockStart: started });
+  const solve = problem.solver ?? onThisThread;
+  const run = await solve(data, { timeLimitSeconds: problem.timeLimitSeconds ?? 30 });
   if (!run.values) throw new Error(`The covering model has no solution (${run.modelStatusText})`);
   const x = run.values;
   let cost = 0;
@@ -195,6 +208,7 @@ export interface ShiftCoverProblem {
   wrap?: boolean;
   shortCost?: number;
   timeLimitSeconds?: number;
+  solver?: CoveringSolver;
 }
 
 export interface ShiftCoverResult extends CoveringResult {
@@ -249,6 +263,7 @@ export async function coverShifts(problem: ShiftCoverProblem): Promise<ShiftCove
     groupCaps: cap === null ? undefined : new Array<number>(days).fill(cap),
     shortCost: problem.shortCost,
     timeLimitSeconds: problem.timeLimitSeconds,
+    solver: problem.solver,
   });
   const people = Array.from({ length: days }, (_, d) =>
     shifts.map((_, k) => result.counts[d * shifts.length + k]),

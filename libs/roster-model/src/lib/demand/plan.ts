@@ -14,7 +14,7 @@ import {
   type WardShiftRequirementDto,
 } from '@rotaplex/contracts';
 import { agentsForTarget, serviceLevel, trafficErlangs, withShrinkage } from './erlang';
-import { coverShifts, shiftIntervals } from './covering';
+import { type CoveringSolver, coverShifts, shiftIntervals } from './covering';
 import { wardRequirement } from './ward';
 
 /** A shift type as the plan needs it. */
@@ -103,7 +103,13 @@ export async function planContactCover(
   dates: readonly string[],
   intervalMinutes: number,
   shiftTypes: readonly PlanShiftType[],
-  options: { maxPeoplePerDay?: number | null; wrap?: boolean; timeLimitSeconds?: number } = {},
+  options: {
+    maxPeoplePerDay?: number | null;
+    wrap?: boolean;
+    timeLimitSeconds?: number;
+    /** Where the covering MIPs run (default: this thread's HiGHS session). */
+    solver?: CoveringSolver;
+  } = {},
 ): Promise<ContactCoverPlan> {
   if (!shiftTypes.length) throw new RangeError('the plan needs at least one shift type');
   const shifts = shiftTypes.map(coverShiftOf);
@@ -114,6 +120,7 @@ export async function planContactCover(
     maxPeoplePerDay: options.maxPeoplePerDay ?? null,
     wrap: options.wrap ?? true,
     timeLimitSeconds: options.timeLimitSeconds ?? 20,
+    solver: options.solver,
   };
   const target = await coverShifts({ ...base, requirement: requirement.map((r) => r.scheduled) });
   const needsMinimum = requirement.some((r) => r.agents !== r.scheduled);
