@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable, type OnModuleDestroy } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   type AcceptDemandPlanResultDto,
@@ -25,6 +25,7 @@ import {
   planContactCover,
   rosteredCover,
   rosteredServiceLevel,
+  SolverPool,
   wardPlan,
 } from '@rotaplex/roster-model';
 import { DataSource, Repository } from 'typeorm';
@@ -145,7 +146,10 @@ function wardErrors(w: WardDemandDto, shiftIds: Set<string>, skillIds: Set<strin
 }
 
 @Injectable()
-export class DemandService {
+export class DemandService implements OnModuleDestroy {
+  /** One worker thread for the covering solves, so a plan never blocks the request thread. */
+  private pool: SolverPool | null = null;
+
   constructor(
     @InjectRepository(UnitDemandEntity) private readonly demands: Repository<UnitDemandEntity>,
     @InjectRepository(DemandAcceptanceEntity)
@@ -155,6 +159,16 @@ export class DemandService {
     private readonly coverNeeds: CoverNeedsService,
     private readonly dataSource: DataSource,
   ) {}
+
+  async onModuleDestroy(): Promise<void> {
+    await this.pool?.close();
+    this.pool = null;
+  }
+
+  private solverPool(): SolverPool {
+    if (!this.pool) this.pool = new SolverPool({ size: 1 });
+    return this.pool;
+  }
 
   async get(user: AuthUser, unitId: string): Promise<UnitDemandDto> {
     await this.units.get(user, unitId);
@@ -319,6 +333,7 @@ export class DemandService {
       const plan = await planContactCover(requirement, dates, contact.intervalMinutes, plans, {
         maxPeoplePerDay: contact.maxPeoplePerDay,
         timeLimitSeconds: COVER_TIME_LIMIT_SECONDS,
+        solver: (data, options) => this.solverPool().solveMip(data, options),
       });
       const assignments = await this.rosteredAssignments(periodId, contact.skillId);
       const rostered = rosteredCover(dates, contact.intervalMinutes, assignments, plans);
