@@ -3,6 +3,7 @@
  *   npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]
  *                    [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]
  *                    [--cores 1|2] [--beside-textbook]
+ *                    [--line-share X]
  * Instances are numbers 1-24 (InstanceN.txt in $ROTAPLEX_BENCHMARKS_DIR, default
  * ../shared/benchmarks/curtois-qu beside the repository), ranges such as 1-12, or paths to files
  * in the same format. Each instance is solved in turn by the product's solve path; a table is
@@ -34,6 +35,7 @@ interface CliOptions {
   cores: number;
   /** Solve the plain model beside the product and add its column (one core each). */
   besideTextbook?: boolean;
+  lineShare?: number;
 }
 
 const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
@@ -41,7 +43,7 @@ const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
 const USAGE =
   'Usage: npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]\n' +
   '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise] [--cores 1|2]\n' +
-  '       [--beside-textbook]\n' +
+  '       [--beside-textbook] [--line-share X (share of the search for best-line moves, 0 off)]\n' +
   '  instances: numbers 1-24, ranges like 1-12, or paths to instance files';
 
 export function parseArgs(argv: string[]): CliOptions {
@@ -71,6 +73,7 @@ export function parseArgs(argv: string[]): CliOptions {
     else if (arg === '--seed') options.randomSeed = Number(value(i++, arg));
     else if (arg === '--no-warm-start') options.warmStart = false;
     else if (arg === '--beside-textbook') options.besideTextbook = true;
+    else if (arg === '--line-share') options.lineShare = Math.min(1, Math.max(0, Number(value(i++, arg))));
     else if (arg === '--cores') {
       const v = value(i++, arg);
       if (v !== '1' && v !== '2') throw new Error(`--cores is 1 or 2, got "${v}".`);
@@ -133,6 +136,7 @@ export async function main(argv: string[]): Promise<number> {
         strategy: options.strategy,
         cores: options.cores,
         besideTextbook: options.besideTextbook,
+        lineShare: options.lineShare,
         onProgress: progressPrinter(ref),
       });
     } catch (err) {

@@ -42,6 +42,8 @@ export interface BenchRunOptions {
    * other every better roster).
    */
   cores?: number;
+  /** Share of the local search for best-line moves (SolveRosterOptions.lineShare; 0 off). */
+  lineShare?: number;
 }
 
 interface SolvedRoster {
@@ -103,6 +105,7 @@ async function solveProduct(loaded: LoadedInstance, options: BenchRunOptions): P
     onProgress: options.onProgress,
     explain: false,
     strategy: options.strategy,
+    lineShare: options.lineShare,
   };
   const cores = Math.max(1, Math.floor(options.cores ?? 1));
   const result =

@@ -24,45 +24,46 @@ export interface LineScore {
 
 const NONE = -1;
 
+/** Fields are read by line-dp.ts, which builds best lines under the same rules. */
 export class LineCost {
   readonly P: number;
   readonly D: number;
   readonly S: number;
-  private readonly paid: Float64Array;
-  private readonly night: Uint8Array;
+  readonly paid: Float64Array;
+  readonly night: Uint8Array;
   /** forbidden[s * S + t] = 1 when t may not follow s on the next day. */
-  private readonly forbidden: Uint8Array;
+  readonly forbidden: Uint8Array;
   /** weekendOf[d] = index of the weekend holding day d, or -1. */
-  private readonly weekendOf: Int32Array;
+  readonly weekendOf: Int32Array;
   private readonly weekendCount: number;
   /** Contract limits per person (NaN: no such rule). */
-  private readonly minPaid: Float64Array;
-  private readonly maxPaid: Float64Array;
-  private readonly targetPaid: Float64Array;
-  private readonly maxCons: Int32Array;
-  private readonly minCons: Int32Array;
-  private readonly minOff: Int32Array;
-  private readonly maxWeekends: Int32Array;
-  private readonly maxNights: Int32Array;
+  readonly minPaid: Float64Array;
+  readonly maxPaid: Float64Array;
+  readonly targetPaid: Float64Array;
+  readonly maxCons: Int32Array;
+  readonly minCons: Int32Array;
+  readonly minOff: Int32Array;
+  readonly maxWeekends: Int32Array;
+  readonly maxNights: Int32Array;
   /** maxShifts[p * S + s] (Infinity when unlimited). */
-  private readonly maxShifts: Float64Array;
+  readonly maxShifts: Float64Array;
   /** Rest conflicts per person's limit: restTable[p] indexes restLists. */
-  private readonly restTable: Int32Array;
+  readonly restTable: Int32Array;
   /** restStart[k][d * S + s] … restStart[k][d * S + s + 1]: conflicts (d2, t) in restPairs[k]. */
-  private readonly restStart: Int32Array[] = [];
-  private readonly restPairs: Int32Array[] = [];
+  readonly restStart: Int32Array[] = [];
+  readonly restPairs: Int32Array[] = [];
   /** Requests of each person: reqStart[p] … reqStart[p + 1] into reqDay/reqKind/reqShift/reqWeight. */
-  private readonly reqStart: Int32Array;
-  private readonly reqDay: Int32Array;
+  readonly reqStart: Int32Array;
+  readonly reqDay: Int32Array;
   /** 0 dayOff, 1 shiftOn, 2 shiftOff. */
-  private readonly reqKind: Uint8Array;
-  private readonly reqShift: Int32Array;
-  private readonly reqWeight: Float64Array;
+  readonly reqKind: Uint8Array;
+  readonly reqShift: Int32Array;
+  readonly reqWeight: Float64Array;
   /** published[p * D + d]: published value, -1 off, -3 not compared. */
-  private readonly published: Int32Array | null;
-  private readonly changeWeight: number;
-  private readonly labour: Float64Array;
-  private readonly hoursWeight: number;
+  readonly published: Int32Array | null;
+  readonly changeWeight: number;
+  readonly labour: Float64Array;
+  readonly hoursWeight: number;
   /** absent[(p * D + d) * S + s] (pins may force such a cell; the search never does). */
   private readonly absent: Uint8Array;
   /** pin[p * D + d]: NO_PIN (-2), -1 (off) or a shift. */

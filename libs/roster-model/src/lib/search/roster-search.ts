@@ -92,6 +92,14 @@ export interface RosterSearchOptions {
   onBest?: (objective: number, roster: () => Grid) => void;
   /** Asked at each restart: a roster from elsewhere to continue from when it is better, or null. */
   incoming?: () => Grid | null;
+  /**
+   * The best line of person p with `extra[d * S + s]` added for working shift s on day d, every
+   * other line fixed (line-dp.ts), or null. With it the search repairs the lines that break rules
+   * at the start and at each restart, and spends `lineShare` of its time on such lines as moves.
+   */
+  lineSolver?: (p: number, extra: Float64Array) => Int16Array | null;
+  /** Share of the time for line moves (default LINE_SHARE). */
+  lineShare?: number;
 }
 
 export interface RosterSearchResult {
@@ -109,6 +117,9 @@ const MOVE_CHANGE = 0;
 const MOVE_SWAP = 1;
 const MOVE_BLOCK = 2;
 const MOVE_WITHIN = 3;
+const MOVE_LINE = 4;
+/** Share of the search's time spent on best-line moves (one costs as much as 1,000-100,000 moves). */
+const LINE_SHARE = 0.2;
 /**
  * Strategic oscillation of the hard-rule weight, looked at every 4,096 moves: dearer (×1.2) when more
  * than RAISE_ABOVE of them were spent on rosters that break a rule, cheaper (÷1.1) below LOWER_BELOW.
@@ -403,10 +414,18 @@ export class RosterSearch {
     for (let p = 0; p < P; p++) for (let d = 0; d < D; d++) if (this.optCount[p * D + d] > 1) movable.push(p);
     if (movable.length === 0 || D === 0) return this.result(0, 0);
 
+    const lineSolver = options.lineSolver;
+    const lineShare = options.lineShare ?? LINE_SHARE;
+    let lineMs = 0;
+    let lineDue = false;
+    if (lineSolver && this.hard > 0) this.repairLines(lineSolver);
     let best = this.hard === 0 ? this.soft : Infinity;
     let bestHard = this.hard;
     let bestGrid = this.grid.slice();
     let bestAt = 0;
+    // Cooling rounds finished, and the round in which the best roster was found.
+    let rounds = 0;
+    let bestRound = 0;
     let saved = true;
     let moves = 0;
     // A round cools from t0 to tEnd; each new round (reheat) starts from the best roster.
@@ -426,22 +445,26 @@ export class RosterSearch {
         if (best === Infinity && options.giveUpMs !== undefined && now - started >= options.giveUpMs) break;
         if (stallMs !== undefined && best < Infinity) {
           const quiet = now - started - bestAt;
-          if (quiet >= stallMs && quiet >= 0.5 * (now - started)) break;
+          if (quiet >= stallMs && quiet >= 0.5 * (now - started) && rounds - bestRound >= 2) break;
         }
         if ((moves & 65535) === 0 && options.shouldStop?.()) break;
+        lineDue = lineSolver !== undefined && lineMs < lineShare * (now - started);
       }
       if (roundMoves >= roundLength) {
         // Reheat from the best roster (or from one handed in that is better).
         const incoming = options.incoming?.() ?? null;
         if (!(incoming && this.adoptIfBetter(incoming, best)) && saved && best < Infinity)
           this.load(bestGrid);
+        if (lineSolver && this.hard > 0) this.repairLines(lineSolver);
         if (this.hard === 0 && this.soft < best - 1e-9) {
           best = this.soft;
           bestGrid = this.grid.slice();
           bestAt = performance.now() - started;
+          bestRound = rounds;
           options.onBest?.(best, () => this.toGrid());
         }
         roundMoves = 0;
+        rounds++;
         roundLength = Math.min(roundLength * 2, 2_000_000);
         cooling = Math.pow(tEnd / t0, 1 / roundLength);
         temperature = t0;
@@ -463,11 +486,12 @@ export class RosterSearch {
       this.dHard = 0;
       this.dSoft = 0;
       let dCover = 0;
-      const p1 = movable[Math.floor(random() * movable.length)];
+      let p1 = movable[Math.floor(random() * movable.length)];
       let p2 = -1;
       const kindDraw = random();
-      const kind =
-        kindDraw < mix[0]
+      const kind = lineDue
+        ? MOVE_LINE
+        : kindDraw < mix[0]
           ? MOVE_CHANGE
           : kindDraw < mix[1] && people2
             ? MOVE_SWAP
@@ -508,6 +532,16 @@ export class RosterSearch {
           dCover += this.change(p1, d, b);
           dCover += this.change(p2, d, a);
         }
+      } else if (kind === MOVE_LINE) {
+        // One person's best line with the others fixed; while rules are broken, a line that breaks one.
+        lineDue = false;
+        const q = this.hard > 0 ? this.brokenLine(Math.floor(random() * P)) : p1;
+        const lineStart = performance.now();
+        const dLine = q < 0 ? NaN : this.applyLine(q, lineSolver!);
+        lineMs += performance.now() - lineStart;
+        if (Number.isNaN(dLine)) continue;
+        dCover += dLine;
+        p1 = q;
       } else if (kind === MOVE_WITHIN) {
         // Two days of one person's line trade places (hours stay the same).
         const d1 = Math.floor(random() * D);
@@ -563,6 +597,7 @@ export class RosterSearch {
             best = this.soft;
             bestHard = 0;
             bestAt = performance.now() - started;
+            bestRound = rounds;
             saved = false;
             options.onBest?.(best, () => this.toGrid());
             if (best <= target + 1e-9) break;
@@ -581,6 +616,71 @@ export class RosterSearch {
     // Unsaved means the current roster is the best.
     if (saved) this.load(bestGrid);
     return this.result(moves, bestAt);
+  }
+
+  private extra: Float64Array | null = null;
+
+  /** What working each (day, shift) would add to the cover cost of everybody but p: extra[d * S + s]. */
+  private coverExtra(p: number): Float64Array {
+    const { P, D, S } = this;
+    const extra = this.extra ?? (this.extra = new Float64Array(D * S));
+    for (let d = 0; d < D; d++) {
+      const current = this.grid[p * D + d];
+      for (let s = 0; s < S; s++) {
+        let e = 0;
+        for (let j = this.needStart[d * S + s]; j < this.needStart[d * S + s + 1]; j++) {
+          const i = this.needsAt[j];
+          if (this.counts[i * P + p] === 0) continue;
+          const c = this.count[i] - (current === s ? 1 : 0);
+          e += this.needCost(i, c + 1) - this.needCost(i, c);
+        }
+        extra[d * S + s] = e;
+      }
+    }
+    return extra;
+  }
+
+  /** The first person from `from` on (cyclically) whose line breaks a rule, or −1. */
+  private brokenLine(from: number): number {
+    for (let k = 0; k < this.P; k++) {
+      const p = (from + k) % this.P;
+      if (this.lineHard[p] > 0) return p;
+    }
+    return -1;
+  }
+
+  /**
+   * Sets person p's line to the line solver's answer through `change` (so the move can be undone) and
+   * returns the change in cover cost; NaN (nothing changed) when the solver has none, it equals the
+   * current line, or it would move a cell the search may not hold.
+   */
+  private applyLine(p: number, solver: NonNullable<RosterSearchOptions['lineSolver']>): number {
+    const line = solver(p, this.coverExtra(p));
+    if (!line) return NaN;
+    const { D } = this;
+    let differs = false;
+    for (let d = 0; d < D; d++) {
+      const v = line[d];
+      if (v === this.grid[p * D + d]) continue;
+      if (!this.mayHold(p, d, v)) return NaN;
+      differs = true;
+    }
+    if (!differs) return NaN;
+    let dCover = 0;
+    for (let d = 0; d < D; d++) {
+      if (line[d] !== this.grid[p * D + d]) dCover += this.change(p, d, line[d]);
+    }
+    return dCover;
+  }
+
+  /** Every line that breaks a rule is replaced by its best rule-keeping line (where there is one). */
+  private repairLines(solver: NonNullable<RosterSearchOptions['lineSolver']>): void {
+    for (let p = 0; p < this.P; p++) {
+      if (this.lineHard[p] <= 0) continue;
+      this.undoLength = 0;
+      this.applyLine(p, solver);
+    }
+    this.recount();
   }
 
   /** Reverts the cells of the move being tried and rescores its people (keeping them for redoMove when asked). */

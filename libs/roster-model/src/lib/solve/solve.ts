@@ -25,6 +25,7 @@ import { buildModel, type BuiltModel } from '../model/build-model';
 import { searchRoster } from '../search/roster-search';
 import { staffingSafety, staffingShortfall, staffingStatement } from '../safety/staffing';
 import { type HighsSession, isWasmFailure } from './highs-session';
+import { LineDp } from '../search/line-dp';
 import { isCancelled, relativeGap, runMip, solverArrays, threadSession, type MipRunResult } from './run-mip';
 
 export interface SolveRosterOptions {
@@ -86,6 +87,11 @@ export interface SolveRosterOptions {
    * 0: none). Only with the heuristic warm start.
    */
   searchShare?: number;
+  /**
+   * Share of the local search's time spent re-optimising one person's whole line exactly
+   * (search/line-dp.ts; default the search's LINE_SHARE; 0: never, and no line repair either).
+   */
+  lineShare?: number;
   /**
    * Every better roster that meets every hard rule, as it is found (the MIP's incumbents and
    * fix-and-optimise's improvements), so a solve on another core can continue from it.
@@ -244,8 +250,11 @@ function warmStartRoster(
       options.onProgress?.({ elapsedSeconds: elapsed(), objective, bound: null, gap: null });
       options.onRoster?.(built.index.fromGrid(grid()), objective);
     };
+    const lineDp = options.lineShare === 0 ? null : new LineDp(built.index);
     const found = searchRoster(built.index, roster, {
       timeLimitMs: searchMs,
+      lineSolver: lineDp ? (p, extra) => lineDp.solve(p, extra) : undefined,
+      lineShare: options.lineShare,
       stallMs: SEARCH_STALL_MS,
       giveUpMs: searchMs * SEARCH_GIVE_UP_SHARE,
       seed: (options.randomSeed ?? 0) + 1,
