@@ -35,6 +35,8 @@ export interface CoverCandidate {
   cost: number;
   /** Index into `groupCaps` (e.g. the day it starts), or undefined for no group. */
   group?: number;
+  /** At most this many people start it (default no limit). */
+  upper?: number;
 }
 
 export interface CoveringProblem {
@@ -103,7 +105,7 @@ export async function solveCovering(problem: CoveringProblem): Promise<CoveringR
   candidates.forEach((c, j) => {
     colCost.push(c.cost);
     colLower.push(0);
-    colUpper.push(Infinity);
+    colUpper.push(c.upper ?? Infinity);
     integrality.push(1);
     dearest = Math.max(dearest, Math.abs(c.cost));
     for (const t of c.intervals) {
@@ -204,6 +206,8 @@ export interface ShiftCoverProblem {
   shifts: readonly CoverShift[];
   /** Most people starting a shift on any one day; null = no cap. */
   maxPeoplePerDay?: number | null;
+  /** upperBounds[day][shift]: at most this many people start that shift that day (default none). */
+  upperBounds?: readonly (readonly number[])[];
   /** The horizon is a cycle (the last night covers the first morning). Default true. */
   wrap?: boolean;
   shortCost?: number;
@@ -248,11 +252,12 @@ export async function coverShifts(problem: ShiftCoverProblem): Promise<ShiftCove
   const wrap = problem.wrap ?? true;
   const candidates: CoverCandidate[] = [];
   for (let d = 0; d < days; d++) {
-    for (const s of shifts) {
+    for (const [k, s] of shifts.entries()) {
       candidates.push({
         intervals: shiftIntervals(d, s, intervalMinutes, days, wrap),
         cost: s.cost,
         group: d,
+        upper: problem.upperBounds?.[d]?.[k],
       });
     }
   }

@@ -121,3 +121,46 @@ describe('ward plan', () => {
     expect(rows[3]).toMatchObject({ shiftTypeId: 'N', byRatio: 0, floor: 2, required: 2 });
   });
 });
+
+describe('minimum and target under a cap', () => {
+  it('the target keeps at least the minimum on every shift and never breaks the cap', async () => {
+    // two peaks a day apart in shape: the minimum and the target plans would pick different
+    // shifts if solved apart; with the minimum as a floor the target stays consistent
+    const d: ContactCentreDemandDto = {
+      intervalMinutes: 60,
+      skillId: null,
+      service: { targetPercent: 80, targetSeconds: 20, maxOccupancyPercent: 85, shrinkagePercent: 35 },
+      pattern: [
+        {
+          weekday: 1,
+          intervals: [
+            { start: '09:00', contacts: 120, ahtSeconds: 240 },
+            { start: '13:00', contacts: 60, ahtSeconds: 240 },
+            { start: '18:00', contacts: 90, ahtSeconds: 240 },
+          ],
+        },
+      ],
+      dates: [],
+      shiftTypeIds: [],
+      maxPeoplePerDay: null,
+    };
+    const dates = ['2027-01-04'];
+    const shifts = [
+      { id: 'A', start: '08:00', end: '16:00', paidMinutes: 450 },
+      { id: 'B', start: '12:00', end: '20:00', paidMinutes: 450 },
+      { id: 'C', start: '09:00', end: '13:00', paidMinutes: 240 },
+      { id: 'D', start: '17:00', end: '21:00', paidMinutes: 240 },
+    ];
+    const req = contactRequirement(d, dates);
+    for (const cap of [null, 12, 8]) {
+      const plan = await planContactCover(req, dates, 60, shifts, { maxPeoplePerDay: cap });
+      for (const s of plan.starts) expect(s.people).toBeGreaterThanOrEqual(s.minimum);
+      if (cap !== null) {
+        expect(plan.starts.reduce((n, s) => n + s.people, 0)).toBeLessThanOrEqual(cap);
+        expect(plan.starts.reduce((n, s) => n + s.minimum, 0)).toBeLessThanOrEqual(cap);
+      } else {
+        expect(plan.underCoverPersonIntervals).toBe(0);
+      }
+    }
+  });
+});

@@ -95,8 +95,8 @@ function coverShiftOf(s: PlanShiftType) {
 }
 
 /**
- * The covering plan: `people` covers `scheduled` (after shrinkage), `minimum` covers `agents`
- * (before shrinkage); people is raised to the minimum where the two plans differ in shape.
+ * The covering plan: `people` covers `scheduled` (after shrinkage) at least cost; `minimum` covers
+ * `agents` (before shrinkage) at least cost within those shifts (never more than `people`).
  */
 export async function planContactCover(
   requirement: readonly IntervalRequirementDto[],
@@ -122,13 +122,20 @@ export async function planContactCover(
     timeLimitSeconds: options.timeLimitSeconds ?? 20,
     solver: options.solver,
   };
+  // The target first (after shrinkage, the plan to roster); then the minimum, the cheapest plan for
+  // the agents alone inside the target's shifts, so minimum <= target and the caps hold for both.
   const target = await coverShifts({ ...base, requirement: requirement.map((r) => r.scheduled) });
   const needsMinimum = requirement.some((r) => r.agents !== r.scheduled);
   const minimum = needsMinimum
-    ? await coverShifts({ ...base, requirement: requirement.map((r) => r.agents) })
-    : target;
+    ? await coverShifts({
+        ...base,
+        requirement: requirement.map((r) => r.agents),
+        upperBounds: target.people,
+      })
+    : null;
   const starts: ShiftStartDto[] = [];
-  const people = target.people.map((row, d) => row.map((n, k) => Math.max(n, minimum.people[d][k])));
+  const people = target.people;
+  const least = minimum?.people ?? target.people;
   const planned = new Array<number>(requirement.length).fill(0);
   let paidHours = 0;
   dates.forEach((date, d) => {
@@ -139,7 +146,7 @@ export async function planContactCover(
         for (const t of shiftIntervals(d, shifts[k], intervalMinutes, dates.length, base.wrap))
           planned[t] += n;
       }
-      starts.push({ date, shiftTypeId: s.id, people: n, minimum: minimum.people[d][k] });
+      starts.push({ date, shiftTypeId: s.id, people: n, minimum: least[d][k] });
     });
   });
   const short = requirement.map((r, t) => Math.max(0, r.scheduled - planned[t]));
@@ -149,7 +156,7 @@ export async function planContactCover(
     short,
     paidHours,
     underCoverPersonIntervals: short.reduce((a, b) => a + b, 0),
-    status: target.status,
+    status: minimum && minimum.status !== 'optimal' ? minimum.status : target.status,
   };
 }
 
