@@ -13,6 +13,7 @@ import {
   type RosterPeriodDto,
   type SkillDto,
   type UnitDemandDto,
+  UNDER_COVER_CAUTION,
   type UnitDto,
 } from '@rotaplex/contracts';
 import { UnitDemandEntity } from '../src/demand/demand.entities';
@@ -173,6 +174,44 @@ describe('demand: forecast, plan and accept', () => {
       expect(wp.cautions).toContain(RATIO_CAUTION);
       for (const r of wp.ward!.requirement) expect(r.required).toBeGreaterThanOrEqual(r.floor);
     });
+    it('a cap on people per day leaves intervals short, priced, with the under-cover caution', async () => {
+      const stored = await getDemand(centre.id, centreManager);
+      const capped = { contactCentre: { ...stored.contactCentre!, maxPeoplePerDay: 4 }, ward: null };
+      await t
+        .http()
+        .put(api(D.demand(centre.id)))
+        .set(bearer(centreManager))
+        .send(capped)
+        .expect(200);
+      try {
+        const p = (
+          await t
+            .http()
+            .get(api(D.plan(centrePeriod.id)))
+            .set(bearer(centreManager))
+            .expect(200)
+        ).body as DemandPlanDto;
+        const c = p.contactCentre!;
+        expect(c.underCoverPersonIntervals).toBeGreaterThan(0);
+        expect(p.cautions).toContain(UNDER_COVER_CAUTION);
+        for (const date of p.dates) {
+          const day = c.starts.filter((s) => s.date === date);
+          expect(day.reduce((n, s) => n + s.people, 0)).toBeLessThanOrEqual(4);
+        }
+        // short = scheduled - planned wherever the plan falls below the requirement
+        c.cover.forEach((iv, k) =>
+          expect(iv.short).toBe(Math.max(0, c.requirement[k].scheduled - iv.planned)),
+        );
+      } finally {
+        const restore = { contactCentre: stored.contactCentre, ward: null };
+        await t
+          .http()
+          .put(api(D.demand(centre.id)))
+          .set(bearer(centreManager))
+          .send(restore)
+          .expect(200);
+      }
+    });
   });
 
   describe('accept', () => {
@@ -220,6 +259,33 @@ describe('demand: forecast, plan and accept', () => {
       ).body as DemandAcceptanceDto[];
       expect(log[0]).toMatchObject({ id: result.acceptanceId, written: rows.length });
       expect(log[0].actorName).toBeTruthy();
+    });
+
+    it('accepting ward rows for a skill with a ratio carries the ratio caution', async () => {
+      const wp = (
+        await t
+          .http()
+          .get(api(D.plan(wardPeriod.id)))
+          .set(bearer(wardManager))
+          .expect(200)
+      ).body as DemandPlanDto;
+      const rows = wp
+        .ward!.requirement.filter((r) => r.date === wardPeriod.startDate)
+        .map((r) => ({
+          date: r.date,
+          shiftTypeId: r.shiftTypeId,
+          skillId: r.skillId,
+          min: r.required,
+          target: r.required,
+        }));
+      const res = await t
+        .http()
+        .post(api(D.accept(wardPeriod.id)))
+        .set(bearer(wardManager))
+        .send({ rows })
+        .expect(201);
+      expect((res.body as AcceptDemandPlanResultDto).cautions).toContain(RATIO_CAUTION);
+      expect((res.body as AcceptDemandPlanResultDto).written).toBe(rows.length);
     });
 
     it('refuses rows outside the period, a foreign shift type or target below min: 400, nothing written', async () => {
