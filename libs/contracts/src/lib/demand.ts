@@ -47,6 +47,10 @@ export const RATIO_CAUTION =
 export const ERLANG_CAUTION =
   'Erlang C assumes contacts arrive at random, callers wait without hanging up, and every agent handles any contact. Real service levels are usually somewhat better with abandonment and worse with peaks inside an interval; treat the requirement as an estimate.';
 
+/** Shown when contacts fall in intervals that no allowed shift type covers. */
+export const OUTSIDE_SHIFTS_CAUTION =
+  'Some contacts fall outside the hours of every shift type the plan may open, so no plan can answer them. Add or allow a shift type that covers those hours, or move the forecast.';
+
 /** Shown when the plan leaves intervals short (the available people cannot meet the requirement). */
 export const UNDER_COVER_CAUTION =
   'Some intervals stay below the requirement because not enough people are available. Short cover means longer waits for callers and more pressure on the people at work.';
@@ -233,6 +237,8 @@ export interface DemandPlanDto {
     paidHours: number;
     /** Sum over intervals of people short (0 without a cap on people per day). */
     underCoverPersonIntervals: number;
+    /** The part of it in intervals that no allowed shift covers (contacts outside every shift's hours). */
+    outsideShiftsPersonIntervals: number;
     /** Solver outcome of the covering MIP: 'optimal', or 'time-limit' with the best plan found. */
     solverStatus: string;
     /** Seconds for requirement + covering. */

@@ -164,3 +164,34 @@ describe('minimum and target under a cap', () => {
     }
   });
 });
+
+describe('contacts outside every shift', () => {
+  it('are counted apart from short cover that a cap causes', async () => {
+    // contacts at 07:00 while the only shift starts at 08:00: no plan can cover them
+    const d: ContactCentreDemandDto = {
+      intervalMinutes: 60,
+      skillId: null,
+      service: { targetPercent: 80, targetSeconds: 20, maxOccupancyPercent: 100, shrinkagePercent: 0 },
+      pattern: [
+        {
+          weekday: 1,
+          intervals: [
+            { start: '07:00', contacts: 10, ahtSeconds: 180 },
+            { start: '09:00', contacts: 10, ahtSeconds: 180 },
+          ],
+        },
+      ],
+      dates: [],
+      shiftTypeIds: [],
+      maxPeoplePerDay: null,
+    };
+    const dates = ['2027-01-04'];
+    const req = contactRequirement(d, dates);
+    const plan = await planContactCover(req, dates, 60, [
+      { id: 'D', start: '08:00', end: '16:00', paidMinutes: 450 },
+    ]);
+    expect(plan.outsideShiftsPersonIntervals).toBe(req[7].scheduled);
+    expect(plan.underCoverPersonIntervals).toBe(req[7].scheduled);
+    expect(plan.short[9]).toBe(0);
+  });
+});

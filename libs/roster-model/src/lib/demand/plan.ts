@@ -82,6 +82,8 @@ export interface ContactCoverPlan {
   short: number[];
   paidHours: number;
   underCoverPersonIntervals: number;
+  /** The part of it in intervals that no allowed shift covers at all (no plan can fill them). */
+  outsideShiftsPersonIntervals: number;
   status: string;
 }
 
@@ -150,12 +152,19 @@ export async function planContactCover(
     });
   });
   const short = requirement.map((r, t) => Math.max(0, r.scheduled - planned[t]));
+  const coverable = new Uint8Array(requirement.length);
+  dates.forEach((_, d) =>
+    shifts.forEach((s) => {
+      for (const t of shiftIntervals(d, s, intervalMinutes, dates.length, base.wrap)) coverable[t] = 1;
+    }),
+  );
   return {
     starts,
     planned,
     short,
     paidHours,
     underCoverPersonIntervals: short.reduce((a, b) => a + b, 0),
+    outsideShiftsPersonIntervals: short.reduce((a, n, t) => a + (coverable[t] ? 0 : n), 0),
     status: minimum && minimum.status !== 'optimal' ? minimum.status : target.status,
   };
 }
