@@ -12,6 +12,7 @@ import {
   type DemandPlanDto,
   ERLANG_CAUTION,
   minutesOfDay,
+  OUTSIDE_SHIFTS_CAUTION,
   RATIO_CAUTION,
   TIME_OF_DAY_PATTERN,
   UNDER_COVER_CAUTION,
@@ -357,11 +358,14 @@ export class DemandService implements OnModuleDestroy {
         starts: plan.starts,
         paidHours: plan.paidHours,
         underCoverPersonIntervals: plan.underCoverPersonIntervals,
+        outsideShiftsPersonIntervals: plan.outsideShiftsPersonIntervals,
         solverStatus: plan.status,
         seconds: (performance.now() - started) / 1000,
       };
       cautions.push(ERLANG_CAUTION);
-      if (plan.underCoverPersonIntervals > 0) cautions.push(UNDER_COVER_CAUTION);
+      if (plan.outsideShiftsPersonIntervals > 0) cautions.push(OUTSIDE_SHIFTS_CAUTION);
+      if (plan.underCoverPersonIntervals > plan.outsideShiftsPersonIntervals)
+        cautions.push(UNDER_COVER_CAUTION);
     }
     let ward: DemandPlanDto['ward'] = null;
     if (row?.ward) {
