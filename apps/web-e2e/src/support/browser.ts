@@ -61,7 +61,12 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByRole('textbox', { name: 'E-mail address', exact: true }).fill(email);
   await page.getByRole('textbox', { name: 'Password', exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('navigation', { name: 'Main' }).waitFor();
+  // The signed-in shell: the menu, or on a narrow window the button that opens it.
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .or(page.getByRole('button', { name: 'Menu', exact: true }))
+    .first()
+    .waitFor();
 }
 
 export async function signOut(page: Page): Promise<void> {

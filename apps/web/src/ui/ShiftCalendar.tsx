@@ -33,8 +33,8 @@ const useStyles = makeStyles({
     justifyContent: 'space-between',
     gap: tokens.spacingHorizontalM,
   },
-  nav: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
-  title: { minWidth: '14rem', textAlign: 'center' },
+  nav: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  title: { minWidth: '10rem', textAlign: 'center' },
   // FullCalendar 6 injects its own stylesheet and reads these custom properties: point them at the theme.
   calendar: {
     '--fc-border-color': tokens.colorNeutralStroke2,

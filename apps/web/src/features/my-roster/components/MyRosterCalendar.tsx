@@ -142,6 +142,7 @@ export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) 
         initialDate={initialDate ?? todayIn(timeZone)}
         eventDisplay="block"
         eventMaxStack={4}
+        eventOrder="order,start,-duration,title"
         events={events}
         eventContent={renderEvent}
         eventDidMount={handleEventMount}

@@ -18,6 +18,8 @@ export function todayIn(timeZone: string, now: Date = new Date()): string {
 
 export interface RosterEventProps {
   shift: MyRosterShiftDto;
+  /** 0 for my shifts, 1 for colleagues': the calendar's first sort key (`eventOrder`). */
+  order: number;
 }
 
 export interface RosterEvent extends ColouredEvent<RosterEventProps> {
@@ -49,7 +51,8 @@ export function rosterEvents(
         borderColor: c.border,
         textColor: c.foreground,
         classNames: [s.mine ? classes.mine : classes.other],
-        extendedProps: { shift: s },
+        // `order` puts my shifts first in a day, so "+N more" hides colleagues', never mine.
+        extendedProps: { shift: s, order: s.mine ? 0 : 1 },
       };
     })
     .sort((a, b) => Number(b.extendedProps.shift.mine) - Number(a.extendedProps.shift.mine));

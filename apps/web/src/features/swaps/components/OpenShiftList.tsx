@@ -1,6 +1,17 @@
-import { Badge, Button, makeStyles, TableCell, TableRow, tokens } from '@fluentui/react-components';
+import type { ReactNode } from 'react';
+import {
+  Badge,
+  Body1,
+  Button,
+  Caption1,
+  makeStyles,
+  TableCell,
+  TableRow,
+  tokens,
+} from '@fluentui/react-components';
 import type { OpenShiftDto } from '@rotaplex/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMediaQuery } from '@/hooks/useMediaQuery';
 import { DataTable } from '@/ui/DataTable';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { useNotify } from '@/ui/notify';
@@ -10,6 +21,18 @@ import { dayLabel } from '../utils/swapText';
 const useStyles = makeStyles({
   reasons: { margin: 0, paddingLeft: tokens.spacingHorizontalL, color: tokens.colorNeutralForeground2 },
   need: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, alignItems: 'center' },
+  cards: { listStyleType: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalS },
+  card: {
+    display: 'flex',
+    flexDirection: 'column',
+    alignItems: 'flex-start',
+    gap: tokens.spacingVerticalXS,
+    padding: tokens.spacingHorizontalM,
+    borderRadius: tokens.borderRadiusMedium,
+    border: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
+    backgroundColor: tokens.colorNeutralBackground1,
+  },
+  muted: { color: tokens.colorNeutralForeground3 },
 });
 
 export interface OpenShiftListProps {
@@ -59,10 +82,73 @@ export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenS
       ),
   });
   const action = canClaim ? ['Can you take it?'] : canNotify ? ['Action'] : [];
-  return (
+  // On a phone each open shift is a card; a table of six columns does not fit 390 px.
+  const narrow = useMediaQuery('(max-width: 720px)');
+  const actionOf = (o: OpenShiftDto): ReactNode =>
+    canClaim ? (
+      o.mayTake === false ? (
+        <ul className={styles.reasons} aria-label="Why you may not take it">
+          {(o.whyNot ?? []).map((r) => (
+            <li key={r}>{r}</li>
+          ))}
+        </ul>
+      ) : (
+        <Button size="small" appearance="primary" disabled={claim.isPending} onClick={() => claim.mutate(o)}>
+          Claim
+        </Button>
+      )
+    ) : canNotify ? (
+      <Button size="small" disabled={mail.isPending} onClick={() => mail.mutate(o)}>
+        E-mail who may take it
+      </Button>
+    ) : null;
+  const wanted = (o: OpenShiftDto) => (
+    <span className={styles.need}>
+      {o.short}
+      {o.belowMinimum > 0 && (
+        <Badge appearance="filled" color="danger">
+          {o.belowMinimum} below minimum
+        </Badge>
+      )}
+    </span>
+  );
+  const errors = (
     <>
       {claim.error ? <ErrorBanner error={claim.error} title="The shift was not claimed" /> : null}
       {mail.error ? <ErrorBanner error={mail.error} title="No e-mail was sent" /> : null}
+    </>
+  );
+  if (narrow) {
+    return (
+      <>
+        {errors}
+        <ul className={styles.cards} aria-label="Open shifts">
+          {openShifts.map((o) => (
+            <li key={key(o)} className={styles.card}>
+              <Body1>
+                <strong>
+                  {dayLabel(o.date)}, {o.shiftName} ({o.shiftCode}) {o.start}–{o.end}
+                </strong>
+              </Body1>
+              <Caption1 className={styles.muted}>
+                {o.skillCode ? `Needs ${o.skillCode}` : 'Anyone'} · still wanted {o.short}
+                {o.pendingClaims > 0 ? ` · ${o.pendingClaims} claims waiting` : ''}
+              </Caption1>
+              {o.belowMinimum > 0 && (
+                <Badge appearance="filled" color="danger">
+                  {o.belowMinimum} below minimum
+                </Badge>
+              )}
+              {actionOf(o)}
+            </li>
+          ))}
+        </ul>
+      </>
+    );
+  }
+  return (
+    <>
+      {errors}
       <DataTable
         label="Open shifts"
         columns={['Day', 'Shift', 'Skill', 'Still wanted', 'Claims waiting', ...action]}
@@ -75,43 +161,9 @@ export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenS
               {o.shiftName} ({o.shiftCode}) {o.start}–{o.end}
             </TableCell>
             <TableCell>{o.skillCode ?? 'Any'}</TableCell>
-            <TableCell>
-              <span className={styles.need}>
-                {o.short}
-                {o.belowMinimum > 0 && (
-                  <Badge appearance="filled" color="danger">
-                    {o.belowMinimum} below minimum
-                  </Badge>
-                )}
-              </span>
-            </TableCell>
+            <TableCell>{wanted(o)}</TableCell>
             <TableCell>{o.pendingClaims}</TableCell>
-            {canClaim ? (
-              <TableCell>
-                {o.mayTake === false ? (
-                  <ul className={styles.reasons} aria-label="Why you may not take it">
-                    {(o.whyNot ?? []).map((r) => (
-                      <li key={r}>{r}</li>
-                    ))}
-                  </ul>
-                ) : (
-                  <Button
-                    size="small"
-                    appearance="primary"
-                    disabled={claim.isPending}
-                    onClick={() => claim.mutate(o)}
-                  >
-                    Claim
-                  </Button>
-                )}
-              </TableCell>
-            ) : canNotify ? (
-              <TableCell>
-                <Button size="small" disabled={mail.isPending} onClick={() => mail.mutate(o)}>
-                  E-mail who may take it
-                </Button>
-              </TableCell>
-            ) : null}
+            {canClaim || canNotify ? <TableCell>{actionOf(o)}</TableCell> : null}
           </TableRow>
         ))}
       </DataTable>

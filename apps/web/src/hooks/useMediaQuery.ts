@@ -1,0 +1,14 @@
+import { useSyncExternalStore } from 'react';
+
+/** Whether a CSS media query matches now; re-renders when it starts or stops matching. */
+export function useMediaQuery(query: string): boolean {
+  return useSyncExternalStore(
+    (onChange) => {
+      const list = window.matchMedia(query);
+      list.addEventListener('change', onChange);
+      return () => list.removeEventListener('change', onChange);
+    },
+    () => window.matchMedia(query).matches,
+    () => false,
+  );
+}
