@@ -34,21 +34,40 @@ import { OutboxModule } from './outbox/outbox.module';
 import { AuditModule } from './audit/audit.module';
 import { PublishingModule } from './publishing/publishing.module';
 import { MyRosterModule } from './my-roster/my-roster.module';
+import { ClusterWriteGenerationModule } from './scale-out/cluster-write-generation';
+import { ScaleOutModule } from './scale-out/redis-connections';
+import { ScaleOutConfig } from './scale-out/scale-out-config';
+import { ScaleOutServicesModule } from './scale-out/scale-out-services.module';
+
+/** One process: solves in this process's worker pool, everything else in memory. */
+const NO_SCALE_OUT: ScaleOutConfig = {
+  redisUrl: null,
+  prefix: 'rotaplex',
+  solveLockMs: 30_000,
+  workerConcurrency: 1,
+  workerThreads: 1,
+};
 
 @Module({})
 export class AppModule {
-  /** The whole API for a validated configuration (with its JWT secret resolved). */
-  static forRoot(config: AppConfig): DynamicModule {
+  /**
+   * The whole API for a validated configuration (with its JWT secret resolved). With a REDIS_URL in
+   * `scaleOut`, solves go to worker processes and the instances share events, caches' invalidation,
+   * rate limits and scheduled jobs through Redis (docs/scale-out.md).
+   */
+  static forRoot(config: AppConfig, scaleOut: ScaleOutConfig = NO_SCALE_OUT): DynamicModule {
+    const redis = scaleOut.redisUrl !== null;
     return {
       module: AppModule,
       imports: [
         ConfigModule.forRoot(config),
+        ScaleOutModule.forRoot(scaleOut),
         TypeOrmModule.forRootAsync({
           // SQLite file by default, PostgreSQL when DATABASE_URL is set (database/open-database.ts).
           useFactory: () => dataSourceOptions(databaseTarget(config)),
           dataSourceFactory: (options) => openDatabase(databaseTarget(config), options!),
         }),
-        WriteGenerationModule,
+        redis ? ClusterWriteGenerationModule : WriteGenerationModule,
         // Time-driven work: expiry of swap requests and their links, outbox retention.
         ScheduleModule.forRoot(),
         HealthModule,
@@ -75,6 +94,7 @@ export class AppModule {
         MyRosterModule,
         RequestsModule,
         DemoModule,
+        ...(redis ? [ScaleOutServicesModule] : []),
       ],
       providers: [
         // Order matters: authentication first, then the route's access rule.

@@ -13,10 +13,13 @@ import { AppModule } from './app.module';
 import { useBodyLimits } from './common/http/body-limits';
 import { AppValidationPipe } from './common/pipes/app-validation.pipe';
 import { AppConfig } from './config/app-config';
+import { loadScaleOutConfig, type ScaleOutConfig } from './scale-out/scale-out-config';
 
 export interface CreateAppOptions {
   /** Nest logger levels; tests pass false. */
   logger?: false | ('log' | 'error' | 'warn' | 'debug' | 'verbose' | 'fatal')[];
+  /** Redis settings (default: REDIS_URL and friends from the environment; none: one process). */
+  scaleOut?: ScaleOutConfig;
 }
 
 /** Builds and initialises the application (database migrated, mail catcher started, demo seeded). Does not listen. */
@@ -24,14 +27,17 @@ export async function createApp(
   config: AppConfig,
   options: CreateAppOptions = {},
 ): Promise<NestExpressApplication> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(config), {
-    logger: options.logger ?? ['log', 'error', 'warn', 'fatal'],
-    bufferLogs: false,
-    // Errors reach the caller (main exits with a message; tests fail) instead of exiting the process.
-    abortOnError: false,
-    // configureApp installs the JSON parser with its own size, depth and content-type checks.
-    bodyParser: false,
-  });
+  const app = await NestFactory.create<NestExpressApplication>(
+    AppModule.forRoot(config, options.scaleOut ?? loadScaleOutConfig(process.env)),
+    {
+      logger: options.logger ?? ['log', 'error', 'warn', 'fatal'],
+      bufferLogs: false,
+      // Errors reach the caller (main exits with a message; tests fail) instead of exiting the process.
+      abortOnError: false,
+      // configureApp installs the JSON parser with its own size, depth and content-type checks.
+      bodyParser: false,
+    },
+  );
   configureApp(app, config);
   await app.init();
   return app;

@@ -3,6 +3,7 @@ import { Logger } from '@nestjs/common';
 import { createServer } from 'node:net';
 import { createApp } from './app';
 import { type AppConfig, ConfigValidationError, loadConfig, resolveJwtSecret } from './config/app-config';
+import { loadScaleOutConfig, type ScaleOutConfig } from './scale-out/scale-out-config';
 
 async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -21,8 +22,10 @@ async function main(): Promise<void> {
   // to the account it runs as; the database layer sets the modes explicitly as well.
   process.umask(0o077);
   let config: AppConfig;
+  let scaleOut: ScaleOutConfig;
   try {
     config = resolveJwtSecret(loadConfig(process.env));
+    scaleOut = loadScaleOutConfig(process.env);
   } catch (err) {
     if (err instanceof ConfigValidationError) {
       console.error(`Rotaplex cannot start.\n${err.message}`);
@@ -35,7 +38,7 @@ async function main(): Promise<void> {
     const port = await freePort();
     config = { ...config, port, publicUrl: config.publicUrl ?? `http://localhost:${port}` };
   }
-  const app = await createApp(config);
+  const app = await createApp(config, { scaleOut });
   await app.listen(config.port);
   new Logger('Rotaplex').log(
     `Rotaplex ${config.version} (${config.nodeEnv}) listening on ${config.publicUrl}`,

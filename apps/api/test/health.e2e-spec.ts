@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { api, startTestApp, type TestApp } from './support/test-app';
 
 describe('health and API documents', () => {
@@ -7,9 +8,15 @@ describe('health and API documents', () => {
   });
   afterAll(() => t.close());
 
-  it('GET /api/health answers without a token and checks the database', async () => {
+  it('GET /api/health answers without a token and checks the database and the solve queue', async () => {
     const res = await t.http().get(api('/health')).expect(200);
-    expect(res.body).toEqual({ status: 'ok', database: 'up', version: t.config.version });
+    // Without REDIS_URL solves run in this process's pool, one worker thread per core (node:os).
+    expect(res.body).toEqual({
+      status: 'ok',
+      database: 'up',
+      version: t.config.version,
+      queue: { kind: 'in-process', state: 'up', waiting: 0, active: 0, workers: availableParallelism() },
+    });
   });
 
   it('sets security headers (helmet)', async () => {

@@ -1,3 +1,4 @@
+import { ThrottlerStorageRedisService } from '@nest-lab/throttler-storage-redis';
 import { Module } from '@nestjs/common';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
@@ -9,6 +10,7 @@ import { OrganisationModule } from '../organisation/organisation.module';
 import { UserEntity } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
 import { authThrottlers, AuthThrottlerGuard } from './auth-throttler.guard';
+import { RedisConnections } from '../scale-out/redis-connections';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JWT_AUDIENCE, JWT_ISSUER, JwtStrategy } from './jwt.strategy';
@@ -33,9 +35,11 @@ import { TokensModule } from './tokens.module';
       }),
     }),
     ThrottlerModule.forRootAsync({
-      inject: [AppConfig],
-      useFactory: (config: AppConfig) => ({
+      inject: [AppConfig, RedisConnections],
+      useFactory: (config: AppConfig, redis: RedisConnections | null) => ({
         throttlers: authThrottlers(config.loginRateLimit),
+        // Several API instances count sign-in attempts together in Redis (REDIS_URL); one process in memory.
+        ...(redis ? { storage: new ThrottlerStorageRedisService(redis.throttle) } : {}),
         errorMessage: 'Too many attempts: wait a minute and try again',
       }),
     }),

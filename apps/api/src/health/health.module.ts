@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
+import { SolveRunsModule } from '../solve-runs/solve-runs.module';
 import { HealthController } from './health.controller';
 
-@Module({ controllers: [HealthController] })
+@Module({ imports: [SolveRunsModule], controllers: [HealthController] })
 export class HealthModule {}

@@ -1,15 +1,18 @@
 import {
   ConflictException,
+  Inject,
   Injectable,
   Logger,
   NotFoundException,
   type OnApplicationBootstrap,
+  Optional,
   type OnModuleDestroy,
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   ACTIVE_SOLVE_RUN_STATUSES,
   type Page,
+  type QueueHealthDto,
   type SolveProgressDto,
   type SolveRunDto,
   type SolveRunModeName,
@@ -19,6 +22,7 @@ import {
   type SolveRunSummaryDto,
 } from '@rotaplex/contracts';
 import { EventEmitter } from 'node:events';
+import { availableParallelism } from 'node:os';
 import { type Roster } from '@rotaplex/roster-model';
 import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { saveSolvedRoster } from '../assignments/assignments.service';
@@ -30,6 +34,8 @@ import { type RosterInput, RosterInputService } from '../roster-input/roster-inp
 import { type StartSolveRunDto } from './dto/solve-run.dto';
 import { SolveRunEntity } from './solve-run.entity';
 import { type PoolSolveResult, SolverPool } from './solver';
+import { type SolveEventMessage } from './solve-queue-protocol';
+import { SolveQueue, type SolveJobOutcome } from './solve-queue';
 
 export interface SolveRunEvent {
   event: SolveRunEventName;
@@ -42,6 +48,14 @@ export const RESTARTED_MESSAGE =
 const STOPPED_MESSAGE = 'The server stopped during the solve, so the run was stopped. Start a new run.';
 /** Progress is written to the database at most this often (SSE listeners get every update). */
 const PROGRESS_WRITE_MS = 1000;
+/** With REDIS_URL: how often each API instance looks for runs whose owning instance is gone. */
+const ORPHAN_SWEEP_MS = 5000;
+/** A run without a job this long after it was created lost its owner before it was queued. */
+const UNQUEUED_GRACE_MS = 60_000;
+/** A solver worker died twice during the same solve (BullMQ's stalled-job limit). */
+export const WORKER_LOST_MESSAGE =
+  'A solver worker stopped during the solve (its process or machine ended) and the retry on another worker stopped too, so the run was stopped. Start a new run.';
+const ENDED_STATUSES = ['finished', 'failed', 'cancelled'];
 
 /**
  * A run that does something other than generating a draft (e.g. repairing a published roster):
@@ -59,6 +73,13 @@ export interface SolveRunMode {
   save(em: EntityManager, input: RosterInput, roster: Roster, run: SolveRunEntity): Promise<void>;
 }
 
+/** A run this API instance queued (REDIS_URL set): what it needs to save the result. */
+interface OwnedRun {
+  input: RosterInput;
+  lastWrite: number;
+  progressWrite: Promise<unknown>;
+}
+
 interface ActiveRun {
   cancel: AbortController;
   kill: AbortController;
@@ -70,6 +91,11 @@ interface ActiveRun {
  * event loop), progress to listeners and the database, the roster written in one transaction at
  * the end, and crash safety (a failed solve fails its run; runs a previous process left behind are
  * failed at start-up).
+ *
+ * With REDIS_URL the queue is BullMQ's (see solve-queue.ts): this instance loads the input and
+ * queues the job, a solver worker process solves it, and this instance saves the result as it
+ * would its own pool's. Events go through Redis to every instance, so a browser may follow a run
+ * from any of them; a run whose instance is gone is failed by the others (as a restart would).
  */
 @Injectable()
 export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy {
@@ -79,6 +105,8 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
   private readonly active = new Map<string, ActiveRun>();
   private readonly events = new EventEmitter();
   private readonly modes = new Map<string, SolveRunMode>();
+  private readonly owned = new Map<string, OwnedRun>();
+  private sweepTimer: NodeJS.Timeout | null = null;
   private stopping = false;
 
   constructor(
@@ -87,12 +115,23 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     private readonly periods: RosterPeriodsService,
     private readonly input: RosterInputService,
     private readonly writer: PeriodWriter,
+    // Null without REDIS_URL (the factory in SolveRunsModule); an explicit token, as the type is a union.
+    @Optional() @Inject(SolveQueue) private readonly queue: SolveQueue | null = null,
   ) {
     this.events.setMaxListeners(0);
   }
 
   /** Runs left queued or running by a previous process can never finish: fail them with a message. */
   async onApplicationBootstrap(): Promise<void> {
+    if (this.queue) {
+      // Other instances may own the active runs: only runs whose owner is gone are failed (sweep).
+      this.queue.onEvent((message) => void this.onQueueEvent(message));
+      this.queue.onEnded((runId, outcome) => void this.onJobEnded(runId, outcome));
+      await this.queue.start();
+      this.sweepTimer = setInterval(() => void this.sweepOrphans(), ORPHAN_SWEEP_MS);
+      this.sweepTimer.unref();
+      return;
+    }
     const result = await this.runs.update(
       { status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
       { status: 'failed', errorMessage: RESTARTED_MESSAGE, finishedAt: new Date() },
@@ -103,6 +142,19 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
 
   async onModuleDestroy(): Promise<void> {
     this.stopping = true;
+    if (this.queue) {
+      if (this.sweepTimer) clearInterval(this.sweepTimer);
+      // Nobody else can save these runs' rosters: stop their solves and fail them, as a restart would.
+      for (const id of [...this.owned.keys()]) {
+        this.owned.delete(id);
+        this.queue.disown(id);
+        await this.queue.discard(id).catch(() => undefined);
+        await this.fail(id, STOPPED_MESSAGE);
+        await this.emitEnd(id).catch(() => undefined);
+      }
+      await this.queue.close();
+      return;
+    }
     const queued = this.waiting.splice(0);
     for (const id of queued) await this.fail(id, STOPPED_MESSAGE);
     const running = [...this.active.values()].map((a) => a.done);
@@ -157,6 +209,10 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       );
     });
     if (mode) this.modes.set(run.id, mode);
+    if (this.queue) {
+      await this.enqueue(run, mode);
+      return { id: run.id };
+    }
     this.waiting.push(run.id);
     this.pump();
     return { id: run.id };
@@ -192,6 +248,19 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     if (!(ACTIVE_SOLVE_RUN_STATUSES as readonly string[]).includes(run.status)) {
       throw new ConflictException(`The run has already ended (${run.status})`);
     }
+    if (this.queue) {
+      if ((await this.queue.cancel(id)) === 'removed') {
+        await this.runs.update(
+          { id, status: 'queued' },
+          { status: 'cancelled', finishedAt: new Date(), errorMessage: null },
+        );
+        await this.emitEnd(id);
+      } else {
+        // The worker stops and keeps its roster; the owning instance saves it and ends the run.
+        await this.waitForEnd(id, (run.timeLimitSeconds + 120) * 1000);
+      }
+      return toSolveRunDto(await this.runs.findOneByOrFail({ id }));
+    }
     const index = this.waiting.indexOf(id);
     if (index >= 0) {
       this.waiting.splice(index, 1);
@@ -216,10 +285,38 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
    * fails with the solver's message. For operations and for testing crash handling.
    */
   async stopAtOnce(id: string): Promise<void> {
+    if (this.queue) {
+      const run = await this.runs.findOneBy({ id });
+      if (!run || ENDED_STATUSES.includes(run.status)) return;
+      await this.queue.kill(id);
+      await this.waitForEnd(id, (run.timeLimitSeconds + 120) * 1000);
+      return;
+    }
     const active = this.active.get(id);
     if (!active) return;
     active.kill.abort();
     await active.done;
+  }
+
+  /** Where solves run and how busy it is, for the health check. */
+  async queueHealth(): Promise<QueueHealthDto> {
+    if (this.queue) {
+      const h = await this.queue.health();
+      return {
+        kind: 'redis',
+        state: h.state,
+        waiting: h.waiting,
+        active: h.active,
+        workers: h.solverWorkers,
+      };
+    }
+    return {
+      kind: 'in-process',
+      state: 'up',
+      waiting: this.waiting.length,
+      active: this.active.size,
+      workers: this.pool?.size ?? availableParallelism(),
+    };
   }
 
   /** Listen to a run's events; returns the function that stops listening. */
@@ -389,13 +486,150 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
   }
 
   private emit(id: string, event: SolveRunEventName, data: unknown): void {
+    // With Redis every instance's listeners get it, this one's through the channel too.
+    if (this.queue) {
+      this.queue.publish({ runId: id, event, data }).catch((err: unknown) => {
+        this.logger.warn(`Publishing a ${event} event of run ${id}: ${String(err)}`);
+      });
+      return;
+    }
     this.events.emit(id, { event, data } satisfies SolveRunEvent);
   }
 
   private async emitEnd(id: string): Promise<void> {
-    if (this.events.listenerCount(id) === 0) return;
+    if (!this.queue && this.events.listenerCount(id) === 0) return;
     const run = await this.runs.findOneBy({ id }).catch(() => null);
     if (run) this.emit(id, 'end', toSolveRunDto(run));
+  }
+
+  /** REDIS_URL: load the input (and prepare the mode) here, queue the problem for a solver worker. */
+  private async enqueue(run: SolveRunEntity, mode: SolveRunMode | undefined): Promise<void> {
+    const queue = this.queue as SolveQueue;
+    try {
+      const input = await this.input.load(run.rosterPeriodId, run.weights);
+      if (mode) await mode.prepare(input);
+      this.owned.set(run.id, { input, lastWrite: 0, progressWrite: Promise.resolve() });
+      await queue.enqueue(run.id, input.problem, run.timeLimitSeconds);
+    } catch (err) {
+      this.owned.delete(run.id);
+      this.modes.delete(run.id);
+      queue.disown(run.id);
+      const message = err instanceof Error ? err.message : String(err);
+      this.logger.warn(`Solve run ${run.id} could not be queued: ${message}`);
+      await this.fail(run.id, `The solve failed: ${message}`);
+      await this.emitEnd(run.id);
+    }
+  }
+
+  /** An event from the Redis channel: forward it to this instance's listeners; owners record it. */
+  private async onQueueEvent(message: SolveEventMessage): Promise<void> {
+    const { runId: id, event, data } = message;
+    if (event !== 'started') this.events.emit(id, { event, data } satisfies SolveRunEvent);
+    const own = this.owned.get(id);
+    if (!own) return;
+    if (event === 'started') {
+      const startedAt = new Date((data as { startedAt?: number })?.startedAt ?? Date.now());
+      const result = await this.runs.update({ id, status: 'queued' }, { status: 'running', startedAt });
+      if (result.affected) {
+        const run = await this.runs.findOneBy({ id });
+        if (run) this.emit(id, 'status', toSolveRunDto(run));
+      }
+    } else if (event === 'progress') {
+      const now = Date.now();
+      if (now - own.lastWrite < PROGRESS_WRITE_MS) return;
+      own.lastWrite = now;
+      const progress = data as SolveProgressDto;
+      own.progressWrite = own.progressWrite
+        .then(() => this.runs.update({ id, status: 'running' }, { progress }))
+        .catch(() => undefined);
+    }
+  }
+
+  /** The owner saves the outcome of its queued job, as `execute` does for the in-process pool. */
+  private async onJobEnded(id: string, outcome: SolveJobOutcome): Promise<void> {
+    const own = this.owned.get(id);
+    if (!own) return;
+    this.owned.delete(id);
+    try {
+      await own.progressWrite;
+      if (outcome.kind === 'completed') {
+        const { result, cancelled } = outcome.value;
+        if (result) await this.finish(id, own.input, result, cancelled);
+        else
+          await this.runs.update(
+            { id, status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
+            { status: 'cancelled', finishedAt: new Date(), errorMessage: null },
+          );
+      } else if (outcome.kind === 'failed') {
+        this.logger.warn(`Solve run ${id} failed: ${outcome.message}`);
+        await this.fail(
+          id,
+          /stalled/i.test(outcome.message) ? WORKER_LOST_MESSAGE : `The solve failed: ${outcome.message}`,
+        );
+      } else {
+        // Removed from the queue by a cancel before a worker took it.
+        await this.runs.update(
+          { id, status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
+          { status: 'cancelled', finishedAt: new Date(), errorMessage: null },
+        );
+      }
+    } catch (err) {
+      const message = err instanceof Error ? err.message : String(err);
+      this.logger.warn(`Solve run ${id} failed: ${message}`);
+      await this.fail(id, `The solve failed: ${message}`);
+    } finally {
+      this.modes.delete(id);
+      await this.emitEnd(id);
+    }
+  }
+
+  /**
+   * Runs whose owning API instance is gone can never be saved: stop their jobs and fail them, as
+   * the start-up of a single process does. Every instance sweeps; the updates are conditional.
+   */
+  private async sweepOrphans(): Promise<void> {
+    const queue = this.queue as SolveQueue;
+    try {
+      const active = await this.runs.find({
+        select: { id: true, createdAt: true },
+        where: { status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
+      });
+      for (const run of active) {
+        if (this.owned.has(run.id) || this.stopping) continue;
+        const info = await queue.ownerAlive(run.id);
+        if (info?.alive) continue;
+        if (!info && Date.now() - run.createdAt.getTime() < UNQUEUED_GRACE_MS) continue;
+        if (info) await queue.discard(run.id);
+        await this.fail(run.id, RESTARTED_MESSAGE);
+        await this.emitEnd(run.id);
+        this.logger.warn(`Solve run ${run.id} failed: the API instance that started it is gone`);
+      }
+    } catch (err) {
+      this.logger.warn(`Looking for orphaned solve runs: ${String(err)}`);
+    }
+  }
+
+  /** Resolves once the run has ended (its end event here, or its row says so), or after `timeoutMs`. */
+  private waitForEnd(id: string, timeoutMs: number): Promise<void> {
+    return new Promise((resolve) => {
+      let done = false;
+      const stop = (): void => {
+        if (done) return;
+        done = true;
+        unsubscribe();
+        clearInterval(poll);
+        clearTimeout(timeout);
+        resolve();
+      };
+      const unsubscribe = this.subscribe(id, (e) => e.event === 'end' && stop());
+      const poll = setInterval(() => {
+        this.runs
+          .findOneBy({ id })
+          .then((r) => (!r || ENDED_STATUSES.includes(r.status)) && stop())
+          .catch(() => undefined);
+      }, 1000);
+      const timeout = setTimeout(stop, timeoutMs);
+    });
   }
 }
 

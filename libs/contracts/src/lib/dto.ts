@@ -32,7 +32,16 @@ export interface HealthResponse {
   status: 'ok' | 'error';
   database: 'up' | 'down';
   version: string;
+  /**
+   * Where solves run: this process's worker pool (`in-process`), or the Redis queue (`redis`,
+   * REDIS_URL set) with its state, jobs waiting and running, and solver worker processes connected.
+   */
+  queue: QueueHealthDto;
 }
+
+export type QueueHealthDto =
+  | { kind: 'in-process'; state: 'up'; waiting: number; active: number; workers: number }
+  | { kind: 'redis'; state: 'up' | 'down'; waiting: number; active: number; workers: number };
 
 export interface LoginRequest {
   email: string;
