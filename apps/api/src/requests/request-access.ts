@@ -6,7 +6,7 @@ import { localDate } from '../common/dates';
 import { canAccessUnit, visibleUnitIds } from '../common/unit-scope';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UnitEntity } from '../units/unit.entity';
+import { UnitsService } from '../units/units.service';
 
 /**
  * Who is who for staff input: a staff member sees and changes only their own (the staff members
@@ -14,7 +14,10 @@ import { UnitEntity } from '../units/unit.entity';
  */
 @Injectable()
 export class RequestAccess {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly units: UnitsService,
+  ) {}
 
   private get m(): EntityManager {
     return this.dataSource.manager;
@@ -48,7 +51,7 @@ export class RequestAccess {
   }
 
   async inOrg(user: AuthUser, unitId: string): Promise<boolean> {
-    return (await this.m.countBy(UnitEntity, { id: unitId, organisationId: user.organisationId })) > 0;
+    return (await this.units.organisationOf(unitId)) === user.organisationId;
   }
 
   /** The caller's own active staff memberships (an inactive one takes no new requests). */
@@ -67,10 +70,7 @@ export class RequestAccess {
       return (await this.myStaff(user)).filter((s) => !unitId || s.unitId === unitId).map((s) => s.id);
     }
     const visible = visibleUnitIds(user);
-    const units = await this.m.findBy(UnitEntity, {
-      organisationId: user.organisationId,
-      ...(unitId ? { id: unitId } : visible !== null ? { id: In(visible) } : {}),
-    });
+    const units = await this.units.ofOrganisation(user.organisationId, unitId ? [unitId] : visible);
     if (!units.length) return [];
     const staff = await this.m.findBy(StaffMemberEntity, { unitId: In(units.map((u) => u.id)) });
     return staff.map((s) => s.id);
@@ -93,7 +93,6 @@ export class RequestAccess {
 
   /** Today in the unit's time zone, "YYYY-MM-DD". */
   async unitToday(unitId: string): Promise<string> {
-    const unit = await this.m.findOneBy(UnitEntity, { id: unitId });
-    return localDate(new Date(), unit?.timeZone ?? 'UTC');
+    return localDate(new Date(), await this.units.timeZoneOf(unitId));
   }
 }

@@ -5,6 +5,7 @@ import { LeaveService } from './leave.service';
 import { RequestAccess } from './request-access';
 import { RequestDtos } from './request-dtos';
 import { RequestViews } from './request-views.service';
+import { UnitsModule } from '../units/units.module';
 import { RequestsController } from './requests.controller';
 
 /**
@@ -13,6 +14,7 @@ import { RequestsController } from './requests.controller';
  * database/entities.ts.
  */
 @Module({
+  imports: [UnitsModule],
   controllers: [RequestsController],
   providers: [
     RequestAccess,

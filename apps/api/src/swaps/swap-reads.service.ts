@@ -12,7 +12,9 @@ import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';
 import { assertUnitAccess, canAccessUnit } from '../common/unit-scope';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
+import { ShiftTypesService } from '../shift-types/shift-types.service';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { UnitsService } from '../units/units.service';
 import { type SwapListQuery } from './dto/swap.dto';
 import { changeDto } from './swap-evaluation';
 import { type StoredCellChange, SwapRequestEntity } from './swap-request.entity';
@@ -29,6 +31,8 @@ export class SwapReads {
   constructor(
     private readonly dataSource: DataSource,
     private readonly input: RosterInputService,
+    private readonly units: UnitsService,
+    private readonly shiftTypes: ShiftTypesService,
   ) {}
 
   async options(user: AuthUser, periodId: string): Promise<SwapOptionsDto> {
@@ -78,9 +82,9 @@ export class SwapReads {
       if (!user.unitIds.length) return empty;
       qb.where('r.unitId IN (:...units)', { units: user.unitIds });
     } else {
-      qb.innerJoin('units', 'u', 'u.id = r.unitId').where('u.organisationId = :org', {
-        org: user.organisationId,
-      });
+      const units = (await this.units.list(user)).map((u) => u.id);
+      if (!units.length) return empty;
+      qb.where('r.unitId IN (:...units)', { units });
     }
     if (query.waitingForMe && user.role !== 'staff') {
       if (!hasPermission(user.role, 'requests:approve')) return empty;
@@ -137,10 +141,7 @@ export class SwapReads {
       const mine = await em.countBy(StaffMemberEntity, { id: In(ids), userId: user.id });
       if (!mine) throw new NotFoundException('Swap request not found');
     } else {
-      const unit = (await em.query(`SELECT "organisationId" FROM "units" WHERE "id" = ?`, [row.unitId])) as {
-        organisationId: string;
-      }[];
-      if (unit[0]?.organisationId !== user.organisationId)
+      if ((await this.units.organisationOf(row.unitId)) !== user.organisationId)
         throw new NotFoundException('Swap request not found');
       assertUnitAccess(user, row.unitId);
     }
@@ -163,9 +164,9 @@ export class SwapReads {
     ];
     const staff = staffIds.length ? await em.findBy(StaffMemberEntity, { id: In(staffIds) }) : [];
     const names = new Map(staff.map((s) => [s.id, s.name]));
-    const shiftTypes = await em
-      .query(`SELECT "id", "code" FROM "shift_types"`)
-      .then((r: { id: string; code: string }[]) => r);
+    const shiftTypes = (
+      await Promise.all([...new Set(rows.map((r) => r.unitId))].map((u) => this.shiftTypes.findForUnit(u)))
+    ).flat();
     const lookup = { staff, shiftTypes } as unknown as Pick<RosterInput, 'staff' | 'shiftTypes'>;
     return rows.map((r) => {
       const proposer = staff.find((s) => s.id === r.proposerStaffMemberId);

@@ -3,6 +3,8 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
 import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
+import { ShiftTypesModule } from '../shift-types/shift-types.module';
+import { UnitsModule } from '../units/units.module';
 import { SwapDecisions } from './swap-decisions.service';
 import { SwapExpiryService } from './swap-expiry.service';
 import { SwapLinks } from './swap-links';
@@ -19,6 +21,8 @@ import { SwapsService } from './swaps.service';
     RosterInputModule,
     RosterPeriodsModule,
     MailModule,
+    UnitsModule,
+    ShiftTypesModule,
   ],
   controllers: [SwapsController, SwapLinksController],
   providers: [SwapsService, SwapReads, SwapPlanning, SwapDecisions, SwapLinks, SwapMailer, SwapExpiryService],

@@ -65,6 +65,26 @@ export class UnitsService {
     });
   }
 
+  /** The organisation a unit belongs to (null for an unknown unit), for other modules' access checks. */
+  async organisationOf(unitId: string): Promise<string | null> {
+    const unit = await this.units.findOne({
+      where: { id: unitId },
+      select: { id: true, organisationId: true },
+    });
+    return unit?.organisationId ?? null;
+  }
+
+  /** The IANA time zone of a unit (UTC for an unknown unit): the calendar its people live in. */
+  async timeZoneOf(unitId: string): Promise<string> {
+    const unit = await this.units.findOne({ where: { id: unitId }, select: { id: true, timeZone: true } });
+    return unit?.timeZone ?? 'UTC';
+  }
+
+  /** The units of an organisation, all or only the given ids (for other modules). */
+  async ofOrganisation(organisationId: string, ids: string[] | null = null): Promise<UnitEntity[]> {
+    return this.units.findBy({ organisationId, ...(ids ? { id: In(ids) } : {}) });
+  }
+
   /** Checks that every id is a unit of the organisation (400 naming unitIds otherwise); returns the entities. */
   async findAllOrFail(organisationId: string, ids: string[]): Promise<UnitEntity[]> {
     const unique = [...new Set(ids)];
