@@ -370,7 +370,7 @@ describe('bad input is a 4xx with a clear message, and changes nothing', () => {
 
     it('PUT /api/staff/{own}/availability with cells: [[]] is a 400 for the staff member', async () => {
       const [{ id }] = (await t.dataSource.query(
-        `SELECT s.id FROM staff_members s JOIN users u ON u.id = s.userId WHERE u.email = ?`,
+        `SELECT s.id FROM staff_members s JOIN users u ON u.id = s."userId" WHERE u.email = ?`,
         ['staff@example.com'],
       )) as { id: string }[];
       const res = await t

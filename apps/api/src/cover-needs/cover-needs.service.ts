@@ -313,8 +313,8 @@ export class CoverNeedsService {
         .createQueryBuilder()
         .delete()
         .from(CoverOverrideEntity)
-        .where('unitId = :unitId AND date = :date AND shiftTypeId = :shiftTypeId', { unitId, ...r })
-        .andWhere(r.skillId === null ? 'skillId IS NULL' : 'skillId = :skillId', { skillId: r.skillId })
+        .where('"unitId" = :unitId AND "date" = :date AND "shiftTypeId" = :shiftTypeId', { unitId, ...r })
+        .andWhere(r.skillId === null ? '"skillId" IS NULL' : '"skillId" = :skillId', { skillId: r.skillId })
         .execute();
       saved.push(
         await em.save(

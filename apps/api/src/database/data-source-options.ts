@@ -43,7 +43,9 @@ export function dataSourceOptions(target: DatabaseTarget | string): DataSourceOp
       uuidExtension: 'pgcrypto',
       installExtensions: false,
       // Pool size per process; several API instances share the server's max_connections (100).
-      extra: { max: 10 },
+      // Sessions in UTC: date-time text without a zone (SQLite's format, which some queries
+      // compare with) then means UTC there too.
+      extra: { max: 10, options: '-c TimeZone=UTC' },
     };
   }
   return {

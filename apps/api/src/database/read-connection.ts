@@ -31,7 +31,7 @@ export class ReadConnection implements OnModuleDestroy {
         entities: ENTITIES,
         migrationsRun: false,
         synchronize: false,
-        extra: { max: 4, options: '-c default_transaction_read_only=on' },
+        extra: { max: 4, options: '-c default_transaction_read_only=on -c TimeZone=UTC' },
       });
       await pg.initialize();
       return new ReadConnection(pg);

@@ -12,7 +12,10 @@ import { backoffDelayMs } from './outbox-settings';
 const IDLE_POLL_MS = 30_000;
 const MAX_ERROR_LENGTH = 2000;
 
-/** "YYYY-MM-DD HH:MM:SS.SSS" in UTC, the form TypeORM stores datetime columns in on SQLite. */
+/**
+ * "YYYY-MM-DD HH:MM:SS.SSS" in UTC, the form TypeORM stores datetime columns in on SQLite. On
+ * PostgreSQL the sessions run in UTC (data-source-options.ts), so the text means the same instant.
+ */
 export function sqliteUtc(date: Date): string {
   return date.toISOString().replace('T', ' ').replace('Z', '');
 }
@@ -157,9 +160,13 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
           .createQueryBuilder('m')
           .select('MIN(m.nextAttemptAt)', 'next')
           .where(`m.status = 'pending'`)
-          .getRawOne<{ next: string | null }>();
+          .getRawOne<{ next: string | Date | null }>();
         if (next?.next) {
-          const at = new Date(`${next.next.replace(' ', 'T')}Z`).getTime();
+          // SQLite answers UTC text, PostgreSQL a Date.
+          const at =
+            next.next instanceof Date
+              ? next.next.getTime()
+              : new Date(`${next.next.replace(' ', 'T')}Z`).getTime();
           waitMs = Math.min(Math.max(at - Date.now(), 0), IDLE_POLL_MS);
         }
       } catch (err) {

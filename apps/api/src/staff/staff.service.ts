@@ -61,11 +61,11 @@ export class StaffService {
         q: likePattern(query.q),
       });
     }
-    if (query.active !== undefined) qb.andWhere('s.active = :active', { active: query.active ? 1 : 0 });
+    if (query.active !== undefined) qb.andWhere('s.active = :active', { active: query.active });
     if (query.skill) {
       qb.andWhere(
-        `EXISTS (SELECT 1 FROM staff_member_skills fs JOIN skills fk ON fk.id = fs.skillId
-                 WHERE fs.staffMemberId = s.id AND fk.code = :skill)`,
+        `EXISTS (SELECT 1 FROM staff_member_skills fs JOIN skills fk ON fk.id = fs."skillId"
+                 WHERE fs."staffMemberId" = s.id AND fk.code = :skill)`,
         { skill: query.skill },
       );
     }
@@ -236,8 +236,11 @@ export class StaffService {
       .leftJoinAndSelect('s.contract', 'contract')
       .where('unit.organisationId = :org', { org: user.organisationId });
     const visible = visibleUnitIds(user);
-    if (visible !== null)
-      qb.andWhere('s.unitId IN (:...visible)', { visible: visible.length ? visible : [''] });
+    if (visible !== null) {
+      // No unit: no rows (an empty IN list is not SQL, and '' is not a uuid on PostgreSQL).
+      if (visible.length) qb.andWhere('s.unitId IN (:...visible)', { visible });
+      else qb.andWhere('1 = 0');
+    }
     if (unitId) qb.andWhere('s.unitId = :unitId', { unitId });
     const rows = await qb.orderBy('s.name', 'ASC').addOrderBy('s.id', 'ASC').getMany();
     return toCsv(

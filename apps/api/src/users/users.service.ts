@@ -44,7 +44,7 @@ export class UsersService {
     if (visible !== null) {
       if (!visible.length) return toPage([], 0, query);
       qb.andWhere(
-        'EXISTS (SELECT 1 FROM user_units vu WHERE vu.userId = u.id AND vu.unitId IN (:...visible))',
+        'EXISTS (SELECT 1 FROM user_units vu WHERE vu."userId" = u.id AND vu."unitId" IN (:...visible))',
         {
           visible,
         },
@@ -59,9 +59,9 @@ export class UsersService {
       );
     }
     if (query.role) qb.andWhere('u.role = :role', { role: query.role });
-    if (query.active !== undefined) qb.andWhere('u.active = :active', { active: query.active ? 1 : 0 });
+    if (query.active !== undefined) qb.andWhere('u.active = :active', { active: query.active });
     if (query.unitId) {
-      qb.andWhere('EXISTS (SELECT 1 FROM user_units fu WHERE fu.userId = u.id AND fu.unitId = :unitId)', {
+      qb.andWhere('EXISTS (SELECT 1 FROM user_units fu WHERE fu."userId" = u.id AND fu."unitId" = :unitId)', {
         unitId: query.unitId,
       });
     }

@@ -1,4 +1,6 @@
 import { PostgresBaseline1765540800000 } from './1765540800000-postgres-baseline';
+import { UnitPublishLead1765713600000 } from './1765713600000-unit-publish-lead';
+import { Demand1765800000000 } from './1765800000000-demand';
 
 /**
  * PostgreSQL's migrations, in the order they run, written by TypeORM's schema diff against a real
@@ -7,7 +9,11 @@ import { PostgresBaseline1765540800000 } from './1765540800000-postgres-baseline
  * database predates it). Every later SQLite migration in ../index.ts has a twin of the same name
  * here, in the same order; migrations.spec.ts fails until it has.
  */
-export const POSTGRES_MIGRATIONS = [PostgresBaseline1765540800000];
+export const POSTGRES_MIGRATIONS = [
+  PostgresBaseline1765540800000,
+  UnitPublishLead1765713600000,
+  Demand1765800000000,
+];
 
 /** The SQLite migration that {@link PostgresBaseline1765540800000} catches up with. */
 export const POSTGRES_BASELINE_COVERS = 'RosterPeriodChanges1765540800000';
