@@ -32,7 +32,17 @@ const useStyles = makeStyles({
       backgroundColor: tokens.colorBrandBackgroundPressed,
     },
   },
-  name: { display: 'none', '@media (min-width: 640px)': { display: 'inline' } },
+  // On a narrow window the name is read out but not shown (visually hidden, still in the button's name).
+  name: {
+    '@media (max-width: 639px)': {
+      position: 'absolute',
+      width: '1px',
+      height: '1px',
+      overflow: 'hidden',
+      clip: 'rect(0 0 0 0)',
+      whiteSpace: 'nowrap',
+    },
+  },
 });
 
 export function UserMenu({ user }: { user: MeResponse }) {
@@ -55,10 +65,11 @@ export function UserMenu({ user }: { user: MeResponse }) {
         <Button
           appearance="transparent"
           className={styles.trigger}
-          aria-label={`Account menu for ${user.displayName}`}
           icon={<Avatar name={user.displayName} size={28} color="colorful" aria-hidden />}
           iconPosition="before"
         >
+          {/* The name is the visible text, so the accessible name contains it (WCAG 2.5.3 Label in Name). */}
+          <span className="visually-hidden">Account menu for </span>
           <span className={styles.name}>{user.displayName}</span>
           <ChevronDownRegular aria-hidden />
         </Button>
