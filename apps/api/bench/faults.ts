@@ -629,7 +629,11 @@ async function main(): Promise<void> {
       );
     }
     await Promise.all(loops);
-    if (solveRun) await call(manager2, 'POST', `/solve-runs/${solveRun}/cancel`);
+    if (solveRun) {
+      const run = await must(manager2, 'GET', `/solve-runs/${solveRun}`);
+      notes.push(`the solve on the contact centre's draft was ${run.status} at the end of the mixed load`);
+      await call(manager2, 'POST', `/solve-runs/${solveRun}/cancel`);
+    } else notes.push('no draft period to solve on the contact centre: the mixed load ran without a solve');
 
     // ------------------------------------------------ B: publish, then racing approvals
     phase = 'B swaps';
