@@ -149,7 +149,7 @@ describe('POST /api/roster-periods/:id/publish', () => {
   it('a cell edit, a pin and a solve raise the version; a publish under the version read before answers 409 naming the changes', async () => {
     // The solve of beforeAll saved the roster through the period's writer.
     const [generated] = (await t.dataSource.query(
-      `SELECT kind, cells FROM roster_period_changes WHERE rosterPeriodId = ? ORDER BY version`,
+      `SELECT kind, cells FROM roster_period_changes WHERE "rosterPeriodId" = ? ORDER BY version`,
       [period.id],
     )) as { kind: string; cells: number }[];
     expect(generated.kind).toBe('generate');
@@ -189,7 +189,7 @@ describe('POST /api/roster-periods/:id/publish', () => {
       .send({ version: read.version })
       .expect(409);
     const [{ displayName }] = (await t.dataSource.query(
-      `SELECT displayName FROM users WHERE email = 'admin@example.com'`,
+      `SELECT "displayName" FROM users WHERE email = 'admin@example.com'`,
     )) as { displayName: string }[];
     expect(stale.body).toMatchObject({ statusCode: 409, version: now.version });
     expect(stale.body.message).toContain(`4 cell(s) changed since version ${read.version}`);
@@ -240,7 +240,7 @@ describe('POST /api/roster-periods/:id/publish', () => {
     expect(result).toMatchObject({ status: 'published', version: published.version });
 
     const people = (await t.dataSource.query(
-      `SELECT id, name, email FROM staff_members WHERE unitId = ? AND active = 1 AND email IS NOT NULL`,
+      `SELECT id, name, email FROM staff_members WHERE "unitId" = ? AND active AND email IS NOT NULL`,
       [small.unit.id],
     )) as { id: string; name: string; email: string }[];
     expect(people.length).toBeGreaterThan(1);
@@ -334,7 +334,7 @@ describe('POST /api/roster-periods/:id/publish', () => {
     const worked = g.rows.flatMap((r) => r.cells.filter((c) => c.shiftTypeId !== null)).length;
     expect(entry.after).toHaveLength(worked);
     const [snapshot] = await t.dataSource.query(
-      `SELECT cells FROM roster_publications WHERE rosterPeriodId = ?`,
+      `SELECT cells FROM roster_publications WHERE "rosterPeriodId" = ?`,
       [period.id],
     );
     expect(JSON.parse(snapshot.cells)).toEqual(entry.after);
