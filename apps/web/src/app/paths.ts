@@ -27,10 +27,12 @@ export const PATHS = {
   contracts: '/planning/contracts',
   staff: '/planning/staff',
   coverNeeds: '/planning/cover-needs',
+  demand: '/planning/demand',
   rosterPeriods: '/planning/periods',
   planningBoard: (periodId: string) => `/planning/periods/${encodeURIComponent(periodId)}/board`,
   periodReports: (periodId: string) => `/planning/periods/${encodeURIComponent(periodId)}/reports`,
   periodAudit: (periodId: string) => `/planning/periods/${encodeURIComponent(periodId)}/audit`,
+  demandPlan: (periodId: string) => `/planning/periods/${encodeURIComponent(periodId)}/demand`,
 } as const;
 
 /** Route patterns for parameterised paths (the router's side of PATHS). */
@@ -39,4 +41,5 @@ export const ROUTE_PATTERNS = {
   planningBoard: '/planning/periods/:periodId/board',
   periodReports: '/planning/periods/:periodId/reports',
   periodAudit: '/planning/periods/:periodId/audit',
+  demandPlan: '/planning/periods/:periodId/demand',
 } as const;

@@ -145,6 +145,15 @@ export function createRouter(queryClient: QueryClient) {
                           lazy: page(() => import('@/pages/CoverNeedsPage'), 'CoverNeedsPage'),
                         },
                         {
+                          path: PATHS.demand,
+                          loader: prefetch(() => queryClient.prefetchQuery(unitsQuery())),
+                          lazy: page(() => import('@/pages/DemandPage'), 'DemandPage'),
+                        },
+                        {
+                          path: ROUTE_PATTERNS.demandPlan,
+                          lazy: page(() => import('@/pages/DemandPlanPage'), 'DemandPlanPage'),
+                        },
+                        {
                           path: PATHS.staff,
                           loader: prefetch(() =>
                             Promise.all([

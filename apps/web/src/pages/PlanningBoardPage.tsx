@@ -3,6 +3,7 @@ import { useParams } from 'react-router-dom';
 import { unitsQuery } from '@/features/units/api/units.queries';
 import { rosterPeriodQuery } from '@/features/planning-board/api/board.queries';
 import { PlanningBoard } from '@/features/planning-board/components/PlanningBoard';
+import { DemandCoverPanel } from '@/features/demand/components/DemandCoverPanel';
 import { formatDay } from '@/features/planning-board/utils/days';
 import { PATHS } from '@/app/paths';
 import { AppLink } from '@/ui/AppLink';
@@ -42,6 +43,7 @@ export function PlanningBoardPage() {
         }
       />
       <PlanningBoard key={p.id} period={p} />
+      <DemandCoverPanel period={p} />
     </>
   );
 }

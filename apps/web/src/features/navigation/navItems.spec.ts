@@ -6,7 +6,7 @@ import { PATHS } from '@/app/paths';
 // managers read the people in their units; staff see only their own things. Issue 4, item 2: admins
 // and managers (who hold rosters:plan) see the Planning group of set-up screens; staff do not.
 describe('navigation by role', () => {
-  const PLANNING = ['Roster periods', 'Cover needs', 'Staff', 'Shift types', 'Contracts', 'Skills'];
+  const PLANNING = ['Roster periods', 'Cover needs', 'Demand', 'Staff', 'Shift types', 'Contracts', 'Skills'];
   const labels = (role: 'admin' | 'manager' | 'staff') =>
     navItemsFor(permissionsOf(role)).map((i) => i.label);
 

@@ -18,6 +18,7 @@ export type NavKey =
   | 'requests'
   | 'rosterPeriods'
   | 'coverNeeds'
+  | 'demand'
   | 'staff'
   | 'shiftTypes'
   | 'contracts'
@@ -168,6 +169,15 @@ export const NAV_ITEMS: readonly NavItem[] = [
     section: 'planning',
     permission: 'rosters:plan',
     description: 'How many people each shift needs, by skill, day of the week and date.',
+  },
+  {
+    key: 'demand',
+    label: 'Demand',
+    path: PATHS.demand,
+    section: 'planning',
+    permission: 'rosters:plan',
+    description:
+      'Forecast contacts or expected patients, turned into the staff each interval or shift needs.',
   },
   {
     key: 'staff',

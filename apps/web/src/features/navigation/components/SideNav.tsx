@@ -21,6 +21,7 @@ import {
   PeopleTeamRegular,
   PersonCircleRegular,
   GridRegular,
+  DataLineRegular,
 } from '@fluentui/react-icons';
 import type { Permission } from '@rotaplex/contracts';
 import { NavLink } from 'react-router-dom';
@@ -43,6 +44,7 @@ const ICONS: Record<NavKey, ReactElement> = {
   requests: <TaskListSquareLtrRegular />,
   rosterPeriods: <CalendarLtrRegular />,
   coverNeeds: <TableRegular />,
+  demand: <DataLineRegular />,
   staff: <PeopleRegular />,
   shiftTypes: <ClockRegular />,
   contracts: <DocumentBulletListRegular />,
