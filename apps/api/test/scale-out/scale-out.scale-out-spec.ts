@@ -1,0 +1,330 @@
+/**
+ * The product on real engines as several processes: Debian's redis-server, two API instances that
+ * share nothing in memory, two solver worker processes (`npm run worker`). A smaller set of the
+ * journeys than the main suite: sign-in (its rate limit counted across instances), generate
+ * (progress followed through the other instance), a cache read after another instance's write,
+ * one active run per period, cancel, a worker killed mid-solve, health and the scheduled jobs.
+ *
+ * Needs the compiled API (`npx nx run api:build`) and /usr/bin/redis-server. Run with
+ * `npm run test:scale-out`: both instances on one SQLite file (one machine). SCALE_OUT_DB=postgres
+ * (`npm run test:scale-out:postgres`) puts them on a throwaway PostgreSQL 15 cluster instead, as
+ * the API suite's PostgreSQL run makes.
+ */
+import {
+  type Page,
+  PLANNING_ROUTES as P,
+  type RosterPeriodDto,
+  SOLVING_ROUTES as R,
+  type SolveRunDto,
+  type HealthResponse,
+} from '@rotaplex/contracts';
+import { Queue } from 'bullmq';
+import { Redis } from 'ioredis';
+import request from 'supertest';
+import { type PostgresCluster, startPostgresCluster } from '../../src/database/postgres-cluster';
+import { DEMO_PASSWORD } from '../../src/demo/demo-data';
+import { MAINTENANCE_QUEUE, SOLVE_QUEUE } from '../../src/solve-runs/solve-queue-protocol';
+import { WORKER_LOST_MESSAGE } from '../../src/solve-runs/solve-runs.service';
+import { createPeriod, findUnit, readGrid, shiftTypesByCode, putCell } from '../support/planning';
+import { api, bearer, type TestApp } from '../support/test-app';
+import {
+  type ApiInstance,
+  assertBuilt,
+  type Proc,
+  type RedisServer,
+  startApi,
+  startRedis,
+  startWorker,
+  stop,
+  tempDataDir,
+} from './cluster';
+
+const PREFIX = 'rotaplex-test';
+/** A killed worker's lock runs out after this (the retry starts within about twice it). */
+const LOCK_MS = 3000;
+const ENDED = ['finished', 'failed', 'cancelled'];
+
+/** The planning helpers need only `http()`: point them at one running instance. */
+const remote = (instance: ApiInstance) => ({ http: () => request(instance.baseUrl) }) as unknown as TestApp;
+
+async function waitFor<T>(read: () => Promise<T>, done: (v: T) => boolean, timeoutMs = 120_000): Promise<T> {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const v = await read();
+    if (done(v)) return v;
+    if (Date.now() > until) throw new Error(`timed out waiting; last value: ${JSON.stringify(v)}`);
+    await new Promise((r) => setTimeout(r, 200));
+  }
+}
+
+interface SseEvent {
+  event: string;
+  data: unknown;
+}
+
+/** Follows a run's event stream on one instance until its `end` event (or the stream closes). */
+function follow(
+  instance: ApiInstance,
+  token: string,
+  runId: string,
+): { events: SseEvent[]; ended: Promise<void> } {
+  const events: SseEvent[] = [];
+  const ended = (async () => {
+    const res = await fetch(`${instance.baseUrl}${api(R.solveRunEvents(runId))}`, {
+      headers: { Authorization: `Bearer ${token}` },
+    });
+    if (!res.ok || !res.body) throw new Error(`events: ${res.status}`);
+    const decoder = new TextDecoder();
+    let buffer = '';
+    for await (const chunk of res.body as unknown as AsyncIterable<Uint8Array>) {
+      buffer += decoder.decode(chunk, { stream: true });
+      let cut: number;
+      while ((cut = buffer.indexOf('\n\n')) >= 0) {
+        const lines = buffer
+          .slice(0, cut)
+          .split('\n')
+          .filter((l) => l && !l.startsWith(':'));
+        buffer = buffer.slice(cut + 2);
+        if (!lines.length) continue;
+        events.push({
+          event: lines.find((l) => l.startsWith('event: '))?.slice(7) ?? 'message',
+          data: JSON.parse(
+            lines
+              .filter((l) => l.startsWith('data: '))
+              .map((l) => l.slice(6))
+              .join('\n'),
+          ),
+        });
+      }
+      if (events.some((e) => e.event === 'end')) break;
+    }
+  })();
+  return { events, ended };
+}
+
+const ON_POSTGRES = process.env.SCALE_OUT_DB === 'postgres';
+
+describe(`scale-out: Redis, ${ON_POSTGRES ? 'PostgreSQL' : 'one SQLite file'}, two API instances, two solver workers`, () => {
+  let redis: RedisServer;
+  let data: { dir: string; remove: () => void };
+  let a: ApiInstance;
+  let b: ApiInstance;
+  const workers: Proc[] = [];
+  let queue: Queue;
+  let client: Redis;
+  let manager: string;
+  let unitId: string;
+  let postgres: PostgresCluster | null = null;
+
+  const workerEnv = { WORKER_CONCURRENCY: '1', WORKER_THREADS: '1', SOLVE_LOCK_MS: String(LOCK_MS) };
+  const addWorker = async (name: string) => {
+    const w = await startWorker(name, redis.url, PREFIX, workerEnv);
+    workers.push(w);
+    return w;
+  };
+  const alive = () => workers.filter((w) => w.child.exitCode === null && w.child.signalCode === null);
+
+  beforeAll(async () => {
+    assertBuilt();
+    redis = await startRedis();
+    data = tempDataDir();
+    const dbEnv: Record<string, string> = {};
+    if (ON_POSTGRES) {
+      postgres = await startPostgresCluster();
+      dbEnv.DATABASE_URL = await postgres.createDatabase('rotaplex_scale_out');
+    }
+    const env = { SOLVE_LOCK_MS: String(LOCK_MS), ...dbEnv };
+    // One after the other: the first migrates and seeds the database, the second finds it ready.
+    a = await startApi('api-a', { redisUrl: redis.url, prefix: PREFIX, dataDir: data.dir, env });
+    b = await startApi('api-b', { redisUrl: redis.url, prefix: PREFIX, dataDir: data.dir, env });
+    await addWorker('worker-1');
+    await addWorker('worker-2');
+    client = new Redis(redis.url, { maxRetriesPerRequest: null });
+    queue = new Queue(SOLVE_QUEUE, { connection: client, prefix: PREFIX });
+    const signIn = await request(a.baseUrl)
+      .post(api('/auth/login'))
+      .send({ email: 'manager@example.com', password: DEMO_PASSWORD })
+      .expect(200);
+    manager = signIn.body.accessToken;
+    unitId = (await findUnit(remote(a), manager)).id;
+  }, 240_000);
+
+  afterAll(async () => {
+    await queue?.close();
+    client?.disconnect();
+    for (const w of workers) await stop(w);
+    for (const api of [a, b]) if (api) await stop(api);
+    await redis?.stop();
+    postgres?.stop();
+    data?.remove();
+  }, 120_000);
+
+  it('health on each instance reports the database and the Redis queue with both solver workers', async () => {
+    for (const instance of [a, b]) {
+      const health = (await request(instance.baseUrl).get(api('/health')).expect(200)).body as HealthResponse;
+      expect(health.status).toBe('ok');
+      expect(health.database).toBe('up');
+      // Two worker processes were started above; BullMQ lists the queue's workers from Redis's CLIENT LIST.
+      expect(health.queue).toMatchObject({ kind: 'redis', state: 'up', workers: 2 });
+    }
+  });
+
+  it('counts sign-in attempts across instances: the 6th attempt within a minute is refused on either', async () => {
+    // LOGIN_RATE_LIMIT 5 per address and e-mail (the default); three wrong passwords on one
+    // instance and two on the other use them up together.
+    const attempt = (instance: ApiInstance) =>
+      request(instance.baseUrl)
+        .post(api('/auth/login'))
+        .send({ email: 'staff@example.com', password: 'not-the-password' });
+    for (const instance of [a, a, a, b, b]) expect((await attempt(instance)).status).toBe(401);
+    const refused = await attempt(a);
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
+    expect((await attempt(b)).status).toBe(429);
+  });
+
+  it('generates on one instance while a browser follows progress through the other; the roster is saved', async () => {
+    const period = await createPeriod(remote(a), manager, unitId, '2031-03-03');
+    const started = await request(a.baseUrl)
+      .post(api(R.periodSolveRuns(period.id)))
+      .set(bearer(manager))
+      .send({ timeLimitSeconds: 8 })
+      .expect(202);
+    const runId = started.body.id as string;
+    const stream = follow(b, manager, runId);
+    await stream.ended;
+    const names = stream.events.map((e) => e.event);
+    expect(names[0]).toBe('status');
+    expect(names).toContain('progress');
+    expect(names[names.length - 1]).toBe('end');
+    const end = stream.events[stream.events.length - 1].data as SolveRunDto;
+    expect(end.status).toBe('finished');
+    expect(end.result?.objective).not.toBeNull();
+    // Saved by the instance that queued it; read through the other one.
+    const grid = await readGrid(remote(b), manager, period.id);
+    expect(grid.rows.some((row) => row.cells.some((c) => c.shiftTypeId !== null))).toBe(true);
+    const job = await queue.getJob(runId);
+    expect(job?.processedBy).toMatch(/^solver-/);
+  });
+
+  it("an instance's cached board read sees a cell another instance wrote", async () => {
+    const period = await createPeriod(remote(a), manager, unitId, '2031-04-07');
+    const shifts = await shiftTypesByCode(remote(a), manager, unitId);
+    const before = await readGrid(remote(b), manager, period.id);
+    await readGrid(remote(b), manager, period.id); // now cached on b
+    const cell = { staffMemberId: before.rows[0].staffMemberId, date: before.dates[2] };
+    expect(before.rows[0].cells[2].shiftTypeId).toBeNull();
+    const code = Object.keys(shifts)[0];
+    await putCell(remote(a), manager, period.id, { ...cell, shiftTypeId: shifts[code].id });
+    const after = await readGrid(remote(b), manager, period.id);
+    expect(after.rows[0].cells[2].shiftTypeId).toBe(shifts[code].id);
+  });
+
+  it('allows one active run per period across instances, and a cancel on the other instance keeps the best roster', async () => {
+    const periods = (
+      await request(a.baseUrl).get(api(P.rosterPeriods)).query({ unitId }).set(bearer(manager))
+    ).body as Page<RosterPeriodDto>;
+    const fourWeeks = periods.items.find((p) => p.status === 'draft') as RosterPeriodDto;
+    const started = await request(a.baseUrl)
+      .post(api(R.periodSolveRuns(fourWeeks.id)))
+      .set(bearer(manager))
+      .send({ timeLimitSeconds: 60 })
+      .expect(202);
+    const runId = started.body.id as string;
+    await request(b.baseUrl)
+      .post(api(R.periodSolveRuns(fourWeeks.id)))
+      .set(bearer(manager))
+      .send({ timeLimitSeconds: 60 })
+      .expect(409);
+    // Running with a roster found, as seen from the other instance.
+    await waitFor(
+      async () =>
+        (
+          await request(b.baseUrl)
+            .get(api(R.solveRun(runId)))
+            .set(bearer(manager))
+        ).body as SolveRunDto,
+      (r) => r.status === 'running' && r.progress?.objective != null,
+    );
+    const cancelled = await request(b.baseUrl)
+      .post(api(R.solveRunCancel(runId)))
+      .set(bearer(manager))
+      .expect(200);
+    expect(cancelled.body.status).toBe('cancelled');
+    expect(cancelled.body.result?.objective).not.toBeNull();
+    expect(cancelled.body.result.objective).toBeLessThanOrEqual(cancelled.body.progress.objective);
+  });
+
+  it('a solve whose worker is killed is retried on the other worker and finishes', async () => {
+    const period = await createPeriod(remote(a), manager, unitId, '2031-05-05', 14);
+    const started = await request(b.baseUrl)
+      .post(api(R.periodSolveRuns(period.id)))
+      .set(bearer(manager))
+      .send({ timeLimitSeconds: 20 })
+      .expect(202);
+    const runId = started.body.id as string;
+    const first = await waitFor(
+      async () => (await queue.getJob(runId))?.processedBy,
+      (name) => Boolean(name),
+    );
+    const victim = workers.find((w) => first?.endsWith(`-${w.child.pid}`)) as Proc;
+    expect(victim).toBeDefined();
+    victim.child.kill('SIGKILL');
+    await victim.exited;
+    const run = await waitFor(
+      async () =>
+        (
+          await request(a.baseUrl)
+            .get(api(R.solveRun(runId)))
+            .set(bearer(manager))
+        ).body as SolveRunDto,
+      (r) => ENDED.includes(r.status),
+    );
+    expect(run.status).toBe('finished');
+    const job = await queue.getJob(runId);
+    expect(job?.processedBy).not.toBe(first);
+    await addWorker('worker-3');
+  });
+
+  it('a solve whose workers die twice fails with a clear message, never left running', async () => {
+    const period = await createPeriod(remote(a), manager, unitId, '2031-06-02', 14);
+    const started = await request(a.baseUrl)
+      .post(api(R.periodSolveRuns(period.id)))
+      .set(bearer(manager))
+      .send({ timeLimitSeconds: 60 })
+      .expect(202);
+    const runId = started.body.id as string;
+    const kill = async (previous: string | undefined): Promise<string> => {
+      const name = (await waitFor(
+        async () => (await queue.getJob(runId))?.processedBy,
+        (n) => Boolean(n) && n !== previous,
+      )) as string;
+      const victim = alive().find((w) => name.endsWith(`-${w.child.pid}`)) as Proc;
+      victim.child.kill('SIGKILL');
+      await victim.exited;
+      return name;
+    };
+    const first = await kill(undefined);
+    await kill(first);
+    const run = await waitFor(
+      async () =>
+        (
+          await request(b.baseUrl)
+            .get(api(R.solveRun(runId)))
+            .set(bearer(manager))
+        ).body as SolveRunDto,
+      (r) => ENDED.includes(r.status),
+    );
+    expect(run.status).toBe('failed');
+    expect(run.errorMessage).toBe(WORKER_LOST_MESSAGE);
+    const health = (await request(b.baseUrl).get(api('/health')).expect(200)).body as HealthResponse;
+    expect(health.queue).toMatchObject({ kind: 'redis', waiting: 0, active: 0, workers: alive().length });
+  });
+
+  it('runs each scheduled job from one schedule in Redis, whatever the number of instances', async () => {
+    const maintenance = new Queue(MAINTENANCE_QUEUE, { connection: client, prefix: PREFIX });
+    const schedulers = await maintenance.getJobSchedulers();
+    expect(schedulers.map((s) => s.key).sort()).toEqual(['outbox-retention', 'swap-expiry']);
+    await maintenance.close();
+  });
+});
