@@ -112,6 +112,12 @@ describe('the quality line in words', () => {
       'Every shift has its minimum staff; everyone is within contract hours; no better roster is possible.',
     );
   });
+  it('does not claim "at most 101% better" when the bound is still too weak to say anything', () => {
+    const line = qualityLine({ result: { ...result, gap: 1.009 }, hours: new Map() });
+    expect(line).toBe(
+      '3 shifts are below minimum staffing; how much better a roster could be is not known yet.',
+    );
+  });
   it('rounds the gap once, to a tenth of a percentage point (0.12324 is 12.3%, 0.1235 is 12.4%)', () => {
     expect(gapPercent(0.12324)).toBe('12.3%');
     expect(gapPercent(0.1235)).toBe('12.4%');

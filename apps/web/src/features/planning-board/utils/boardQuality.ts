@@ -106,8 +106,9 @@ export function qualityLine({ result, hours, marks }: QualityInput): string {
   parts.push(
     result.solverStatus === 'optimal' || (gap !== null && gap <= 0.0005)
       ? 'no better roster is possible'
-      : gap === null
-        ? 'how much better a roster could be is not known'
+      : gap === null || gap >= 1
+        ? // A gap of 100% or more says nothing a manager can use: the proof had not got far.
+          'how much better a roster could be is not known yet'
         : `at most ${gapPercent(gap)} better is possible`,
   );
   const sentence = parts.join('; ');
