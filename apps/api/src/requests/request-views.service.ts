@@ -12,7 +12,7 @@ import { toPage } from '../common/pagination';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UnitEntity } from '../units/unit.entity';
+import { UnitsService } from '../units/units.service';
 import { type MyRequestsQueryDto, type RequestListQueryDto } from './dto/requests.dto';
 import { RequestAccess } from './request-access';
 import { RequestDtos, toPeriodDto } from './request-dtos';
@@ -29,6 +29,7 @@ export class RequestViews {
     private readonly dataSource: DataSource,
     private readonly access: RequestAccess,
     private readonly dtos: RequestDtos,
+    private readonly units: UnitsService,
   ) {}
 
   private get m(): EntityManager {
@@ -40,7 +41,7 @@ export class RequestViews {
     const staff = await this.access.myStaff(user);
     const ids = staff.map((s) => s.id);
     const unitIds = [...new Set(staff.map((s) => s.unitId))];
-    const units = unitIds.length ? await this.m.findBy(UnitEntity, { id: In(unitIds) }) : [];
+    const units = unitIds.length ? await this.units.ofOrganisation(user.organisationId, unitIds) : [];
     const unitById = new Map(units.map((u) => [u.id, u]));
     const periods = unitIds.length
       ? await this.m.find(RosterPeriodEntity, {
