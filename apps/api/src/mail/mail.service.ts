@@ -56,7 +56,7 @@ export class MailService {
       lastError: null,
       sentAt: null,
     });
-    if (em) this.delivery.wake();
+    if (em) this.delivery.wakeAfterCommit(em);
     else await this.delivery.deliverNow(id);
   }
 }

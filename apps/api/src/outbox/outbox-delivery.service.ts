@@ -1,7 +1,7 @@
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { createTransport, type Transporter } from 'nodemailer';
-import { Like, Not, Repository } from 'typeorm';
+import { type EntityManager, Like, Not, type QueryRunner, Repository } from 'typeorm';
 import { AppConfig, type OutboxSettings } from '../config/app-config';
 import { MailBodyCipher, outboxBodyContext, SEALED_PREFIX } from '../mail/mail-body-cipher';
 import { MailCatcherService } from '../mail/mail-catcher.service';
@@ -39,6 +39,8 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
   private wakeLoop: (() => void) | null = null;
   private wakeRequested = false;
   private readonly inFlight = new Set<Promise<unknown>>();
+  /** Connections whose open transaction queued a message: the loop wakes when it commits. */
+  private readonly wakeOnCommit = new WeakSet<QueryRunner>();
 
   constructor(
     private readonly config: AppConfig,
@@ -47,6 +49,15 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
     @InjectRepository(OutboxMessageEntity) private readonly messages: Repository<OutboxMessageEntity>,
   ) {
     this.settings = config.outbox;
+    messages.manager.connection.subscribers.push({
+      afterTransactionCommit: (e) => {
+        if (e.queryRunner && !e.queryRunner.isTransactionActive && this.wakeOnCommit.delete(e.queryRunner))
+          this.wake();
+      },
+      afterTransactionRollback: (e) => {
+        if (e.queryRunner && !e.queryRunner.isTransactionActive) this.wakeOnCommit.delete(e.queryRunner);
+      },
+    });
   }
 
   async onApplicationBootstrap(): Promise<void> {
@@ -92,6 +103,17 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
       }
     });
     this.logger.log(`Encrypted the bodies of ${plain.length} message(s) queued before bodies were sealed`);
+  }
+
+  /**
+   * Wakes the loop once the transaction `em` runs in has committed (at once outside a
+   * transaction). On SQLite the loop's query would wait for that transaction anyway; on PostgreSQL
+   * it runs on another connection and would not see the message before the commit.
+   */
+  wakeAfterCommit(em: EntityManager): void {
+    const runner = em.queryRunner;
+    if (runner?.isTransactionActive) this.wakeOnCommit.add(runner);
+    else this.wake();
   }
 
   /** Asks the loop to look for due messages now (new message, or a retry by an admin). */

@@ -47,7 +47,8 @@ export class SwapRequestEntity {
   @JoinColumn({ name: 'rosterPeriodId' })
   rosterPeriod?: RosterPeriodEntity;
 
-  @Column({ type: 'varchar' })
+  // uuid: a varchar on SQLite, PostgreSQL's uuid there (compared with units.id).
+  @Column({ type: 'uuid' })
   unitId!: string;
 
   @Column({ type: 'varchar', length: 8 })
@@ -71,7 +72,7 @@ export class SwapRequestEntity {
   colleague?: StaffMemberEntity | null;
 
   /** Open-shift claims: the skill of the need claimed (null: any). */
-  @Column({ type: 'varchar', nullable: true })
+  @Column({ type: 'uuid', nullable: true })
   skillId!: string | null;
 
   /** JSON array of {@link StoredCellChange}. */
