@@ -164,8 +164,7 @@ function PlanBody({ period, plan, shiftTypes, skills }: PlanBodyProps) {
           </MessageBarBody>
         </MessageBar>
       )}
-      <AcceptSection period={period} plan={plan} shiftTypes={shiftTypes} skills={skills} />
-      {cc && <ContactPlan plan={cc} dates={plan.dates} shiftTypes={shiftTypes} />}
+      {cc && <ContactPlanSummary plan={cc} dates={plan.dates} shiftTypes={shiftTypes} />}
       {plan.ward && (
         <section className={planning.panel} aria-labelledby="ward-requirement">
           <Subtitle1 as="h2" id="ward-requirement">
@@ -184,12 +183,14 @@ function PlanBody({ period, plan, shiftTypes, skills }: PlanBodyProps) {
           </div>
         </section>
       )}
+      <AcceptSection period={period} plan={plan} shiftTypes={shiftTypes} skills={skills} />
+      {cc && <ContactCharts plan={cc} dates={plan.dates} />}
       <Acceptances periodId={period.id} />
     </div>
   );
 }
 
-function ContactPlan({
+function ContactPlanSummary({
   plan,
   dates,
   shiftTypes,
@@ -200,6 +201,46 @@ function ContactPlan({
 }) {
   const styles = useStyles();
   const planning = usePlanningStyles();
+  const peak = plan.requirement.reduce((m, r) => Math.max(m, r.scheduled), 0);
+  const s = plan.service;
+  return (
+    <section className={planning.panel} aria-labelledby="covering-plan">
+      <Subtitle1 as="h2" id="covering-plan">
+        Covering plan
+      </Subtitle1>
+      <Body1>
+        {`Erlang C gives the fewest agents for ${s.targetPercent}% of contacts answered within ${s.targetSeconds} s with occupancy at most ${s.maxOccupancyPercent}%; ${s.shrinkagePercent}% shrinkage is added on top. The plan then opens the shifts that cover every interval at the fewest paid hours.`}
+      </Body1>
+      <dl className={styles.figures}>
+        <div>
+          <dt>Paid hours</dt>
+          <dd>{plan.paidHours.toFixed(1)}</dd>
+        </div>
+        <div>
+          <dt>Requirement at its peak</dt>
+          <dd>{`${peak} people`}</dd>
+        </div>
+        <div>
+          <dt>Plan</dt>
+          <dd>{plan.solverStatus === 'optimal' ? 'Fewest paid hours' : 'Best found in the time limit'}</dd>
+        </div>
+      </dl>
+      <Body1>{underCoverWords(plan)}</Body1>
+      <div className={styles.tableScroll}>
+        <StartsTable plan={plan} dates={dates} shiftTypes={shiftTypes} />
+      </div>
+    </section>
+  );
+}
+
+function ContactCharts({
+  plan,
+  dates,
+}: {
+  plan: NonNullable<DemandPlanDto['contactCentre']>;
+  dates: readonly string[];
+}) {
+  const styles = useStyles();
   const busiest = dates.reduce((best, d) => {
     const sum = (x: string) =>
       plan.requirement.filter((r) => r.start.startsWith(x)).reduce((s, r) => s + r.contacts, 0);
@@ -210,36 +251,9 @@ function ContactPlan({
   const [week, setWeek] = useState(0);
   const dayPoints = busyPart(intervalPoints(plan, [day], false));
   const weekPoints = intervalPoints(plan, weeks[week] ?? [], true);
-  const peak = plan.requirement.reduce((m, r) => Math.max(m, r.scheduled), 0);
   const s = plan.service;
   return (
     <>
-      <section className={planning.panel} aria-labelledby="covering-plan">
-        <Subtitle1 as="h2" id="covering-plan">
-          Covering plan
-        </Subtitle1>
-        <Body1>
-          {`Erlang C gives the fewest agents for ${s.targetPercent}% of contacts answered within ${s.targetSeconds} s with occupancy at most ${s.maxOccupancyPercent}%; ${s.shrinkagePercent}% shrinkage is added on top. The plan then opens the shifts that cover every interval at the fewest paid hours.`}
-        </Body1>
-        <dl className={styles.figures}>
-          <div>
-            <dt>Paid hours</dt>
-            <dd>{plan.paidHours.toFixed(1)}</dd>
-          </div>
-          <div>
-            <dt>Requirement at its peak</dt>
-            <dd>{`${peak} people`}</dd>
-          </div>
-          <div>
-            <dt>Plan</dt>
-            <dd>{plan.solverStatus === 'optimal' ? 'Cheapest found' : 'Best found in the time'}</dd>
-          </div>
-        </dl>
-        <Body1>{underCoverWords(plan)}</Body1>
-        <div className={styles.tableScroll}>
-          <StartsTable plan={plan} dates={dates} shiftTypes={shiftTypes} />
-        </div>
-      </section>
       <div className={styles.pickers}>
         <Field label="Day" className={styles.picker}>
           <Select value={day} onChange={(_, d) => setDay(d.value)}>

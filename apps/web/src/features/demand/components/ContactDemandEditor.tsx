@@ -244,6 +244,7 @@ export function ContactDemandEditor(props: ContactDemandEditorProps) {
             max={DEMAND_LIMITS.maxPeoplePerDay}
             emptyIsZero={false}
             onChange={(v) => setDraft((x) => ({ ...x, maxPeoplePerDay: v }))}
+            onEmpty={() => setDraft((x) => ({ ...x, maxPeoplePerDay: null }))}
           />
         </Field>
       </div>

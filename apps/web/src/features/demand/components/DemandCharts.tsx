@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { TableCell, TableRow } from '@fluentui/react-components';
 import {
   Bar,
@@ -20,21 +21,20 @@ import { DEMAND_COLOURS } from './demandColours';
 const fmt = (n: number | null, digits = 1) =>
   n === null ? '–' : Number.isInteger(n) ? String(n) : n.toFixed(digits);
 
-/** How many axis labels to skip so that a day or a week stays readable. */
-const tickGap = (points: number) => Math.max(0, Math.ceil(points / 12) - 1);
-
 export interface DemandCoverChartProps {
   title: string;
   points: readonly IntervalPoint[];
   /** Compact: no contacts bars, a lower chart (the planning board's panel). */
   compact?: boolean;
+  /** Said after the summary (a link to more). */
+  extra?: ReactNode;
 }
 
 /**
  * Demand (contacts, bars on their own axis), the requirement after shrinkage, the plan's people and
  * the rostered people per interval (step lines), with the same numbers as a table.
  */
-export function DemandCoverChart({ title, points, compact = false }: DemandCoverChartProps) {
+export function DemandCoverChart({ title, points, compact = false, extra }: DemandCoverChartProps) {
   const short = rosteredShortfall(points);
   const contacts = points.reduce((s, p) => s + p.contacts, 0);
   const peak = points.reduce((m, p) => Math.max(m, p.required), 0);
@@ -46,22 +46,22 @@ export function DemandCoverChart({ title, points, compact = false }: DemandCover
   return (
     <ChartSection
       title={title}
-      summary={summary}
+      summary={
+        <>
+          {summary}
+          {extra && <> {extra}</>}
+        </>
+      }
       chart={
         <ComposedChart
           data={[...points]}
           responsive
           accessibilityLayer={false}
           style={{ width: '100%', height: compact ? '12rem' : '20rem' }}
-          margin={{ left: 0, right: 8 }}
+          margin={{ left: 8, right: 16 }}
         >
           <CartesianGrid stroke={CHART_COLOURS.grid} vertical={false} />
-          <XAxis
-            dataKey="label"
-            stroke={CHART_COLOURS.text}
-            interval={tickGap(points.length)}
-            minTickGap={8}
-          />
+          <XAxis dataKey="label" stroke={CHART_COLOURS.text} interval="preserveStartEnd" minTickGap={16} />
           <YAxis yAxisId="people" allowDecimals={false} stroke={CHART_COLOURS.text} width={32} />
           {!compact && (
             <YAxis yAxisId="contacts" orientation="right" stroke={CHART_COLOURS.text} width={40} />
@@ -114,7 +114,7 @@ export function DemandCoverChart({ title, points, compact = false }: DemandCover
       table={
         <DataTable
           label={`${title}: figures`}
-          columns={['Interval', 'Contacts', 'Agents (Erlang C)', 'Requirement', 'Plan', 'Rostered']}
+          columns={['Interval', 'Contacts', 'Agents (Erlang C)', 'Required', 'Plan', 'Rostered']}
           size="small"
         >
           {points.map((p) => (
@@ -157,15 +157,10 @@ export function ServiceLevelChart({ title, points, targetPercent, targetSeconds 
           responsive
           accessibilityLayer={false}
           style={{ width: '100%', height: '16rem' }}
-          margin={{ left: 0, right: 8 }}
+          margin={{ left: 8, right: 16 }}
         >
           <CartesianGrid stroke={CHART_COLOURS.grid} vertical={false} />
-          <XAxis
-            dataKey="label"
-            stroke={CHART_COLOURS.text}
-            interval={tickGap(points.length)}
-            minTickGap={8}
-          />
+          <XAxis dataKey="label" stroke={CHART_COLOURS.text} interval="preserveStartEnd" minTickGap={16} />
           <YAxis domain={[0, 100]} unit="%" stroke={CHART_COLOURS.text} width={44} />
           <Tooltip />
           <Legend formatter={legendText} />

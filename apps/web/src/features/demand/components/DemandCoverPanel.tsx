@@ -1,4 +1,4 @@
-import { Body1, makeStyles, Subtitle2, tokens } from '@fluentui/react-components';
+import { Body1, makeStyles, tokens } from '@fluentui/react-components';
 import type { RosterPeriodDto } from '@rotaplex/contracts';
 import { useQuery } from '@tanstack/react-query';
 import { PATHS } from '@/app/paths';
@@ -6,7 +6,7 @@ import { AppLink } from '@/ui/AppLink';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { LoadingState } from '@/ui/LoadingState';
 import { demandPlanQuery, unitDemandQuery } from '../api/demand.queries';
-import { intervalPoints, rosteredShortfall } from '../utils/demandFigures';
+import { intervalPoints } from '../utils/demandFigures';
 import { DemandCoverChart } from './DemandCharts';
 
 const useStyles = makeStyles({
@@ -16,7 +16,6 @@ const useStyles = makeStyles({
     gap: tokens.spacingVerticalS,
     marginTop: tokens.spacingVerticalL,
   },
-  head: { display: 'flex', flexWrap: 'wrap', alignItems: 'baseline', gap: tokens.spacingHorizontalM },
 });
 
 export interface DemandCoverPanelProps {
@@ -49,28 +48,18 @@ export function DemandCoverPanel({ period }: DemandCoverPanelProps) {
       </section>
     );
   const cc = plan.data?.contactCentre;
-  const points = cc ? intervalPoints(cc, plan.data!.dates, true) : [];
-  const short = rosteredShortfall(points);
   return (
-    <section className={styles.root} aria-labelledby="board-demand-heading">
-      <div className={styles.head}>
-        <Subtitle2 as="h2" id="board-demand-heading">
-          Requirement against rostered cover
-        </Subtitle2>
-        {link}
-      </div>
+    <div className={styles.root}>
       {plan.isError && <ErrorBanner error={plan.error} onRetry={() => void plan.refetch()} />}
       {plan.isPending && <LoadingState label="Working out the requirement…" />}
       {cc && (
-        <>
-          <Body1>
-            {short.intervals === 0
-              ? 'The rostered people meet the forecast requirement in every interval of the period.'
-              : `The rostered people are below the forecast requirement in ${short.intervals} intervals of the period.`}
-          </Body1>
-          <DemandCoverChart title="Requirement and rostered people per interval" points={points} compact />
-        </>
+        <DemandCoverChart
+          title="Requirement against rostered cover"
+          points={intervalPoints(cc, plan.data!.dates, true)}
+          compact
+          extra={link}
+        />
       )}
-    </section>
+    </div>
   );
 }

@@ -10,6 +10,7 @@ import { LoadingState } from '@/ui/LoadingState';
 import { addDays } from '../utils/demandFigures';
 
 const useStyles = makeStyles({
+  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalL, display: 'grid', gap: tokens.spacingVerticalXS },
   muted: { color: tokens.colorNeutralForeground3 },
 });
@@ -20,7 +21,7 @@ export function DemandPeriodsList({ unit }: { unit: UnitDto }) {
   const periods = useQuery(rosterPeriodsQuery(unit.id));
   const open = (periods.data ?? []).filter((p) => p.status !== 'archived');
   return (
-    <section aria-labelledby="demand-periods">
+    <section className={styles.root} aria-labelledby="demand-periods">
       <Subtitle1 as="h2" id="demand-periods">
         Plans of the roster periods
       </Subtitle1>

@@ -11,6 +11,8 @@ export interface NumberCellProps {
   /** Called with each valid number typed (an empty cell counts as 0 when `emptyIsZero`). */
   onChange: (value: number) => void;
   emptyIsZero?: boolean;
+  /** An empty cell is allowed and means "none" (reported through this callback). */
+  onEmpty?: () => void;
   step?: number;
 }
 
@@ -22,12 +24,13 @@ export function NumberCell({
   max,
   onChange,
   emptyIsZero = true,
+  onEmpty,
   step = 1,
 }: NumberCellProps) {
   const styles = useStyles();
   const [text, setText] = useState(value === undefined ? '' : String(value));
   const n = text.trim() === '' && emptyIsZero ? 0 : Number(text);
-  const invalid = text.trim() === '' ? !emptyIsZero : !Number.isFinite(n) || n < min || n > max;
+  const invalid = text.trim() === '' ? !emptyIsZero && !onEmpty : !Number.isFinite(n) || n < min || n > max;
   return (
     <Input
       className={styles.input}
@@ -42,6 +45,7 @@ export function NumberCell({
       value={text}
       onChange={(_, d) => {
         setText(d.value);
+        if (d.value.trim() === '' && !emptyIsZero && onEmpty) return onEmpty();
         const v = d.value.trim() === '' && emptyIsZero ? 0 : Number(d.value);
         if (d.value.trim() !== '' || emptyIsZero) if (Number.isFinite(v) && v >= min && v <= max) onChange(v);
       }}
