@@ -11,6 +11,7 @@ import { construct } from '../heuristic/construct';
 import { ProblemIndex, type Grid } from '../model/context';
 import { randomProblem } from '../model/random.test-helpers';
 import { solveRoster } from '../solve/solve';
+import { LineDp } from './line-dp';
 import { RosterSearch, searchRoster } from './roster-search';
 
 const LONG = 1e9;
@@ -29,6 +30,44 @@ describe('searchRoster', () => {
       feasible++;
       expect(result.objective).toBeCloseTo(check.objective, 6);
       // Pins hold and nobody works a blocked cell.
+      for (const pin of problem.pins) expect(result.roster[pin.personId][pin.day]).toBe(pin.shiftTypeId);
+      for (const a of problem.absences) expect(result.roster[a.personId][a.day]).toBeNull();
+    }
+    expect(feasible).toBeGreaterThanOrEqual(7);
+  });
+
+  it('keeps its totals right with best-line and two-line moves (random problems, checked by the checker)', () => {
+    let feasible = 0;
+    for (let seed = 1; seed <= 10; seed++) {
+      const problem = randomProblem(seed, 6, 14);
+      const index = new ProblemIndex(problem);
+      const dp = new LineDp(index);
+      const after: [number, ReturnType<typeof checkRoster>][] = [];
+      const start = construct(problem, { maxIterations: 500, seed });
+      const result = searchRoster(index, start, {
+        maxMoves: 50_000,
+        timeLimitMs: LONG,
+        seed,
+        lineSolver: (p, extra) => dp.solve(p, extra),
+        lineShare: 0.5,
+        linePair: 0.5,
+        // After every line move the running totals are those of the roster (exact bookkeeping).
+        afterLineMove: (soft, hard, grid) => {
+          if (hard === 0) after.push([soft, checkRoster(problem, index.fromGrid(grid()), index)]);
+        },
+      });
+      expect(after.length).toBeGreaterThan(0);
+      for (const [objective, check] of after) {
+        expect(check.violations).toEqual([]);
+        expect(objective).toBeCloseTo(check.objective, 6);
+      }
+      // The line moves ran (they are due by time, so their number varies from run to run).
+      expect(dp.calls).toBeGreaterThan(index.P);
+      const check = checkRoster(problem, result.roster, index);
+      expect(result.feasible).toBe(check.violations.length === 0);
+      if (!result.feasible) continue;
+      feasible++;
+      expect(result.objective).toBeCloseTo(check.objective, 6);
       for (const pin of problem.pins) expect(result.roster[pin.personId][pin.day]).toBe(pin.shiftTypeId);
       for (const a of problem.absences) expect(result.roster[a.personId][a.day]).toBeNull();
     }

@@ -12,7 +12,10 @@
  * - change one cell to another shift type or a day off;
  * - swap two people's cells over 1-7 consecutive days (keeps cover when their skills match);
  * - set a block of 2-5 consecutive days of one person to one shift type or to days off;
- * - hand a shift to a colleague who is off that day, or take one over (a one-day swap with a day off).
+ * - hand a shift to a colleague who is off that day, or take one over (a one-day swap with a day off);
+ * - with a line solver (line-dp.ts), for a share of the time: replace one person's line by the best
+ *   line given everybody else, or clear two people's lines and rebuild both that way (ruin and
+ *   recreate); lines that break a rule are replaced so at the start and at each restart.
  * Hard rules are a priced part of the cost (weight `hardWeight` per unit of line-cost.ts's size),
  * which lets the search pass through rosters that break a rule; only rosters that break none count
  * as results. The weight rises while the search stays on rosters that break rules.
@@ -100,6 +103,10 @@ export interface RosterSearchOptions {
   lineSolver?: (p: number, extra: Float64Array) => Int16Array | null;
   /** Share of the time for line moves (default LINE_SHARE). */
   lineShare?: number;
+  /** Share of line moves that rebuild two people's lines (default LINE_PAIR). */
+  linePair?: number;
+  /** After each accepted line move: the running totals and the roster (for tests of the totals). */
+  afterLineMove?: (soft: number, hard: number, roster: () => Grid) => void;
 }
 
 export interface RosterSearchResult {
@@ -120,6 +127,8 @@ const MOVE_WITHIN = 3;
 const MOVE_LINE = 4;
 /** Share of the search's time spent on best-line moves (one costs as much as 1,000-100,000 moves). */
 const LINE_SHARE = 0.2;
+/** Share of line moves that clear two people's lines and rebuild both (ruin and recreate). */
+const LINE_PAIR = 0.25;
 /**
  * Strategic oscillation of the hard-rule weight, looked at every 4,096 moves: dearer (×1.2) when more
  * than RAISE_ABOVE of them were spent on rosters that break a rule, cheaper (÷1.1) below LOWER_BELOW.
@@ -416,6 +425,7 @@ export class RosterSearch {
 
     const lineSolver = options.lineSolver;
     const lineShare = options.lineShare ?? LINE_SHARE;
+    const linePair = options.linePair ?? LINE_PAIR;
     let lineMs = 0;
     let lineDue = false;
     if (lineSolver && this.hard > 0) this.repairLines(lineSolver);
@@ -535,13 +545,31 @@ export class RosterSearch {
       } else if (kind === MOVE_LINE) {
         // One person's best line with the others fixed; while rules are broken, a line that breaks one.
         lineDue = false;
-        const q = this.hard > 0 ? this.brokenLine(Math.floor(random() * P)) : p1;
         const lineStart = performance.now();
-        const dLine = q < 0 ? NaN : this.applyLine(q, lineSolver!);
-        lineMs += performance.now() - lineStart;
-        if (Number.isNaN(dLine)) continue;
-        dCover += dLine;
-        p1 = q;
+        if (this.hard === 0 && people2 && random() < linePair) {
+          // Two people's lines cleared and rebuilt one after the other, each the best given the rest.
+          p2 = Math.floor(random() * P);
+          if (p2 === p1) p2 = (p1 + 1) % P;
+          for (let d = 0; d < D; d++) {
+            if (this.grid[p1 * D + d] >= 0 && this.mayHold(p1, d, -1)) dCover += this.change(p1, d, -1);
+            if (this.grid[p2 * D + d] >= 0 && this.mayHold(p2, d, -1)) dCover += this.change(p2, d, -1);
+          }
+          const a = this.applyLine(p1, lineSolver!);
+          const b = this.applyLine(p2, lineSolver!);
+          lineMs += performance.now() - lineStart;
+          if (Number.isNaN(a) || Number.isNaN(b)) {
+            this.undoMove(p1, p2);
+            continue;
+          }
+          dCover += a + b;
+        } else {
+          const q = this.hard > 0 ? this.brokenLine(Math.floor(random() * P)) : p1;
+          const dLine = q < 0 ? NaN : this.applyLine(q, lineSolver!);
+          lineMs += performance.now() - lineStart;
+          if (Number.isNaN(dLine)) continue;
+          dCover += dLine;
+          p1 = q;
+        }
       } else if (kind === MOVE_WITHIN) {
         // Two days of one person's line trade places (hours stay the same).
         const d1 = Math.floor(random() * D);
@@ -592,6 +620,7 @@ export class RosterSearch {
         this.hard += this.dHard;
         this.soft += dSoft;
         if (this.hard < 0.5) this.hard = this.exactHard();
+        if (kind === MOVE_LINE) options.afterLineMove?.(this.soft, this.hard, () => this.toGrid());
         if (this.hard === 0) {
           if (this.soft < best - 1e-9) {
             best = this.soft;
@@ -651,21 +680,17 @@ export class RosterSearch {
 
   /**
    * Sets person p's line to the line solver's answer through `change` (so the move can be undone) and
-   * returns the change in cover cost; NaN (nothing changed) when the solver has none, it equals the
-   * current line, or it would move a cell the search may not hold.
+   * returns the change in cover cost; NaN (nothing changed) when the solver has none or it would
+   * move a cell the search may not hold.
    */
   private applyLine(p: number, solver: NonNullable<RosterSearchOptions['lineSolver']>): number {
     const line = solver(p, this.coverExtra(p));
     if (!line) return NaN;
     const { D } = this;
-    let differs = false;
     for (let d = 0; d < D; d++) {
       const v = line[d];
-      if (v === this.grid[p * D + d]) continue;
-      if (!this.mayHold(p, d, v)) return NaN;
-      differs = true;
+      if (v !== this.grid[p * D + d] && !this.mayHold(p, d, v)) return NaN;
     }
-    if (!differs) return NaN;
     let dCover = 0;
     for (let d = 0; d < D; d++) {
       if (line[d] !== this.grid[p * D + d]) dCover += this.change(p, d, line[d]);
