@@ -87,7 +87,7 @@ describe('demand to cover needs as the demo manager', () => {
       .getByRole('link', { name: 'Demand', exact: true })
       .click();
     await page.getByRole('heading', { name: 'Demand', level: 1 }).waitFor();
-    await page.getByLabel('Unit').selectOption({ label: 'Contact Centre North' });
+    await page.getByRole('combobox', { name: 'Unit' }).selectOption({ label: 'Contact Centre North' });
     await page.getByRole('table', { name: 'Contacts per interval' }).waitFor();
     // Demo data (apps/api/src/demo/demo-demand.ts): weekdays 11:00 has 11 contacts, 5-minute AHT.
     expect(await page.getByLabel('Contacts Mon 11:00', { exact: true }).inputValue()).toBe('11');
@@ -157,6 +157,20 @@ describe('demand to cover needs as the demo manager', () => {
       [4, 14],
       [5, 14],
     ]);
+
+    // A change typed in the grid is saved with the rest of the forecast.
+    await page.getByLabel('Contacts Tue 10:00', { exact: true }).fill('9');
+    await page.getByRole('button', { name: 'Save forecast' }).click();
+    const tuesday10 = async () =>
+      (await apiCall<UnitDemandDto>(token, 'GET', D.demand(unit.id)))
+        .contactCentre!.pattern.find((d) => d.weekday === 2)!
+        .intervals.find((i) => i.start === '10:00')?.contacts;
+    expect(await eventually(async () => ((await tuesday10()) === 9 ? 9 : undefined), 'the saved grid')).toBe(
+      9,
+    );
+    await page.getByLabel('Contacts Tue 10:00', { exact: true }).fill('8');
+    await page.getByRole('button', { name: 'Save forecast' }).click();
+    await eventually(async () => ((await tuesday10()) === 8 ? true : undefined), 'the grid saved back');
   });
 
   it("shows the period's plan: requirement from Erlang C, the covering shifts and the charts", async () => {
@@ -272,12 +286,12 @@ describe('demand to cover needs as the demo manager', () => {
     await page.getByRole('heading', { name: 'Demand plan: Contact Centre North' }).waitFor();
   });
 
-  it("shows a ward's patients and ratios with the ratio caution", async () => {
+  it("shows a ward's patients and ratios with the ratio caution, and a ward period's requirement", async () => {
     const { page } = browser;
     await signOut(page);
     await signIn(page, 'manager@example.com');
     await page.goto('/planning/demand');
-    await page.getByLabel('Unit').selectOption({ label: 'Ward 7 Acute Medicine' });
+    await page.getByRole('combobox', { name: 'Unit' }).selectOption({ label: 'Ward 7 Acute Medicine' });
     await page.getByRole('table', { name: 'Ratios per skill' }).waitFor();
     await page.getByText(RATIO_CAUTION).first().waitFor();
     await page.getByRole('table', { name: 'Expected patients per shift' }).waitFor();
@@ -286,5 +300,32 @@ describe('demand to cover needs as the demo manager', () => {
     await page.setViewportSize({ width: 390, height: 844 });
     await screenshot(page, 'demand-ward-phone');
     await page.setViewportSize({ width: 1360, height: 860 });
+
+    // The plan of a ward period: per skill ceil(sum of patients / patients per person), never
+    // below the floor (formula of docs/demand.md). Demo Early shift: 12 low, 6 medium, 2 high
+    // patients; registered nurses 8 / 6 / 4 per person, floor 2: 12/8 + 6/6 + 2/4 = 3 -> 3;
+    // healthcare assistants 12 / 10 / 6, floor 1: 1 + 0.6 + 0.33 = 1.93 -> 2.
+    await page
+      .getByRole('link', { name: /^Plan for / })
+      .first()
+      .click();
+    await page.getByRole('heading', { name: 'Demand plan: Ward 7 Acute Medicine' }).waitFor();
+    const table = page.getByRole('table', { name: 'Ward requirement per shift' });
+    const early = (skill: string) =>
+      table
+        .getByRole('row')
+        .filter({ hasText: 'Early' })
+        .filter({ hasText: skill })
+        .first()
+        .getByRole('cell');
+    expect((await early('Registered nurse').allInnerTexts()).slice(3)).toEqual(['12 / 6 / 2', '3', '2', '3']);
+    expect((await early('Healthcare assistant').allInnerTexts()).slice(3)).toEqual([
+      '12 / 6 / 2',
+      '2',
+      '1',
+      '2',
+    ]);
+    await page.getByText(RATIO_CAUTION).first().waitFor();
+    await screenshot(page, 'demand-ward-plan');
   });
 });
