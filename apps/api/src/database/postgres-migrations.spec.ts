@@ -15,6 +15,7 @@ import { MIGRATIONS } from './migrations';
 import { POSTGRES_BASELINE_COVERS, POSTGRES_MIGRATIONS } from './migrations/postgres';
 import { POSTGRES_BIN, type PostgresCluster, startPostgresCluster } from './postgres-cluster';
 import { isRetryableConflict, serialisableTransactions } from './postgres-transactions';
+import { WriteGeneration } from './write-generation';
 
 /**
  * The PostgreSQL side of the schema, on a real PostgreSQL 15 from Debian (a throwaway cluster):
@@ -242,6 +243,31 @@ describe('PostgreSQL schema and transactions', () => {
       expect(lost).toBe(n - 1);
     } finally {
       await plain.destroy();
+    }
+  });
+
+  it("moves the read caches' write generation when each of two overlapping transactions ends", async () => {
+    const ds = await open();
+    try {
+      const writes = new WriteGeneration(ds);
+      let wrote: () => void = () => undefined;
+      const written = new Promise<void>((resolve) => (wrote = resolve));
+      let release: () => void = () => undefined;
+      const gate = new Promise<void>((resolve) => (release = resolve));
+      const first = ds.transaction(async (em) => {
+        await em.save(em.create(OrganisationEntity, { name: 'First' }));
+        wrote();
+        await gate;
+      });
+      await written;
+      await ds.transaction((em) => em.save(em.create(OrganisationEntity, { name: 'Second' })));
+      const afterSecond = writes.current();
+      release();
+      await first;
+      // The first transaction's rows became visible to other connections only now.
+      expect(writes.current()).toBeGreaterThan(afterSecond);
+    } finally {
+      await ds.destroy();
     }
   });
 
