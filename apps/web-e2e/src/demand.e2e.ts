@@ -10,6 +10,7 @@ import {
   type UnitDto,
 } from '@rotaplex/contracts';
 import { apiCall, apiSignIn, createPeriod, findWard, shiftIdsByCode } from './support/api';
+import { seriousViolations } from './support/axe';
 import {
   eventually,
   openBrowser,
@@ -99,6 +100,8 @@ describe('demand to cover needs as the demo manager', () => {
     expect(await page.getByLabel('Average handle time Mon 11:00', { exact: true }).inputValue()).toBe('300');
     await page.getByRole('tab', { name: 'Contacts' }).click();
     expect(await unnamedControls(page)).toEqual([]);
+    // axe-core, WCAG 2.1 A and AA: no serious or critical violation.
+    expect(await seriousViolations(page)).toEqual([]);
     await screenshot(page, 'demand-contact');
     await page.setViewportSize({ width: 390, height: 844 });
     await screenshot(page, 'demand-contact-phone');
@@ -215,6 +218,8 @@ describe('demand to cover needs as the demo manager', () => {
     );
     await page.getByText(ERLANG_CAUTION).waitFor();
     expect(await unnamedControls(page)).toEqual([]);
+    // axe-core, WCAG 2.1 A and AA: no serious or critical violation.
+    expect(await seriousViolations(page)).toEqual([]);
     await screenshot(page, 'demand-plan');
     await page.setViewportSize({ width: 390, height: 844 });
     await screenshot(page, 'demand-plan-phone');
@@ -296,6 +301,8 @@ describe('demand to cover needs as the demo manager', () => {
     await page.getByText(RATIO_CAUTION).first().waitFor();
     await page.getByRole('table', { name: 'Expected patients per shift' }).waitFor();
     expect(await unnamedControls(page)).toEqual([]);
+    // axe-core, WCAG 2.1 A and AA: no serious or critical violation.
+    expect(await seriousViolations(page)).toEqual([]);
     await screenshot(page, 'demand-ward');
     await page.setViewportSize({ width: 390, height: 844 });
     await screenshot(page, 'demand-ward-phone');
