@@ -3,6 +3,7 @@ import { type EntityManager } from 'typeorm';
 import { localDate } from '../common/dates';
 import { ContractEntity } from '../contracts/contract.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
+import { LeaveRequestEntity } from '../requests/requests.entities';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
@@ -112,7 +113,48 @@ export const DEMO_CONTRACTS: { name: string; rules: ContractRules }[] = [
 ];
 
 /** Demo people on the part-time contract. */
-const PART_TIME = new Set(['Beth Lindqvist', 'Lucy Fenwick', 'Ana Ferreira', 'Marco Bellini']);
+const PART_TIME = new Set([
+  'Beth Lindqvist',
+  'Lucy Fenwick',
+  'Ana Ferreira',
+  'Marco Bellini',
+  'Joel Pemberton',
+  'Rosa Quintrell',
+  'Tariq Osei',
+]);
+
+/**
+ * Ward staff on the roster without a sign-in (invented people). With them the ward can meet every
+ * minimum: a 2-in-4 weekend rule gives each person two weekends of the four, so the weekend's
+ * registered-nurse minimums (2 + 2 + 2 per day, 12 per weekend) need at least 12 nurses and the
+ * healthcare assistants' (1 + 1 + 1 per day, 6 per weekend) at least 6, with some room for leave.
+ */
+export const DEMO_EXTRA_WARD_STAFF: { name: string; note: string }[] = [
+  { name: 'Elin Marwood', note: 'Staff nurse' },
+  { name: 'Joel Pemberton', note: 'Staff nurse' },
+  { name: 'Rosa Quintrell', note: 'Staff nurse' },
+  { name: 'Tariq Osei', note: 'Healthcare assistant' },
+];
+
+/**
+ * The ward's study day (invented): eight of its fourteen registered nurses attend, on approved leave,
+ * so the day cannot meet its nurse minimums (3 + 2 + 2 = 7 nurses for six left). The staffing proof
+ * shows the fewest shifts below minimum any roster can have, and the explanations say who is away.
+ */
+export const DEMO_STUDY_DAY = {
+  day: 10,
+  note: 'Ward study day',
+  people: [
+    'Priya Wendover',
+    'Tomasz Kellaway',
+    'Hannah Pryce',
+    'Seun Adeyemi',
+    'Callum Reeves',
+    'Elin Marwood',
+    'Joel Pemberton',
+    'Rosa Quintrell',
+  ],
+};
 
 /** Skill codes of a demo person, read from the note that describes them. */
 export function demoSkillsOf(unit: DemoUnitKey, note: string): string[] {
@@ -139,9 +181,17 @@ const EVERY_DAY = [0, 1, 2, 3, 4, 5, 6];
 const DEMO_PATTERN: Record<DemoUnitKey, { weekdays: number[]; needs: Need[] }[]> = {
   ward: [
     {
+      weekdays: WEEKDAYS,
+      needs: [{ shift: 'E', skill: 'RN', min: 3, target: 3 }],
+    },
+    {
+      // Fewer planned admissions and discharges at the weekend (invented): two nurses on the early.
+      weekdays: [0, 6],
+      needs: [{ shift: 'E', skill: 'RN', min: 2, target: 3 }],
+    },
+    {
       weekdays: EVERY_DAY,
       needs: [
-        { shift: 'E', skill: 'RN', min: 3, target: 3 },
         { shift: 'E', skill: 'HCA', min: 1, target: 2 },
         { shift: 'L', skill: 'RN', min: 2, target: 3 },
         { shift: 'L', skill: 'HCA', min: 1, target: 1 },
@@ -232,6 +282,23 @@ export async function seedDemoPlanning(
       );
       staffMembers.push(member);
     }
+    for (const extra of key === 'ward' ? DEMO_EXTRA_WARD_STAFF : []) {
+      staffMembers.push(
+        await em.save(
+          em.create(StaffMemberEntity, {
+            unitId: unit.id,
+            userId: null,
+            name: extra.name,
+            email: `${extra.name.toLowerCase().replace(/\s+/g, '.')}@example.com`,
+            contractId: contracts.get(PART_TIME.has(extra.name) ? 'Part-time 22.5 h' : 'Full-time 37.5 h')!
+              .id,
+            hourlyCost: /nurse/i.test(extra.note) ? 24.5 : 15.8,
+            active: true,
+            skills: demoSkillsOf('ward', extra.note).map((code) => skills.get(code)!),
+          }),
+        ),
+      );
+    }
 
     const startDate = demoPeriodStart(localDate(now, unit.timeZone));
     const period = await em.save(
@@ -249,6 +316,23 @@ export async function seedDemoPlanning(
     );
     // An event on the ward's second Wednesday: one more registered nurse on the early shift.
     if (key === 'ward') {
+      const decidedBy = manager ? usersByEmail.get(manager.email) : undefined;
+      const date = addDays(startDate, DEMO_STUDY_DAY.day);
+      for (const name of DEMO_STUDY_DAY.people) {
+        await em.save(
+          em.create(LeaveRequestEntity, {
+            staffMemberId: staffMembers.find((m) => m.name === name)!.id,
+            startDate: date,
+            endDate: date,
+            type: 'other',
+            status: 'approved',
+            note: DEMO_STUDY_DAY.note,
+            decisionNote: null,
+            decidedById: decidedBy?.id ?? null,
+            decidedAt: now,
+          }),
+        );
+      }
       await em.save(
         em.create(CoverOverrideEntity, {
           unitId: unit.id,
