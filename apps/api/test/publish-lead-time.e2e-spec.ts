@@ -2,12 +2,15 @@ import {
   PLANNING_ROUTES as P,
   PUBLISH_LEAD_DAYS_DEFAULT,
   PUBLISHING_ROUTES as PUB,
+  SOLVING_ROUTES as R,
   type PublishCheckDto,
   type RosterPeriodDto,
   type UnitDto,
 } from '@rotaplex/contracts';
 import { localDate } from '../src/common/dates';
 import { addDays } from '../src/roster-periods/roster-periods.service';
+import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
+import { caughtMails } from './support/mailbox';
 import { smallUnit } from './publishing-fixture';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
@@ -68,6 +71,42 @@ describe('publish lead time', () => {
       .send({ publishLeadDays: 14 });
     expect(r.status).toBe(200);
     expect((r.body as UnitDto).publishLeadDays).toBe(14);
+  });
+
+  it('tells each person in the publish e-mail how many open shifts they could take', async () => {
+    // Kestrel-style small unit: one Early and one Late needed every day, five people, no contracts.
+    const small = await smallUnit(t, admin, 'Wren Ward', '2031-05-05');
+    const [first, second] = small.staff;
+    await t
+      .http()
+      .put(api(R.assignmentCell(small.period.id)))
+      .set(bearer(admin))
+      .send({ staffMemberId: first.id, date: small.period.startDate, shiftTypeId: small.shifts[0].id })
+      .expect(200);
+    const { version } = (
+      await t
+        .http()
+        .get(api(P.rosterPeriod(small.period.id)))
+        .set(bearer(admin))
+    ).body as RosterPeriodDto;
+    await t
+      .http()
+      .post(api(PUB.publish(small.period.id)))
+      .set(bearer(admin))
+      .send({ version, acknowledgeBelowMinimum: true, reason: 'A test week' })
+      .expect(200);
+    await t.app.get(OutboxDeliveryService).deliverDue();
+    const mailOf = async (email: string) =>
+      (await caughtMails(t)).find(
+        (m) => m.to.includes(email) && /^Your roster for Wren Ward/.test(m.subject),
+      )!;
+    // 13 shifts are open (7 days x 2, less the one Early). The second person works none of them and
+    // may take one of each day's two (no rule: no contract); counted per open shift.
+    expect((await mailOf(second.email!)).text).toContain(
+      '13 shifts of this roster are still open and you could take them',
+    );
+    // The first person works the first day, so its Late is not theirs to take: 12.
+    expect((await mailOf(first.email!)).text).toContain('12 shifts of this roster are still open');
   });
 
   it('cautions when a roster starts sooner than the lead time, and not when it starts later', async () => {

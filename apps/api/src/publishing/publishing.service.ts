@@ -31,6 +31,8 @@ import { toCsv } from '../staff/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
 import { belowMinimum, leadTimeCaution, settingCautions, unhonouredLeave } from './publish-check';
 import { localDate } from '../common/dates';
+import { unmetNeeds } from '../open-shifts/open-shifts.service';
+import { ClaimCheck } from '../swaps/swap-evaluation';
 import { formatShiftTimes, type MailShift, rosterMail } from './roster-mail';
 
 /** Publishing a draft roster, repairing a published one, and the period's audit trail and export. */
@@ -340,6 +342,7 @@ export class PublishingService {
   ): Promise<number> {
     const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
     const link = `${this.config.publicUrl ?? ''}/`;
+    const mayTake = kind === 'published' ? openShiftsByPerson(input, roster) : new Map<string, number>();
     let sent = 0;
     for (const person of input.staff) {
       if (!person.email || (only && !only.has(person.id))) continue;
@@ -357,12 +360,42 @@ export class PublishingService {
         shifts,
         link,
         kind,
+        openShifts: mayTake.get(person.id) ?? 0,
       });
       await this.mail.send({ to: person.email, ...content }, em);
       sent++;
     }
     return sent;
   }
+}
+
+/**
+ * How many open shifts (cover below target from the unit's today on) each person may take on a roster
+ * about to be published: they have the skill, work no shift that day, and the checker finds no rule of
+ * theirs broken anew (the same test the open-shift list uses).
+ */
+function openShiftsByPerson(input: RosterInput, roster: Roster): Map<string, number> {
+  const rows = Object.entries(roster).flatMap(([staffMemberId, days]) =>
+    days.map((shiftTypeId, d) => ({ staffMemberId, date: input.dates[d], shiftTypeId })),
+  );
+  const open = unmetNeeds(input, rows, localDate(new Date(), input.unit.timeZone));
+  const out = new Map<string, number>();
+  if (open.length === 0) return out;
+  const check = new ClaimCheck(input, rows);
+  for (const person of input.staff) {
+    const skills = new Set(person.skills.map((k) => k.id));
+    const working = new Set(
+      rows.filter((r) => r.staffMemberId === person.id && r.shiftTypeId).map((r) => r.date),
+    );
+    const n = open.filter(
+      (o) =>
+        (o.skillId === null || skills.has(o.skillId)) &&
+        !working.has(o.date) &&
+        !check.blocked(person.id, o.date, o.shiftTypeId),
+    ).length;
+    if (n > 0) out.set(person.id, n);
+  }
+  return out;
 }
 
 const EMPTY_ROSTER =

@@ -24,6 +24,8 @@ export interface RosterMailInput {
   shifts: MailShift[];
   link: string;
   kind: 'published' | 'changed';
+  /** Open shifts of this roster the person may take (skill, free that day, no rule broken); 0 or absent: none. */
+  openShifts?: number;
 }
 
 /**
@@ -63,6 +65,11 @@ export function rosterMail(p: RosterMailInput): MailContent {
     .sort((a, b) => a.day - b.day)
     .map((s) => `${formatShiftTimes(s, p)}  ${s.code} (${s.name})`);
   const none = 'You have no shifts in this period.';
+  const open = p.openShifts ?? 0;
+  const openLine =
+    open > 0
+      ? `${open === 1 ? 'One shift of this roster is' : `${open} shifts of this roster are`} still open and you could take ${open === 1 ? 'it' : 'them'} (you have the skill, are free that day and keep your contract's rules). See Open shifts in Rotaplex; a manager approves each claim.`
+      : null;
   const text = [
     `Hello ${p.displayName},`,
     '',
@@ -71,6 +78,7 @@ export function rosterMail(p: RosterMailInput): MailContent {
     '',
     ...(lines.length ? lines.map((l) => `- ${l}`) : [none]),
     '',
+    ...(openLine ? [openLine, ''] : []),
     `See the roster: ${p.link}`,
     '',
   ].join('\n');
@@ -84,7 +92,7 @@ ${
   lines.length
     ? `<ul style="margin:0 0 16px;padding-left:20px">\n${lines.map((l) => `<li>${escapeHtml(l)}</li>`).join('\n')}\n</ul>`
     : `<p style="margin:0 0 16px">${escapeHtml(none)}</p>`
-}
+}${openLine ? `\n<p style="margin:0 0 16px">${escapeHtml(openLine)}</p>` : ''}
 <p style="margin:24px 0"><a href="${escapeHtml(p.link)}" style="background:#0f5c57;color:#ffffff;padding:10px 18px;border-radius:4px;text-decoration:none">See the roster</a></p>
 </body></html>`;
   return { subject, text, html };
