@@ -65,6 +65,11 @@ export interface MipRunOptions {
   clockStart?: number;
   /** Every new incumbent's full column vector and objective, as HiGHS finds it. */
   onSolution?: (values: Float64Array, objective: number) => void;
+  /**
+   * Asked while the MIP runs: stop now (reported as 'timeLimit', a planned end). `rootDone` is true
+   * once the root LP has moved the bound or branching has begun (the bound is then worth stating).
+   */
+  stopWhen?: (state: { elapsedSeconds: number; rootDone: boolean }) => boolean;
 }
 
 export interface MipRunResult {
@@ -173,6 +178,9 @@ export function runMip(
     if (options.startValues) model.setSolution({ colValue: Array.from(options.startValues) });
 
     const improvements: { objective: number; seconds: number }[] = [];
+    let stoppedByRule = false;
+    let firstBound: number | null = null;
+    let rootDone = false;
     let lastEmit = options.lastProgressAt ?? -Infinity;
     let incumbent: number | null = null;
     let bound: number | null = null;
@@ -197,6 +205,17 @@ export function runMip(
               bound = finiteOrNull(event.data.mip_dual_bound) ?? bound;
               emit(false);
               if (isCancelled(options)) event.interrupt();
+              else if (options.stopWhen) {
+                if (firstBound === null) firstBound = bound;
+                if (!rootDone)
+                  rootDone =
+                    (bound !== null && firstBound !== null && bound !== firstBound) ||
+                    Number(event.data.mip_node_count ?? 0) > 0;
+                if (options.stopWhen({ elapsedSeconds: elapsed(), rootDone })) {
+                  stoppedByRule = true;
+                  event.interrupt();
+                }
+              }
               return undefined;
             },
             [4](event: CallbackEventFor<4>) {
@@ -243,8 +262,9 @@ export function runMip(
     incumbent = objective;
     bound = finalBound;
     emit(true);
+    const stoppedAsPlanned = stoppedByRule && modelStatus === MODEL_STATUS.interrupted;
     return {
-      status: statusOf(modelStatus, values !== null),
+      status: stoppedAsPlanned ? 'timeLimit' : statusOf(modelStatus, values !== null),
       modelStatus,
       modelStatusText: MODEL_STATUS_TEXT[modelStatus] ?? `status ${modelStatus}`,
       objective,

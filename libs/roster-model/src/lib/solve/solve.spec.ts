@@ -53,13 +53,14 @@ describe('solveRoster', () => {
     expect(result.seconds).toBeLessThan(Math.max(limit, result.setupSeconds) + 1);
     if (result.roster !== null) {
       expect(result.check?.violations).toEqual([]);
-      if (result.gap !== null) {
+      // (A bound from before the root LP is far below the roster: nothing proved yet.)
+      if (result.gap !== null && result.gap < 0.995) {
         expect(result.quality).toMatch(
           /^No roster can be more than \d+(\.\d)?% better than this one \(stopped at the time limit\)\.$/,
         );
       } else {
         // A loaded machine may stop HiGHS before its root LP gives a bound.
-        expect(result.bound).toBeNull();
+        expect(result.gap === null || result.gap >= 0.995).toBe(true);
         expect(result.quality).toBe(
           'A roster was found (stopped at the time limit), but the solver has not yet proved how close it is to the best possible.',
         );

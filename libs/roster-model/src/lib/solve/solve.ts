@@ -134,6 +134,8 @@ export const AUTO_LARGE_HIGHS_OPTIONS: Record<string, string | number> = {
  * from it and improves it (docs/benchmarks.md).
  */
 export const AUTO_SEARCH_SHARE = 0.4;
+/** Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root bound. */
+export const MIP_BOUND_CAP = 0.9;
 
 /**
  * The search hands over to HiGHS early when it has found nothing better for this long and for half
@@ -319,6 +321,9 @@ function strictRun(
     const values = built.encode(roster);
     return { ...run, values, objective: built.objectiveOf(values) };
   }
+  // The model pays for no broken rule, yet the checker finds one: the model and the checker disagree
+  // (a defect, never infeasibility).
+  if (elasticSlack(elastic, run.values) <= 1e-6) assertCheckerAgrees(check, run.objective ?? NaN);
   const status = run.status === 'optimal' ? 'infeasible' : run.status;
   return {
     ...run,
@@ -329,6 +334,16 @@ function strictRun(
     gap: null,
     secondsToBest: null,
   };
+}
+
+/** Total of the elastic model's slack columns (violations it prices) in `values`. */
+function elasticSlack(elastic: BuiltModel, values: ArrayLike<number>): number {
+  let total = 0;
+  const names = elastic.arrays.colNames;
+  for (let j = elastic.numX; j < names.length; j++) {
+    if (names[j].startsWith('elU_') || names[j].startsWith('elL_')) total += Math.abs(values[j]);
+  }
+  return total;
 }
 
 /** Price of one unit of hard-rule violation in the elastic model fix-and-optimise repairs a start with. */
@@ -505,8 +520,17 @@ export async function solveRoster(
       : null;
   let run: MipRunResult;
   try {
+    // In 'auto', the MIP before fix-and-optimise runs past its share until its root LP has given a
+    // bound worth stating (a busy machine can need more than the share), at most MIP_BOUND_CAP.
+    const waitForBound = auto && strategy === 'mipThenFixAndOptimise';
+    const mipCap = waitForBound
+      ? Math.max(mipLimit, setupSeconds + Math.max(0, timeLimitSeconds - setupSeconds) * MIP_BOUND_CAP)
+      : mipLimit;
     run = runMip(session, elastic ? solverArrays(elastic.model) : data, {
-      timeLimitSeconds: mipLimit,
+      timeLimitSeconds: mipCap,
+      stopWhen: waitForBound
+        ? ({ elapsedSeconds, rootDone }) => rootDone && elapsedSeconds >= mipLimit
+        : undefined,
       mipRelGap: options.mipRelGap,
       randomSeed: options.randomSeed,
       highsOptions,
