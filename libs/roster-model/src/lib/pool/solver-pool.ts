@@ -22,6 +22,8 @@ import type { EncodedModel, ModelData } from 'highs';
 import type { Roster, RosterProblem } from '../problem';
 import type { SolveProgress } from '../result';
 import { qualityStatement } from '../explain/quality';
+import { ProblemIndex } from '../model/context';
+import { mergedStaffingSafety, staffingStatement } from '../safety/staffing';
 import { compiledHighsModule, type WasmModule } from '../solve/highs-session';
 import { relativeGap, type MipRunResult } from '../solve/run-mip';
 import type { RosterSolveResult, SolveRosterOptions } from '../solve/solve';
@@ -102,17 +104,23 @@ export interface PoolRosterOptions
 /**
  * The portfolio for two cores: one member runs the solve as asked (by default 'auto': the MIP, which
  * also proves the bound, then fix-and-optimise on large models), the other runs fix-and-optimise for
- * the whole time, continuing from every better roster the first one finds and handing its own back.
+ * the whole time, continuing from every better roster the first one finds and handing its own back
+ * (without a staffing proof of its own: the first member proves it for both, mergeRosterResults).
  */
 export const TWO_CORE_PORTFOLIO: PortfolioMemberOptions[] = [
   {},
-  { strategy: 'fixAndOptimise', fixAndOptimiseShare: 1 },
+  { strategy: 'fixAndOptimise', fixAndOptimiseShare: 1, staffingCheck: false },
 ];
 
 /** What may differ between the members of a portfolio. */
 export type PortfolioMemberOptions = Pick<
   SolveRosterOptions,
-  'strategy' | 'fixAndOptimiseShare' | 'fixAndOptimiseSubSeconds' | 'highsOptions' | 'warmStart'
+  | 'strategy'
+  | 'fixAndOptimiseShare'
+  | 'fixAndOptimiseSubSeconds'
+  | 'highsOptions'
+  | 'warmStart'
+  | 'staffingCheck'
 >;
 
 /** A running task: its result, and switches to stop it gently or at once. */
@@ -323,7 +331,7 @@ export class SolverPool {
     );
     const results = settled.flatMap((s) => (s.status === 'fulfilled' ? [s.value] : []));
     if (results.length === 0) throw (settled[0] as PromiseRejectedResult).reason;
-    return mergeRosterResults(results);
+    return mergeRosterResults(results, problem);
   }
 
   /** Stop every worker; queued and running solves fail with kind 'closed'. */
@@ -494,7 +502,7 @@ function mergeProgress(latest: (SolveProgress | null)[]): SolveProgress {
  * Keep the best of several independent solves of the same problem. Each proven lower bound holds for
  * the same model, so the largest one is reported with the best roster.
  */
-export function mergeRosterResults(results: RosterSolveResult[]): RosterSolveResult {
+export function mergeRosterResults(results: RosterSolveResult[], problem?: RosterProblem): RosterSolveResult {
   const infeasible = results.find((r) => r.status === 'infeasible');
   if (infeasible) return infeasible;
   const withRoster = results.filter((r) => r.objective !== null);
@@ -507,8 +515,16 @@ export function mergeRosterResults(results: RosterSolveResult[]): RosterSolveRes
   // The first member runs the solve as asked, so its status says how the run ended (a member on a
   // spare core may have been stopped early to give its core back).
   const status = anyOptimal && best.objective !== null ? 'optimal' : results[0].status;
+  // Staffing of the roster shown, with the fewest possible as proved by any member (the first
+  // member proves it; the others leave their time to the search).
+  const proofs = results.map((r) => r.staffing);
+  const staffing =
+    problem && best.roster && proofs.some((s) => s)
+      ? mergedStaffingSafety(new ProblemIndex(problem), best.roster, proofs)
+      : best.staffing;
   return {
     ...best,
+    ...(staffing ? { staffing, staffingStatement: staffingStatement(staffing) } : {}),
     status,
     bound,
     gap: relativeGap(best.objective, bound),

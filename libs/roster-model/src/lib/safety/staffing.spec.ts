@@ -5,7 +5,8 @@
 import { ProblemIndex } from '../model/context';
 import { needs, person, problem, roster } from '../model/fixtures.test-helpers';
 import { solveRoster } from '../solve/solve';
-import { staffingShortfall, staffingStatement } from './staffing';
+import { SolverPool } from '../pool';
+import { mergedStaffingSafety, staffingShortfall, staffingStatement } from './staffing';
 
 /**
  * One week of nights that need 2 registered nurses each (min 2, target 2): 14 nurse-nights.
@@ -70,5 +71,37 @@ describe('staffing safety', () => {
       '2 shifts are below minimum staffing (3 people short, 1 need has nobody with the required skill).' +
         ' Ask for bank or agency staff, or escalate as your local policy says, before publishing.',
     );
+  });
+
+  it('on two cores shows the staffing of the roster shown, proved by the first member (8 by construction)', async () => {
+    const pool = new SolverPool({ size: 2 });
+    const result = await pool
+      .solveRoster(shortNights(), { timeLimitSeconds: 20, spareCores: true })
+      .finally(() => pool.close());
+    expect(result.staffing).toMatchObject({ peopleShort: 8, fewestPossible: 8, proven: true });
+    expect(result.staffingStatement).toContain('no roster can do better than 8 people short');
+  });
+
+  it('merges the proofs of several solves: a proved count wins, else the highest floor', () => {
+    const p = shortNights();
+    const index = new ProblemIndex(p);
+    // Both nurses on 3 nights: 8 short, the fewest possible (by construction above).
+    const best = roster({ a: 'NNN....', b: '...NNN.', c: '.......' });
+    const counted = { peopleShort: 8, shiftsShort: 7, noneOfSkill: 1 };
+    expect(staffingShortfall(index, best)).toEqual(counted);
+    const floor = (n: number) => ({ ...counted, fewestPossible: n, proven: false });
+    expect(mergedStaffingSafety(index, best, [floor(5), null, floor(7)])).toEqual(floor(7));
+    expect(mergedStaffingSafety(index, best, [floor(5), floor(8)])).toEqual({ ...floor(8), proven: true });
+    expect(
+      mergedStaffingSafety(index, best, [
+        floor(5),
+        { ...counted, peopleShort: 9, fewestPossible: 8, proven: true },
+      ]),
+    ).toEqual({ ...counted, fewestPossible: 8, proven: true });
+    expect(mergedStaffingSafety(index, best, [undefined, null])).toEqual({
+      ...counted,
+      fewestPossible: null,
+      proven: false,
+    });
   });
 });

@@ -89,6 +89,31 @@ export function staffingSafety(
   return { ...counted, fewestPossible: Math.min(floor, bestFound), proven: floor >= bestFound - 1e-9 };
 }
 
+/**
+ * The staffing safety of `roster` when several solves of the same problem ran side by side (the
+ * portfolio): its own shortfall, and the fewest possible from whichever solve proved most. Every
+ * solve's floor holds for any roster of the problem, so the highest floor is the best one known; a
+ * solve that proved its count gives the fewest exactly.
+ */
+export function mergedStaffingSafety(
+  index: ProblemIndex,
+  roster: Roster,
+  proofs: (StaffingSafety | null | undefined)[],
+): StaffingSafety {
+  const counted = staffingShortfall(index, roster);
+  if (counted.peopleShort === 0) return { ...counted, fewestPossible: 0, proven: true };
+  const known = proofs.filter((s): s is StaffingSafety => !!s && s.fewestPossible !== null);
+  const proven = known.find((s) => s.proven);
+  if (proven) return { ...counted, fewestPossible: proven.fewestPossible, proven: true };
+  if (known.length === 0) return { ...counted, fewestPossible: null, proven: false };
+  const floor = Math.max(...known.map((s) => s.fewestPossible as number));
+  return {
+    ...counted,
+    fewestPossible: Math.min(floor, counted.peopleShort),
+    proven: floor >= counted.peopleShort,
+  };
+}
+
 const plural = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
 
 /** The safety in plain words for the manager, with the usual advice; '' when nothing is short. */
