@@ -134,8 +134,12 @@ export const AUTO_LARGE_HIGHS_OPTIONS: Record<string, string | number> = {
  * from it and improves it (docs/benchmarks.md).
  */
 export const AUTO_SEARCH_SHARE = 0.4;
-/** Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root bound. */
+/**
+ * Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root
+ * bound; on large models fix-and-optimise keeps at least 40% (it finds most of their improvements).
+ */
 export const MIP_BOUND_CAP = 0.9;
+export const MIP_BOUND_CAP_LARGE = 0.6;
 
 /**
  * The search hands over to HiGHS early when it has found nothing better for this long and for half
@@ -524,7 +528,11 @@ export async function solveRoster(
     // bound worth stating (a busy machine can need more than the share), at most MIP_BOUND_CAP.
     const waitForBound = auto && strategy === 'mipThenFixAndOptimise';
     const mipCap = waitForBound
-      ? Math.max(mipLimit, setupSeconds + Math.max(0, timeLimitSeconds - setupSeconds) * MIP_BOUND_CAP)
+      ? Math.max(
+          mipLimit,
+          setupSeconds +
+            Math.max(0, timeLimitSeconds - setupSeconds) * (large ? MIP_BOUND_CAP_LARGE : MIP_BOUND_CAP),
+        )
       : mipLimit;
     run = runMip(session, elastic ? solverArrays(elastic.model) : data, {
       timeLimitSeconds: mipCap,
