@@ -2,7 +2,10 @@ import { useMemo, useState } from 'react';
 import {
   Body1,
   Button,
+  Caption1,
+  Checkbox,
   Field,
+  Label,
   makeStyles,
   MessageBar,
   MessageBarBody,
@@ -67,6 +70,7 @@ const useStyles = makeStyles({
   },
   actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS, alignItems: 'center' },
   muted: { color: tokens.colorNeutralForeground3 },
+  group: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS },
 });
 
 /** A contact-centre part to start from: 30-minute intervals, 80% in 20 s, occupancy 85%, shrinkage 30%. */
@@ -248,16 +252,37 @@ export function ContactDemandEditor(props: ContactDemandEditorProps) {
           />
         </Field>
       </div>
-      <Body1 className={styles.muted}>
-        {draft.shiftTypeIds.length === 0
-          ? `The plan may open any of the unit's ${shiftTypes.length} shift types.`
-          : `The plan may open: ${shiftTypes
-              .filter((t) => draft.shiftTypeIds.includes(t.id))
-              .map((t) => t.name)
-              .join(', ')}.`}
-        {draft.dates.length > 0 &&
-          ` ${draft.dates.length} dated day${draft.dates.length === 1 ? '' : 's'} from a CSV replace their weekday.`}
-      </Body1>
+      <div role="group" aria-labelledby="demand-shift-types" className={styles.group}>
+        <Label id="demand-shift-types" weight="semibold">
+          Shifts the plan may open
+        </Label>
+        <div className={styles.actions}>
+          {shiftTypes.map((t) => (
+            <Checkbox
+              key={t.id}
+              label={`${t.name} (${t.start}-${t.end})`}
+              checked={draft.shiftTypeIds.includes(t.id)}
+              onChange={(_, d) =>
+                setDraft((x) => ({
+                  ...x,
+                  shiftTypeIds: d.checked
+                    ? [...x.shiftTypeIds, t.id]
+                    : x.shiftTypeIds.filter((id) => id !== t.id),
+                }))
+              }
+            />
+          ))}
+        </div>
+        <Caption1 className={styles.muted}>
+          None ticked: any of the unit&apos;s shift types. A shift that crosses midnight covers the next
+          morning.
+        </Caption1>
+      </div>
+      {draft.dates.length > 0 && (
+        <Body1 className={styles.muted}>
+          {`${draft.dates.length} dated day${draft.dates.length === 1 ? '' : 's'} from a CSV replace their weekday.`}
+        </Body1>
+      )}
       <div className={styles.actions}>
         <TabList
           selectedValue={view}
