@@ -308,6 +308,21 @@ describe('demand to cover needs as the demo manager', () => {
     await screenshot(page, 'demand-ward-phone');
     await page.setViewportSize({ width: 1360, height: 860 });
 
+    // A change typed in the patients table is saved (and put back afterwards).
+    const wardToken = await apiSignIn('manager@example.com');
+    const ward = await findWard(wardToken);
+    const earlyId = (await shiftIdsByCode(wardToken, ward.id)).E;
+    const mondayEarlyLow = async () =>
+      (await apiCall<UnitDemandDto>(wardToken, 'GET', D.demand(ward.id))).ward!.patients.find(
+        (p) => p.weekday === 1 && p.date === null && p.shiftTypeId === earlyId,
+      )?.patients.low;
+    const lowCell = page.getByLabel('Mon Early: Low acuity patients', { exact: true });
+    for (const value of [13, 12]) {
+      await lowCell.fill(String(value));
+      await page.getByRole('button', { name: 'Save patients and ratios' }).click();
+      await eventually(async () => ((await mondayEarlyLow()) === value ? true : undefined), `${value} saved`);
+    }
+
     // The plan of a ward period: per skill ceil(sum of patients / patients per person), never
     // below the floor (formula of docs/demand.md). Demo Early shift: 12 low, 6 medium, 2 high
     // patients; registered nurses 8 / 6 / 4 per person, floor 2: 12/8 + 6/6 + 2/4 = 3 -> 3;
