@@ -147,7 +147,7 @@ export const DEMO_STUDY_DAY = {
   people: [
     'Priya Wendover',
     'Tomasz Kellaway',
-    'Hannah Pryce',
+    'Beth Lindqvist',
     'Seun Adeyemi',
     'Callum Reeves',
     'Elin Marwood',
