@@ -80,7 +80,7 @@ describe('audit trail and period export', () => {
         }),
       ),
     ).rejects.toThrow(/actorUserId/);
-    const rows = await t.dataSource.query(`SELECT id FROM audit_entries WHERE rosterPeriodId = ?`, [
+    const rows = await t.dataSource.query(`SELECT id FROM audit_entries WHERE "rosterPeriodId" = ?`, [
       period.id,
     ]);
     expect(rows).toHaveLength(2);

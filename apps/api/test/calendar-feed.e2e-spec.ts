@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import {
   type CalendarFeedDto,
   MY_ROSTER_ROUTES as M,
@@ -174,17 +175,17 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
     const before = (await readFeed(url)).events;
     // Replace every assignment row of the period by a copy with a new id.
     await t.dataSource.transaction(async (em) => {
-      const rows = (await em.query(`SELECT * FROM assignments WHERE rosterPeriodId = ?`, [period.id])) as {
+      const rows = (await em.query(`SELECT * FROM assignments WHERE "rosterPeriodId" = ?`, [period.id])) as {
         staffMemberId: string;
         date: string;
         shiftTypeId: string | null;
-        pinned: number;
+        pinned: number | boolean; // 0/1 on SQLite, a boolean on PostgreSQL
       }[];
-      await em.query(`DELETE FROM assignments WHERE rosterPeriodId = ?`, [period.id]);
+      await em.query(`DELETE FROM assignments WHERE "rosterPeriodId" = ?`, [period.id]);
       for (const r of rows) {
         await em.query(
-          `INSERT INTO assignments (id, rosterPeriodId, staffMemberId, date, shiftTypeId, pinned) VALUES (lower(hex(randomblob(16))), ?, ?, ?, ?, ?)`,
-          [period.id, r.staffMemberId, r.date, r.shiftTypeId, r.pinned],
+          `INSERT INTO assignments (id, "rosterPeriodId", "staffMemberId", date, "shiftTypeId", pinned) VALUES (?, ?, ?, ?, ?, ?)`,
+          [randomUUID(), period.id, r.staffMemberId, r.date, r.shiftTypeId, r.pinned],
         );
       }
     });
@@ -200,11 +201,11 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
     // A change made behind the feed's back (as a swap or repair would): Early -> Late on 1 April,
     // and the Late of 2 April removed.
     await t.dataSource.query(
-      `UPDATE assignments SET shiftTypeId = ? WHERE rosterPeriodId = ? AND staffMemberId = ? AND date = ?`,
+      `UPDATE assignments SET "shiftTypeId" = ? WHERE "rosterPeriodId" = ? AND "staffMemberId" = ? AND date = ?`,
       [shifts.L.id, period.id, robin.id, '2030-04-01'],
     );
     await t.dataSource.query(
-      `DELETE FROM assignments WHERE rosterPeriodId = ? AND staffMemberId = ? AND date = ?`,
+      `DELETE FROM assignments WHERE "rosterPeriodId" = ? AND "staffMemberId" = ? AND date = ?`,
       [period.id, robin.id, '2030-04-02'],
     );
     const after = (await readFeed(url)).events;
@@ -233,8 +234,8 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
 
     // The shift comes back: confirmed again with a higher sequence.
     await t.dataSource.query(
-      `INSERT INTO assignments (id, rosterPeriodId, staffMemberId, date, shiftTypeId, pinned) VALUES (lower(hex(randomblob(16))), ?, ?, ?, ?, 0)`,
-      [period.id, robin.id, '2030-04-02', shifts.E.id],
+      `INSERT INTO assignments (id, "rosterPeriodId", "staffMemberId", date, "shiftTypeId", pinned) VALUES (?, ?, ?, ?, ?, FALSE)`,
+      [randomUUID(), period.id, robin.id, '2030-04-02', shifts.E.id],
     );
     const back = (await readFeed(url)).events.get(uidOf(robin.id, '2030-04-02'))!;
     expect(back).toMatchObject({
@@ -249,7 +250,7 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
     const before = (await readFeed(url)).events;
     const uid = uidOf(robin.id, '2030-03-28');
     const stored = () =>
-      t.dataSource.query(`SELECT sequence, changedAt FROM calendar_feed_events WHERE uid = ?`, [uid]);
+      t.dataSource.query(`SELECT sequence, "changedAt" FROM calendar_feed_events WHERE uid = ?`, [uid]);
     const row = await stored();
 
     // Another writer holds a transaction open (all other queries of the main connection wait for
@@ -353,7 +354,7 @@ describe('iCalendar feed /api/calendar-feeds/:token.ics', () => {
   it("closes a deactivated user's feed (404)", async () => {
     const { url } = (await t.http().get(api(M.myCalendarFeed)).set(bearer(staff))).body as CalendarFeedDto;
     await t.http().get(feedPath(url)).expect(200);
-    await t.dataSource.query(`UPDATE users SET active = 0 WHERE email = ?`, ['staff@example.com']);
+    await t.dataSource.query(`UPDATE users SET active = FALSE WHERE email = ?`, ['staff@example.com']);
     await t.http().get(feedPath(url)).expect(404);
   });
 });

@@ -2,6 +2,9 @@ import { type UserDto, WEB_PATHS } from '@rotaplex/contracts';
 import { latestMailTo, linkToken } from './support/mailbox';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
+/** One second ago as UTC date-time text, which both SQLite (TypeORM's format) and PostgreSQL (sessions in UTC) read as that instant. */
+const secondAgo = () => new Date(Date.now() - 1000).toISOString().replace('T', ' ').replace('Z', '');
+
 describe('invitations and password reset by e-mail (real SMTP to the local catcher)', () => {
   let t: TestApp;
   let admin: string;
@@ -40,7 +43,7 @@ describe('invitations and password reset by e-mail (real SMTP to the local catch
     expect(url.startsWith(`http://rotaplex.test${WEB_PATHS.acceptInvitation}?token=`)).toBe(true);
 
     // only a hash is stored
-    const stored = await t.dataSource.query(`SELECT tokenHash FROM one_time_tokens WHERE userId = ?`, [
+    const stored = await t.dataSource.query(`SELECT "tokenHash" FROM one_time_tokens WHERE "userId" = ?`, [
       user.id,
     ]);
     expect(stored).toHaveLength(1);
@@ -82,8 +85,8 @@ describe('invitations and password reset by e-mail (real SMTP to the local catch
       WEB_PATHS.acceptInvitation,
     );
     await t.dataSource.query(
-      `UPDATE one_time_tokens SET expiresAt = datetime('now', '-1 second') WHERE userId = (SELECT id FROM users WHERE email = ?)`,
-      ['late.reader@example.com'],
+      `UPDATE one_time_tokens SET "expiresAt" = ? WHERE "userId" = (SELECT id FROM users WHERE email = ?)`,
+      [secondAgo(), 'late.reader@example.com'],
     );
     const res = await t
       .http()
@@ -206,7 +209,8 @@ describe('invitations and password reset by e-mail (real SMTP to the local catch
       await t.http().post(api('/auth/password-reset/request')).send({ email }).expect(202);
       const { token } = linkToken((await latestMailTo(t, admin, email))!.text, WEB_PATHS.resetPassword);
       await t.dataSource.query(
-        `UPDATE one_time_tokens SET expiresAt = datetime('now', '-1 second') WHERE purpose = 'password-reset'`,
+        `UPDATE one_time_tokens SET "expiresAt" = ? WHERE purpose = 'password-reset'`,
+        [secondAgo()],
       );
       const res = await t
         .http()

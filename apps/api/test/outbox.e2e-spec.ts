@@ -45,7 +45,7 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
         status: string;
         attempts: number;
         lastError: string | null;
-        nextAttemptAt: string | null;
+        nextAttemptAt: string | Date | null; // UTC text on SQLite, a Date on PostgreSQL
       }[]
     )[0];
   const received = async (to: string) =>
@@ -107,7 +107,8 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
       expect(first).toMatchObject({ status: 'pending', attempts: 1 });
       expect(first.lastError).toMatch(/ECONNREFUSED|connect/i);
       // First retry one base delay (150 ms) after the failure.
-      const next = new Date(`${first.nextAttemptAt!.replace(' ', 'T')}Z`).getTime();
+      const at = first.nextAttemptAt!;
+      const next = (at instanceof Date ? at : new Date(`${at.replace(' ', 'T')}Z`)).getTime();
       expect(next - before).toBeGreaterThanOrEqual(150);
       expect(next - Date.now()).toBeLessThanOrEqual(150);
       const failed = await until('the message to fail', async () => {
@@ -186,7 +187,7 @@ describe('outbox: e-mail through a table with retries (real SMTP to the local ca
     }
     // Make every row due now, then run three deliveries at once beside the loop.
     await t.dataSource.query(
-      `UPDATE outbox_messages SET nextAttemptAt = '2000-01-01 00:00:00.000' WHERE "to" LIKE 'race%'`,
+      `UPDATE outbox_messages SET "nextAttemptAt" = '2000-01-01 00:00:00.000' WHERE "to" LIKE 'race%'`,
     );
     const delivery = t.app.get(OutboxDeliveryService);
     await Promise.all([delivery.deliverDue(), delivery.deliverDue(), delivery.deliverDue()]);

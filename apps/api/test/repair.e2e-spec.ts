@@ -145,7 +145,7 @@ describe('POST /api/roster-periods/:id/repair', () => {
     expect(now).toMatchObject({ status: 'published', version: version + 2 });
     // Raised by the period's writer with the cells, which recorded the change.
     const [last] = (await t.dataSource.query(
-      `SELECT kind, cells, version FROM roster_period_changes WHERE rosterPeriodId = ? ORDER BY version DESC`,
+      `SELECT kind, cells, version FROM roster_period_changes WHERE "rosterPeriodId" = ? ORDER BY version DESC`,
       [period.id],
     )) as { kind: string; cells: number; version: number }[];
     expect(last).toEqual({ kind: 'repair', cells: changed.length, version: now.version });
