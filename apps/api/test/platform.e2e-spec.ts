@@ -24,7 +24,7 @@ describe('first start, demo data, mail and the web app', () => {
     it('seeds the invented organisation, two units and 30 people, all with the demo password', async () => {
       const [org] = await t.dataSource.query(`SELECT name FROM organisations`);
       expect(org.name).toBe(DEMO_ORGANISATION);
-      const units = await t.dataSource.query(`SELECT name, timeZone FROM units ORDER BY name`);
+      const units = await t.dataSource.query(`SELECT name, "timeZone" FROM units ORDER BY name`);
       expect(units).toEqual([
         { name: 'Contact Centre North', timeZone: 'Europe/Dublin' },
         { name: 'Ward 7 Acute Medicine', timeZone: 'Europe/London' },
@@ -41,7 +41,7 @@ describe('first start, demo data, mail and the web app', () => {
         ]),
       );
       // argon2id encoded hashes, never the password itself
-      const hashes = await t.dataSource.query(`SELECT DISTINCT passwordHash AS h FROM users`);
+      const hashes = await t.dataSource.query(`SELECT DISTINCT "passwordHash" AS h FROM users`);
       expect(hashes).toHaveLength(1);
       expect(hashes[0].h).toMatch(/^\$argon2id\$v=19\$/);
       expect(hashes[0].h).not.toContain(DEMO_PASSWORD);
@@ -63,7 +63,9 @@ describe('first start, demo data, mail and the web app', () => {
         .expect(200);
       await t.close();
       t = await startTestApp({}, dir);
-      expect(await t.dataSource.query(`SELECT COUNT(*) AS n FROM users`)).toEqual([{ n: 30 }]);
+      expect(await t.dataSource.query(`SELECT CAST(COUNT(*) AS INTEGER) AS n FROM users`)).toEqual([
+        { n: 30 },
+      ]);
       expect(await t.dataSource.query(`SELECT name FROM organisations`)).toEqual([{ name: 'Renamed' }]);
       // the development JWT secret is kept in DATA_DIR, so a token issued before the restart still works
       await t.http().get(api('/me')).set(bearer(before.token)).expect(200);
@@ -161,7 +163,9 @@ describe('first start, demo data, mail and the web app', () => {
       expect(rows).toEqual([
         { from: '"Rota Desk" <rota@example.net>', subject: expect.stringMatching(/invited/) },
       ]);
-      expect(await senderApp.dataSource.query(`SELECT COUNT(*) AS n FROM mail_messages`)).toEqual([{ n: 0 }]);
+      expect(
+        await senderApp.dataSource.query(`SELECT CAST(COUNT(*) AS INTEGER) AS n FROM mail_messages`),
+      ).toEqual([{ n: 0 }]);
     });
   });
 

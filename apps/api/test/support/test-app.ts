@@ -1,6 +1,6 @@
 import { type NestExpressApplication } from '@nestjs/platform-express';
 import { API_PREFIX, REFRESH_COOKIE, type TokenResponse } from '@rotaplex/contracts';
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
@@ -81,12 +81,14 @@ export async function startTestApp(
   };
 }
 
-/** The test database of a DATA_DIR: created on its first start, the same one on a restart. */
+/** Test databases by DATA_DIR: created on a DATA_DIR's first start, the same one on a restart. */
+const testDatabases = new Map<string, string>();
+
 async function testDatabaseUrl(dataDir: string): Promise<string> {
-  const file = join(dataDir, 'test-database-url');
-  if (existsSync(file)) return readFileSync(file, 'utf8');
+  const known = testDatabases.get(dataDir);
+  if (known) return known;
   const url = await createTestDatabase();
-  writeFileSync(file, url, { mode: 0o600 });
+  testDatabases.set(dataDir, url);
   return url;
 }
 
