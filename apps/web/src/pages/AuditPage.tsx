@@ -8,6 +8,11 @@ import { errorText } from '@/api/errors';
 import { PATHS } from '@/app/paths';
 import { rosterPeriodQuery } from '@/features/planning-board/api/board.queries';
 import { auditQuery, DEFAULT_AUDIT_PAGE, downloadExport } from '@/features/publishing/api/publishing.queries';
+import {
+  daysInsideNoticeWindow,
+  NOTICE_WINDOW_CAUTION,
+  NOTICE_WINDOW_DAYS,
+} from '@/features/publishing/utils/noticeWindow';
 import { AppLink } from '@/ui/AppLink';
 import { PagedTable, TablePanel } from '@/ui/DataTable';
 import { EmptyState } from '@/ui/EmptyState';
@@ -17,6 +22,7 @@ import { PageHeader } from '@/ui/PageHeader';
 const useStyles = makeStyles({
   when: { whiteSpace: 'nowrap', color: tokens.colorNeutralForeground3 },
   details: { fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground3 },
+  notice: { marginTop: tokens.spacingVerticalXS },
 });
 
 const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'medium' });
@@ -96,6 +102,14 @@ export function AuditPage() {
               <TableCell>{entry.actorName}</TableCell>
               <TableCell>
                 {entry.summary} <span className={styles.details}>{cellCount(entry)}</span>
+                {daysInsideNoticeWindow(entry).length > 0 && (
+                  <div className={styles.notice}>
+                    <Badge appearance="tint" color="warning">
+                      Inside the {NOTICE_WINDOW_DAYS}-day notice window
+                    </Badge>{' '}
+                    <span className={styles.details}>{NOTICE_WINDOW_CAUTION}</span>
+                  </div>
+                )}
               </TableCell>
             </TableRow>
           )}
