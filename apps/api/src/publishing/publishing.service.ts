@@ -225,7 +225,7 @@ export class PublishingService {
           rosterPeriodId: periodId,
           actorUserId: run.requestedById,
           kind: 'repair',
-          summary: `Repair changed ${changes.length} cell(s) for ${changedPeople.size} person(s)`,
+          summary: `Repair changed ${changes.length} ${changes.length === 1 ? 'cell' : 'cells'} for ${changedPeople.size} ${changedPeople.size === 1 ? 'person' : 'people'}`,
           before: changes.map((c) => ({
             staffMemberId: c.staffMemberId,
             date: c.date,
