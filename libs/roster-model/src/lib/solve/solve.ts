@@ -83,7 +83,8 @@ export interface SolveRosterOptions {
   staffingCheck?: boolean;
   /**
    * Share of the time limit (after model building) for the local search (search/roster-search.ts)
-   * that runs from the construction heuristic's roster before HiGHS starts (default AUTO_SEARCH_SHARE;
+   * that runs from the construction heuristic's roster before HiGHS starts (default AUTO_SEARCH_SHARE,
+   * AUTO_SEARCH_SHARE_HUGE on huge models;
    * 0: none). Only with the heuristic warm start.
    */
   searchShare?: number;
@@ -134,6 +135,14 @@ export const AUTO_LARGE_HIGHS_OPTIONS: Record<string, string | number> = {
  * from it and improves it (docs/benchmarks.md).
  */
 export const AUTO_SEARCH_SHARE = 0.4;
+/**
+ * Models with this many assignment columns or more (benchmark instances 13, 20 and 21 and beyond:
+ * half-year periods, a hundred people) give the local search AUTO_SEARCH_SHARE_HUGE of the time and
+ * do not wait for the MIP's root bound: on instance 20 (150 s) the MIP spent 48 s without a bound or
+ * a better roster while the search and fix-and-optimise were still improving.
+ */
+export const AUTO_HUGE_MODEL_X = 40_000;
+export const AUTO_SEARCH_SHARE_HUGE = 0.7;
 /**
  * Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root
  * bound; on large models fix-and-optimise keeps at least 40% (it finds most of their improvements).
@@ -238,7 +247,11 @@ function warmStartRoster(
   if (warmStart !== undefined && warmStart !== 'heuristic') {
     return { roster: warmStart, check: checkRoster(problem, warmStart, built.index) };
   }
-  const share = Math.min(1, Math.max(0, options.searchShare ?? AUTO_SEARCH_SHARE));
+  const huge = built.numX >= AUTO_HUGE_MODEL_X;
+  const share = Math.min(
+    1,
+    Math.max(0, options.searchShare ?? (huge ? AUTO_SEARCH_SHARE_HUGE : AUTO_SEARCH_SHARE)),
+  );
   const left = (): number => timeLimitSeconds * 1000 - (performance.now() - clockStart);
   // The greedy fill with a short local search of its own: the fast search below does the rest.
   const heuristicMs = Math.max(0, Math.min(share > 0 ? 300 : 1000, left()));
@@ -526,7 +539,7 @@ export async function solveRoster(
   try {
     // In 'auto', the MIP before fix-and-optimise runs past its share until its root LP has given a
     // bound worth stating (a busy machine can need more than the share), at most MIP_BOUND_CAP.
-    const waitForBound = auto && strategy === 'mipThenFixAndOptimise';
+    const waitForBound = auto && strategy === 'mipThenFixAndOptimise' && built.numX < AUTO_HUGE_MODEL_X;
     const mipCap = waitForBound
       ? Math.max(
           mipLimit,
