@@ -1,10 +1,11 @@
 import { type OutboxMessageDto, type Page } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { loadConfig, resolveJwtSecret } from '../src/config/app-config';
+import { testsOnPostgres } from '../src/database/postgres-cluster';
 import { MailBodyCipher, outboxBodyContext } from '../src/mail/mail-body-cipher';
 import { MailCatcherService } from '../src/mail/mail-catcher.service';
 import { MailService } from '../src/mail/mail.service';
-import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
+import { OutboxDeliveryService, SENDING_LEASE_MS } from '../src/outbox/outbox-delivery.service';
 import { OutboxMessageEntity } from '../src/outbox/outbox-message.entity';
 import { OutboxRetentionService } from '../src/outbox/outbox-retention.service';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
@@ -307,6 +308,54 @@ describe('outbox across a restart', () => {
     } finally {
       await first?.close();
       await second?.close();
+    }
+  });
+
+  it('sends again a message whose sending lease ran out, and leaves one another instance is sending', async () => {
+    const t1 = await startTestApp(OUTBOX_ENV);
+    let t2: TestApp | null = null;
+    try {
+      const cipher = t1.app.get(MailBodyCipher);
+      const repo = t1.dataSource.getRepository(OutboxMessageEntity);
+      const claimed = async (to: string, leaseEndsInMs: number) => {
+        const id = randomUUID();
+        await repo.insert({
+          id,
+          to,
+          subject: 'Claimed',
+          body: cipher.seal(JSON.stringify({ text: 'x', html: 'x' }), outboxBodyContext(id)),
+          status: 'sending',
+          attempts: 1,
+          nextAttemptAt: new Date(Date.now() + leaseEndsInMs),
+        });
+      };
+      // As a process leaves a message it stopped in the middle of sending...
+      await claimed('abandoned@example.org', -1000);
+      // ...and as another API instance has it while it sends.
+      await claimed('in.flight@example.org', SENDING_LEASE_MS);
+      if (testsOnPostgres()) {
+        // Another API instance starts on the same database (SQLite: one process per file).
+        t2 = await startTestApp(OUTBOX_ENV, t1.dataDir);
+      }
+      await t1.app.get(OutboxDeliveryService).deliverDue();
+      const statusOf = async (to: string) => (await repo.findOneByOrFail({ to })).status;
+      await until('the abandoned message sent', async () =>
+        (await statusOf('abandoned@example.org')) === 'sent' ? true : undefined,
+      );
+      // Every catcher of the test writes to the same database.
+      const caught = (to: string) =>
+        t1.dataSource.query(`SELECT id FROM mail_messages WHERE "to" LIKE ?`, [`%${to}%`]) as Promise<
+          unknown[]
+        >;
+      expect(await caught('abandoned@example.org')).toHaveLength(1);
+      expect(await repo.findOneByOrFail({ to: 'in.flight@example.org' })).toMatchObject({
+        status: 'sending',
+        attempts: 1,
+      });
+      expect(await caught('in.flight@example.org')).toHaveLength(0);
+    } finally {
+      await t2?.close();
+      await t1.close();
     }
   });
 });

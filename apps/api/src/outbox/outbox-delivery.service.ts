@@ -11,6 +11,12 @@ import { backoffDelayMs } from './outbox-settings';
 /** Longest sleep of the loop when nothing is due (it also wakes on every new message). */
 const IDLE_POLL_MS = 30_000;
 const MAX_ERROR_LENGTH = 2000;
+/**
+ * A claimed message's lease: its nextAttemptAt while it is "sending". A send ends well within it
+ * (the transport's timeouts add up to under a minute), so a message still "sending" after its
+ * lease was left by a process that stopped, and any instance sends it again.
+ */
+export const SENDING_LEASE_MS = 5 * 60_000;
 
 /**
  * "YYYY-MM-DD HH:MM:SS.SSS" in UTC, the form TypeORM stores datetime columns in on SQLite. On
@@ -64,12 +70,14 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
     await this.sealPlainBodies();
     // A message still "sending" was claimed by a process that stopped before recording the outcome:
     // whether the server got it is unknown, so it is sent again (at least once across a crash).
-    const left = await this.messages.update(
-      { status: 'sending' },
-      { status: 'pending', nextAttemptAt: new Date() },
-    );
-    if (left.affected)
-      this.logger.warn(`${left.affected} message(s) interrupted by a stop will be sent again`);
+    // On SQLite this process is the only one, so every such message is; on PostgreSQL other API
+    // instances may be sending theirs right now, so only those whose lease has run out are.
+    const shared = this.messages.manager.connection.options.type === 'postgres';
+    const left = shared
+      ? await this.reclaimAbandoned()
+      : ((await this.messages.update({ status: 'sending' }, { status: 'pending', nextAttemptAt: new Date() }))
+          .affected ?? 0);
+    if (left) this.logger.warn(`${left} message(s) interrupted by a stop will be sent again`);
     this.running = true;
     this.loopDone = this.loop();
   }
@@ -137,8 +145,20 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
     this.wake(); // let the loop schedule a retry if this attempt failed
   }
 
+  /** Makes messages whose "sending" lease ran out (their process stopped mid-send) pending again; returns how many. */
+  async reclaimAbandoned(): Promise<number> {
+    const result = await this.messages
+      .createQueryBuilder()
+      .update(OutboxMessageEntity)
+      .set({ status: 'pending', nextAttemptAt: new Date() })
+      .where(`status = 'sending' AND "nextAttemptAt" < :now`, { now: sqliteUtc(new Date()) })
+      .execute();
+    return result.affected ?? 0;
+  }
+
   /** Sends every message that is due now and waits for it and for deliveries already under way (tests use it). */
   async deliverDue(): Promise<number> {
+    await this.reclaimAbandoned();
     let sent = 0;
     for (;;) {
       const due = await this.messages
@@ -212,7 +232,11 @@ export class OutboxDeliveryService implements OnApplicationBootstrap, OnModuleDe
     const claim = await this.messages
       .createQueryBuilder()
       .update(OutboxMessageEntity)
-      .set({ status: 'sending', attempts: () => '"attempts" + 1' })
+      .set({
+        status: 'sending',
+        attempts: () => '"attempts" + 1',
+        nextAttemptAt: new Date(Date.now() + SENDING_LEASE_MS),
+      })
       .where(`id = :id AND status = 'pending'`, { id })
       .execute();
     if (claim.affected !== 1) return false;
