@@ -10,6 +10,7 @@ import { OrganisationModule } from '../organisation/organisation.module';
 import { UserEntity } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
 import { authThrottlers, AuthThrottlerGuard } from './auth-throttler.guard';
+import { ClusterSignInAddressLimiter } from '../scale-out/cluster-sign-in-address-limiter';
 import { RedisConnections } from '../scale-out/redis-connections';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
@@ -49,6 +50,21 @@ import { TokensModule } from './tokens.module';
     MailModule,
   ],
   controllers: [AuthController, MeController],
-  providers: [AuthService, JwtStrategy, AuthThrottlerGuard, SignInAddressLimiter],
+  providers: [
+    AuthService,
+    JwtStrategy,
+    AuthThrottlerGuard,
+    {
+      // With REDIS_URL, failed sign-ins per address are counted across the API instances.
+      provide: SignInAddressLimiter,
+      inject: [AppConfig, RedisConnections],
+      useFactory: async (config: AppConfig, redis: RedisConnections | null) => {
+        if (!redis) return new SignInAddressLimiter(config);
+        const limiter = new ClusterSignInAddressLimiter(config, redis);
+        await limiter.listen();
+        return limiter;
+      },
+    },
+  ],
 })
 export class AuthModule {}
