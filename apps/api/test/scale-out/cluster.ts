@@ -133,7 +133,7 @@ export interface ApiInstance extends Proc {
 export interface ApiOptions {
   redisUrl: string;
   prefix: string;
-  /** Shared SQLite data directory (one machine) unless DATABASE_URL is given in env. */
+  /** Data directory (the JWT secret file; the SQLite file unless DATABASE_URL is given in env). */
   dataDir: string;
   env?: Record<string, string>;
 }
