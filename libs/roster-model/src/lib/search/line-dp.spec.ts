@@ -96,4 +96,20 @@ describe('LineDp: the best line of one person', () => {
     const without = searchRoster(index, empty, { maxMoves: 1 });
     expect(without.feasible).toBe(false);
   });
+
+  it('finds a rule-keeping half-year line for staff of benchmark instance 21 whose contracts are tight', () => {
+    // Instance 21 (Curtois & Qu, SOURCES.md §5a): 182 days, at least 115 shifts' pay in runs of 2-5
+    // days with 2 days off between and at most 13 of 26 weekends. The cheapest labels of a capped day
+    // all fell behind those hours for each of the first ten staff before the look-ahead and the
+    // second pass (furthest ahead first) were added.
+    const { problem } = loadInstance(21);
+    const index = new ProblemIndex(problem);
+    const dp = new LineDp(index);
+    const extra = new Float64Array(index.D * index.S);
+    for (let p = 0; p < 10; p++) {
+      const line = dp.solve(p, extra);
+      expect(line).not.toBeNull();
+      expect(RULES.flatMap((rule) => rule.checkPerson(index, p, Array.from(line!)))).toEqual([]);
+    }
+  });
 });

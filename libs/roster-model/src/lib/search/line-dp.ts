@@ -24,6 +24,8 @@ import { NO_PIN } from '../model/context';
 import { LineCost, type LineScore } from './line-cost';
 
 interface Label {
+  /** How far the label is ahead of what the minimum hours still need (Infinity without a minimum). */
+  slack: number;
   cost: number;
   paid: number;
   weekends: number;
@@ -53,6 +55,7 @@ export class LineDp {
   private readonly lineBuffer: Int16Array;
   private readonly maxPerState: number;
   private readonly maxLabels: number;
+  private truncated = false;
   /** Calls and their total milliseconds (for benchmarks). */
   calls = 0;
   ms = 0;
@@ -74,13 +77,17 @@ export class LineDp {
    */
   solve(p: number, extra: Float64Array): Int16Array | null {
     const t0 = performance.now();
-    const line = this.run(p, extra);
+    this.truncated = false;
+    let line = this.run(p, extra, false);
+    // The cheapest labels of a capped day may all have fallen behind the minimum hours: again,
+    // keeping those furthest ahead (tight contracts over half a year, benchmark instance 21).
+    if (!line && this.truncated) line = this.run(p, extra, true);
     this.calls++;
     this.ms += performance.now() - t0;
     return line;
   }
 
-  private run(p: number, extra: Float64Array): Int16Array | null {
+  private run(p: number, extra: Float64Array, bySlack: boolean): Int16Array | null {
     const { index, cost: lc } = this;
     const { D, S } = index;
     const maxCons = lc.maxCons[p];
@@ -160,6 +167,26 @@ export class LineDp {
       longest[d] = longest[d + 1] + best;
     }
 
+    // Most days the rest of the period (from day d) can be worked with runs of at most maxCons days
+    // and at least minOff days off between them; weekends wholly from day d; the longest shift.
+    const cycleOn = maxCons >= 0 ? maxCons : D;
+    const cycleOff = maxCons >= 0 ? Math.max(1, minOff) : 0;
+    const workable = new Int32Array(D + 1);
+    for (let d = 0; d <= D; d++) {
+      const rest = D - d;
+      const full = Math.floor(rest / (cycleOn + cycleOff));
+      workable[d] = full * cycleOn + Math.min(rest - full * (cycleOn + cycleOff), cycleOn);
+    }
+    const weekendsFrom = new Int32Array(D + 1);
+    let smallestWeekend = D;
+    for (const days of index.weekends) smallestWeekend = Math.min(smallestWeekend, days.length);
+    for (let d = D - 1; d >= 0; d--) {
+      const k = lc.weekendOf[d];
+      const starts = k >= 0 && (d === 0 || lc.weekendOf[d - 1] !== k);
+      weekendsFrom[d] = weekendsFrom[d + 1] + (starts ? 1 : 0);
+    }
+    let longestShift = 0;
+    for (let s = 0; s < S; s++) longestShift = Math.max(longestShift, lc.paid[s]);
     // State keys as small integers (mixed radix): run, night run, weekends and paid minutes in units
     // of the greatest common divisor of the shift lengths.
     let unit = 0;
@@ -170,6 +197,7 @@ export class LineDp {
     const radixWeekends = (maxWeekends >= 0 ? maxWeekends : lc.weekendsInPeriod) + 1;
     const maxPaidUnits = Math.floor(Math.min(maxPaid, longest[0]) / unit) + 1;
     const root: Label = {
+      slack: Infinity,
       cost: 0,
       paid: 0,
       weekends: 0,
@@ -228,7 +256,19 @@ export class LineDp {
             weekendCounted = 1;
           }
           const paid = v >= 0 ? from.paid + lc.paid[v] : from.paid;
-          if (paid > maxPaid || paid + longest[d + 1] < minPaid) continue;
+          if (paid > maxPaid) continue;
+          // Look-ahead: the most the rest of the period can still pay, with runs of at most maxCons
+          // days between minOff days off, and every weekend beyond the budget off.
+          let slack = Infinity;
+          if (minPaid > 0) {
+            let can = Math.min(longest[d + 1], workable[d + 1] * longestShift);
+            if (maxWeekends >= 0) {
+              const skip = Math.max(0, weekendsFrom[d + 1] - (maxWeekends - weekends));
+              can = Math.min(can, (D - d - 1 - skip * smallestWeekend) * longestShift);
+            }
+            slack = paid + can - minPaid;
+            if (slack < 0) continue;
+          }
           let counts = from.counts;
           if (v >= 0 && limitedOf[v] >= 0) {
             const i = limitedOf[v];
@@ -237,6 +277,7 @@ export class LineDp {
             counts[i]++;
           }
           const label: Label = {
+            slack,
             cost: from.cost + cellCost[d * W + v + 1],
             paid,
             weekends,
@@ -262,8 +303,11 @@ export class LineDp {
       labels = [];
       for (const bucket of layer.values()) for (const l of bucket) labels.push(l);
       if (labels.length > this.maxLabels) {
-        labels.sort((a, b) => a.cost - b.cost);
+        // Cheapest first; when that left no line, those furthest ahead of the minimum hours first.
+        if (bySlack) labels.sort((a, b) => b.slack - a.slack || a.cost - b.cost);
+        else labels.sort((a, b) => a.cost - b.cost);
         labels.length = this.maxLabels;
+        this.truncated = true;
       }
       if (labels.length === 0) return null;
     }
