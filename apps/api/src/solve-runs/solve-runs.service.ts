@@ -27,6 +27,7 @@ import { type Roster } from '@rotaplex/roster-model';
 import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { saveSolvedRoster } from '../assignments/assignments.service';
 import { type AuthUser } from '../common/auth-user';
+import { isPostgres } from '../database/data-source-options';
 import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
@@ -225,13 +226,15 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     query: { page: number; pageSize: number },
   ): Promise<Page<SolveRunSummaryDto>> {
     await this.periods.get(user, periodId);
-    // createdAt has whole seconds: runs of the same second come in the order they were inserted.
+    // On SQLite createdAt has whole seconds: runs of the same second come in the order they were
+    // inserted (rowid). PostgreSQL keeps microseconds and has no rowid.
+    const tieBreak = isPostgres(this.runs.manager.connection) ? 'run.id' : 'run.rowid';
     const [rows, total] = await this.runs
       .createQueryBuilder('run')
       .select(SUMMARY_COLUMNS.map((c) => `run.${c}`))
       .where('run.rosterPeriodId = :periodId', { periodId })
       .orderBy('run.createdAt', 'DESC')
-      .addOrderBy('run.rowid', 'DESC')
+      .addOrderBy(tieBreak, 'DESC')
       .offset((query.page - 1) * query.pageSize)
       .limit(query.pageSize)
       .getManyAndCount();

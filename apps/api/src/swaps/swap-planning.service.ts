@@ -34,8 +34,10 @@ export class SwapPlanning {
   }
 
   async propose(user: AuthUser, body: ProposeSwapDto): Promise<SwapRequestDto> {
-    const mails: OutgoingMail[] = [];
     const id = await this.dataSource.transaction(async (em) => {
+      // Inside the transaction: on PostgreSQL a serialisation conflict runs the callback again, and
+      // its mail must not be queued twice.
+      const mails: OutgoingMail[] = [];
       const { input, changes, rows, me, colleague } = await this.planSwap(em, user, body);
       const findings = evaluateChanges(input, rows, changes);
       if (findings.blocked) {
