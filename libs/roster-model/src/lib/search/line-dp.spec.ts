@@ -86,6 +86,7 @@ describe('LineDp: the best line of one person', () => {
     const dp = new LineDp(index);
     const withLines = searchRoster(index, empty, {
       maxMoves: 1,
+      rescueMs: 0,
       lineSolver: (p, extra) => dp.solve(p, extra),
     });
     expect(withLines.feasible).toBe(true);
