@@ -3,6 +3,8 @@ import {
   ERLANG_CAUTION,
   PLANNING_ROUTES as P,
   RATIO_CAUTION,
+  SOLVING_ROUTES as S,
+  type AssignmentGridDto,
   type CoverNeedsDto,
   type DemandPlanDto,
   type RosterPeriodDto,
@@ -14,6 +16,7 @@ import { seriousViolations } from './support/axe';
 import {
   eventually,
   openBrowser,
+  pressGenerate,
   screenshot,
   signIn,
   signOut,
@@ -44,8 +47,10 @@ function fewestAgents(a: number, aht: number, t: number, targetPercent: number, 
 
 // Issue 12, items 1 to 4: the contact centre's manager (demo manager2) takes the demo contact centre from a forecast (grid, CSV with a
 // bad row, then a good one) to the plan of a period of its own, its charts, and accepts the plan as
-// the period's cover needs. The period is a week in the past (deleted at the end, with the overrides
-// the accept wrote); the unit's demo forecast is put back at the end. The contact figures of the CSV
+// the period's cover needs, then generates that period's roster on its planning board. The period is a
+// week in the past that the journey creates for itself (deleted at the end, with the overrides the
+// accept wrote and, by the database's cascade, the generated roster and its solve run); the unit's
+// demo forecast is put back at the end. The contact figures of the CSV
 // are invented for the test.
 describe('demand to cover needs as the demo manager', () => {
   const START = '2025-02-03'; // a Monday
@@ -290,6 +295,58 @@ describe('demand to cover needs as the demo manager', () => {
     await panel.getByRole('link', { name: 'Open the demand plan' }).click();
     await page.getByRole('heading', { name: 'Demand plan: Contact Centre North' }).waitFor();
   });
+
+  it('generates a roster on the board of the period, whose Monday Day cover stands against the accepted needs', async () => {
+    const { page } = browser;
+    await page.goto(`/planning/periods/${period.id}/board`);
+    const board = page.getByRole('table', { name: 'Planning board' });
+    await board.waitFor();
+    // A short limit: the week is small, and the journey checks the roster, not its quality.
+    await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('20');
+    await pressGenerate(page);
+    await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
+    expect(await page.getByRole('status', { name: 'Solve progress' }).innerText()).toMatch(
+      /Finished|Stopped/,
+    );
+
+    // The roster exists on the server: the period's stored assignments hold shifts.
+    const shifts = await shiftIdsByCode(token, unit.id);
+    const grid = await apiCall<AssignmentGridDto>(token, 'GET', S.assignments(period.id));
+    expect(grid.dates[0]).toBe(START);
+    const shiftsRostered = grid.rows.flatMap((r) => r.cells).filter((c) => c.shiftTypeId !== null).length;
+    expect(shiftsRostered).toBeGreaterThan(0);
+    // People on the Day shift on Monday, counted from the server's assignments.
+    const onDay = grid.rows.filter((r) => r.cells[0]?.shiftTypeId === shifts.D).length;
+    // The accepted needs, read back from the server (the override the accept wrote).
+    const needs = await apiCall<CoverNeedsDto>(token, 'GET', P.coverNeeds(unit.id));
+    const accepted = needs.overrides.find(
+      (o) => o.date === START && o.shiftTypeId === shifts.D && o.skillId === null,
+    )!;
+    expect(accepted).toBeDefined();
+
+    // The board's cover cell for Monday's Day shift (anyone) shows the server's count against the
+    // accepted minimum and target, and says in words where the count stands.
+    const coverCell = board
+      .getByRole('rowgroup', { name: 'Cover against needs' })
+      .locator('td[title^="Mon 3 Feb, Day: "]');
+    const expectedTitle = `Mon 3 Feb, Day: ${onDay} on, minimum ${accepted.min}, target ${accepted.target}`;
+    await eventually(
+      async () => ((await coverCell.getAttribute('title'))?.startsWith(expectedTitle) ? true : undefined),
+      'the cover cell of the generated roster',
+    );
+    expect(await coverCell.locator('strong').innerText()).toBe(String(onDay));
+    const words =
+      onDay < accepted.min
+        ? `short ${accepted.min - onDay}`
+        : onDay < accepted.target
+          ? `target −${accepted.target - onDay}`
+          : onDay > accepted.target
+            ? `over ${onDay - accepted.target}`
+            : 'met';
+    expect(await coverCell.locator('div').innerText()).toBe(words);
+    await coverCell.scrollIntoViewIfNeeded();
+    await screenshot(page, 'demand-board-generated', { fullPage: false });
+  }, 150_000);
 
   it("shows a ward's patients and ratios with the ratio caution, and a ward period's requirement", async () => {
     const { page } = browser;
