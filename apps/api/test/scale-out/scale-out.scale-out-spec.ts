@@ -2,8 +2,9 @@
  * The product on real engines as several processes: Debian's redis-server, two API instances that
  * share nothing in memory, two solver worker processes (`npm run worker`). A smaller set of the
  * journeys than the main suite: sign-in (its rate limits counted across instances), generate
- * (progress followed through the other instance), publish and repair, a cache read after another instance's write,
- * one active run per period, cancel, a worker killed mid-solve, health and the scheduled jobs.
+ * (progress followed through the other instance), publish and repair, a swap proposed, accepted and
+ * approved across instances, a cache read after another instance's write, one active run per
+ * period, cancel, a worker killed mid-solve, health and the scheduled jobs.
  *
  * Needs the compiled API (`npx nx run api:build`), /usr/bin/redis-server and Debian's PostgreSQL
  * 15 (a throwaway cluster, as the API suite's PostgreSQL run makes). Run with
@@ -11,6 +12,7 @@
  * two processes, a write of one can find the file locked by the other ("database is locked").
  */
 import {
+  type AssignmentGridDto,
   type AuditEntryDto,
   type Page,
   PLANNING_ROUTES as P,
@@ -18,6 +20,8 @@ import {
   type RosterPeriodDto,
   SOLVING_ROUTES as R,
   type SolveRunDto,
+  SWAP_ROUTES as S,
+  type SwapRequestDto,
   type HealthResponse,
 } from '@rotaplex/contracts';
 import { Queue } from 'bullmq';
@@ -33,7 +37,10 @@ import {
   publishPeriod,
   putCell,
   readGrid,
+  readPeriod,
   shiftTypesByCode,
+  staffByName,
+  WARD_PEOPLE,
 } from '../support/planning';
 import { api, bearer, type TestApp } from '../support/test-app';
 import {
@@ -120,6 +127,8 @@ describe('scale-out: Redis, PostgreSQL, two API instances, two solver workers', 
   let queue: Queue;
   let client: Redis;
   let manager: string;
+  /** Two ward people (demo data) who swap: signed in before the sign-in limit tests use up this address. */
+  let staff: Record<'priya' | 'tomasz', string>;
   let unitId: string;
   let postgres: PostgresCluster | null = null;
   /** The week generated through the queue (published and repaired later). */
@@ -154,6 +163,10 @@ describe('scale-out: Redis, PostgreSQL, two API instances, two solver workers', 
       .send({ email: 'manager@example.com', password: DEMO_PASSWORD })
       .expect(200);
     manager = signIn.body.accessToken;
+    const signInStaff = async (email: string) =>
+      (await request(b.baseUrl).post(api('/auth/login')).send({ email, password: DEMO_PASSWORD }).expect(200))
+        .body.accessToken as string;
+    staff = { priya: await signInStaff(WARD_PEOPLE.b), tomasz: await signInStaff(WARD_PEOPLE.c) };
     unitId = (await findUnit(remote(a), manager)).id;
   }, 240_000);
 
@@ -260,6 +273,91 @@ describe('scale-out: Redis, PostgreSQL, two API instances, two solver workers', 
         .expect(200)
     ).body as Page<AuditEntryDto>;
     expect(trail.items.map((e) => e.kind)).toEqual(['publish', 'repair']);
+  });
+
+  it('approves a swap across instances: proposed on one, accepted on the other, approved on the first', async () => {
+    // A week published the way the publish test above does it, with the two shifts the swap needs:
+    // Priya Wendover works a Late and Tomasz Kellaway an Early on the Wednesday (demo people and
+    // shifts; one shift each, so the daily rest and the weekly hours stay as they were).
+    const period = await createPeriod(remote(a), manager, unitId, '2031-09-01');
+    const shifts = await shiftTypesByCode(remote(a), manager, unitId);
+    const person = await staffByName(remote(a), manager, unitId);
+    const priya = person('Priya Wendover').id;
+    const tomasz = person('Tomasz Kellaway').id;
+    const day = '2031-09-03';
+    await putCell(remote(a), manager, period.id, {
+      staffMemberId: priya,
+      date: day,
+      shiftTypeId: shifts.L.id,
+    });
+    await putCell(remote(a), manager, period.id, {
+      staffMemberId: tomasz,
+      date: day,
+      shiftTypeId: shifts.E.id,
+    });
+    await publishPeriod(remote(a), manager, period.id);
+
+    const proposal = await request(a.baseUrl).post(api(S.swaps)).set(bearer(staff.priya)).send({
+      kind: 'swap',
+      rosterPeriodId: period.id,
+      myDate: day,
+      colleagueStaffMemberId: tomasz,
+      theirDate: day,
+    });
+    expect([proposal.status, proposal.body.message]).toEqual([201, undefined]);
+    const proposed = proposal.body as SwapRequestDto;
+    expect(proposed.status).toBe('proposed');
+    // Each one's cell on the day is exchanged.
+    const changes = (r: SwapRequestDto) =>
+      r.changes.map((c) => [c.staffMemberId, c.date, c.beforeShiftTypeId, c.afterShiftTypeId]).sort();
+    expect(changes(proposed)).toEqual(
+      [
+        [priya, day, shifts.L.id, shifts.E.id],
+        [tomasz, day, shifts.E.id, shifts.L.id],
+      ].sort(),
+    );
+
+    const accepted = await request(b.baseUrl)
+      .post(api(S.swapDecide(proposed.id)))
+      .set(bearer(staff.tomasz))
+      .send({ decision: 'accept' })
+      .expect(200);
+    expect(accepted.body.status).toBe('accepted');
+
+    // Each one's shift on the day as a board read through the other instance shows it.
+    const onDay = (grid: AssignmentGridDto) =>
+      [priya, tomasz].map(
+        (id) => grid.rows.find((r) => r.staffMemberId === id)?.cells[grid.dates.indexOf(day)]?.shiftTypeId,
+      );
+    // (this read also leaves the board cached on b, so the read after the approval tests the cache too)
+    expect(onDay(await readGrid(remote(b), manager, period.id))).toEqual([shifts.L.id, shifts.E.id]);
+    const { version } = await readPeriod(remote(b), manager, period.id);
+
+    const approved = await request(a.baseUrl)
+      .post(api(S.swapDecide(proposed.id)))
+      .set(bearer(manager))
+      .send({ decision: 'approve' })
+      .expect(200);
+    expect(approved.body.status).toBe('approved');
+
+    // Read through the other instance: the cells exchanged, the version raised with them (one
+    // writer per period, as the main suite's swaps spec checks on SQLite). A decided request is
+    // not decided again: 409 Conflict (RFC 9110, section 15.5.10).
+    expect(onDay(await readGrid(remote(b), manager, period.id))).toEqual([shifts.E.id, shifts.L.id]);
+    expect((await readPeriod(remote(b), manager, period.id)).version).toBe(version + 1);
+    const twice = await request(b.baseUrl)
+      .post(api(S.swapDecide(proposed.id)))
+      .set(bearer(manager))
+      .send({ decision: 'approve' })
+      .expect(409);
+    expect(twice.body.message).toMatch(/already approved/);
+    const read = (
+      await request(b.baseUrl)
+        .get(api(S.swap(proposed.id)))
+        .set(bearer(manager))
+        .expect(200)
+    ).body as SwapRequestDto;
+    expect(read.status).toBe('approved');
   });
 
   it("an instance's cached board read sees a cell another instance wrote", async () => {
