@@ -241,9 +241,16 @@ export class SolveQueue {
           outcome = { kind: 'failed', message: job.failedReason || 'unknown error' };
         else if (job.deferredFailure && ['waiting', 'prioritized'].includes(state)) {
           // Stalled past the limit: BullMQ fails such a job only when a worker takes it next, and
-          // there may be none left. Take it off the queue and fail the run now.
-          await job.remove();
-          outcome = { kind: 'failed', message: job.deferredFailure };
+          // there may be none left. Take it off the queue and fail the run now. The outcome is
+          // claimed before the removal: the removal wakes another check, which would find the job
+          // missing and end the run as cancelled (seen once in the scale-out run).
+          if (!this.owned.delete(runId)) return;
+          const message = job.deferredFailure;
+          await job
+            .remove()
+            .catch((err: unknown) => this.logger.warn(`Removing solve job ${runId}: ${String(err)}`));
+          for (const listener of this.ended) listener(runId, { kind: 'failed', message });
+          return;
         }
       }
     } catch (err) {
