@@ -122,7 +122,9 @@ describe('swap approved by e-mail', () => {
       await session.page.goto(`/my-roster?date=${START}`);
       const own = session.page.getByTestId('my-roster-calendar').locator('[data-mine="true"]');
       await own.first().waitFor();
-      return [...new Set(await own.evaluateAll((els) => els.map((el) => el.getAttribute('aria-label'))))];
+      // Names start with what the event shows (time and title); compare the words after it.
+      const names = await own.evaluateAll((els) => els.map((el) => el.getAttribute('aria-label')));
+      return [...new Set(names.map((n) => n?.replace(/^.*?\(you\), /, '')))];
     };
     expect(await mineOn(staffA)).toEqual([`Your shift, Early (E), ${START} 07:00 to 15:00`]);
     await signIn(staffB.page, 'priya.wendover@example.com');

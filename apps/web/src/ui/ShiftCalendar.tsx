@@ -151,8 +151,7 @@ export function CalendarEventFace({
   const styles = useStyles();
   return (
     <div className={styles.event}>
-      {timeText && <span className={styles.time}>{timeText}</span>}
-      <span>{title}</span>
+      {timeText && <span className={styles.time}>{timeText}</span>} <span>{title}</span>
       {children}
     </div>
   );

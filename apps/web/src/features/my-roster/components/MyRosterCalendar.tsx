@@ -87,7 +87,10 @@ export function MyRosterCalendar({ units, initialDate }: MyRosterCalendarProps) 
   };
   const handleEventMount = (arg: EventMountArg) => {
     const s = (arg.event.extendedProps as RosterEventProps).shift;
+    // The name starts with the words the event shows (WCAG 2.5.3, label in name; axe-core's
+    // label-content-name-mismatch), then says whose shift it is and when.
     const label = [
+      `${arg.timeText} ${arg.event.title}`.trim(),
       s.mine ? 'Your shift' : s.name,
       `${s.shiftName} (${s.shiftCode})`,
       `${arg.event.startStr.slice(0, 10)} ${arg.event.startStr.slice(11, 16)} to ${arg.event.endStr.slice(11, 16)}`,
