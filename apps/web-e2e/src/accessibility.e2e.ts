@@ -25,7 +25,12 @@ describe('accessibility of the main pages (axe-core, WCAG 2.1 AA)', () => {
       'GET',
       `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}&pageSize=${MAX_PAGE_SIZE}`,
     );
-    demoPeriod = [...items].sort((a, b) => a.startDate.localeCompare(b.startDate))[0];
+    // The demo period: the ward's earliest that has not started (the publish journey makes a week
+    // in 2024, and the order of the journeys is Jest's).
+    const today = new Date().toISOString().slice(0, 10);
+    demoPeriod = [...items]
+      .filter((p) => p.startDate >= today)
+      .sort((a, b) => a.startDate.localeCompare(b.startDate))[0];
     browser = await openBrowser();
   });
   afterAll(async () => {

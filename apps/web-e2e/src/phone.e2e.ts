@@ -30,8 +30,13 @@ describe('staff pages on a phone', () => {
       'GET',
       `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}&pageSize=${MAX_PAGE_SIZE}`,
     );
-    // The demo period is the ward's earliest; the week after it is free and within 100 days of today.
-    const demo = [...periods].sort((a, b) => a.startDate.localeCompare(b.startDate))[0];
+    // The demo period is the ward's earliest that has not started yet (other journeys may have made
+    // weeks in the past, which the order of the journeys decides); the week after it is free and
+    // within 100 days of today.
+    const today = new Date().toISOString().slice(0, 10);
+    const demo = [...periods]
+      .filter((p) => p.startDate >= today)
+      .sort((a, b) => a.startDate.localeCompare(b.startDate))[0];
     start = addDays(demo.startDate, demo.days);
     const period = await createPeriod(token, ward.id, start);
     const shift = await shiftIdsByCode(token, ward.id);
