@@ -203,6 +203,9 @@ export function ShiftCalendar({
         slotLabelFormat={TIME_FORMAT}
         displayEventEnd
         dayMaxEvents={4}
+        // "+3 more" is a link without an address: as a button it may carry aria-expanded (axe-core
+        // aria-allowed-attr, WCAG 4.1.2).
+        moreLinkDidMount={(arg) => arg.el.setAttribute('role', 'button')}
         {...options}
       />
     </div>

@@ -131,7 +131,10 @@ export function PeriodCalendar({
     const p = arg.event.extendedProps as AssignmentEventProps;
     const start = arg.event.startStr.slice(11, 16);
     const end = arg.event.endStr.slice(11, 16);
+    // The name starts with the words the event shows (WCAG 2.5.3, label in name), then says whose
+    // shift it is and when.
     const label = [
+      `${shownTime(arg.event)} ${arg.event.title}`.trim(),
       p.name,
       formatDay(p.date),
       `${p.code} ${p.shiftName}`,
@@ -149,7 +152,7 @@ export function PeriodCalendar({
     if (arg.event.display === 'background') return <span className={styles.leave}>{arg.event.title}</span>;
     const p = arg.event.extendedProps as AssignmentEventProps;
     return (
-      <CalendarEventFace timeText={arg.timeText} title={arg.event.title}>
+      <CalendarEventFace timeText={shownTime(arg.event)} title={arg.event.title}>
         {p.pinned && <PinFilled aria-hidden />}
         {p.flagged && <WarningFilled aria-hidden />}
       </CalendarEventFace>
@@ -215,4 +218,14 @@ export function PeriodCalendar({
       />
     </CalendarColumn>
   );
+}
+
+/**
+ * The whole shift's times on its face, also on each piece of a night drawn on two days (the week
+ * view cuts an event at midnight and would show "22:00 - 00:00").
+ */
+function shownTime(event: { startStr: string; endStr: string }): string {
+  const start = event.startStr.slice(11, 16);
+  const end = event.endStr.slice(11, 16);
+  return start && end ? `${start} - ${end}` : start;
 }
