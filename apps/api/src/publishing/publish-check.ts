@@ -6,6 +6,7 @@ import {
   type UnhonouredLeaveDto,
 } from '@rotaplex/contracts';
 import { explainUnmetNeeds, type Roster } from '@rotaplex/roster-model';
+import { daysBetween } from '../common/dates';
 import { type RosterInput } from '../roster-input/roster-input.service';
 
 /** Explanations are worked out for at most this many shifts below minimum (the rest are listed bare). */
@@ -89,11 +90,6 @@ export function unhonouredLeave(input: RosterInput, roster: Roster): UnhonouredL
     });
   }
   return out.sort((a, b) => a.date.localeCompare(b.date) || a.name.localeCompare(b.name));
-}
-
-/** Whole days from `from` to `to` ("YYYY-MM-DD", calendar days, no time zone involved). */
-function daysBetween(from: string, to: string): number {
-  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
 }
 
 /**

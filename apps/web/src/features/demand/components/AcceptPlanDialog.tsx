@@ -7,7 +7,7 @@ import {
   TableRow,
   tokens,
 } from '@fluentui/react-components';
-import { RATIO_CAUTION, type ShiftTypeDto, type SkillDto } from '@rotaplex/contracts';
+import { GUARD_RAIL_DEFERRAL, RATIO_CAUTION, type ShiftTypeDto, type SkillDto } from '@rotaplex/contracts';
 import { formatDay } from '@/features/planning-board/utils/days';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import { DataTable } from '@/ui/DataTable';
@@ -53,12 +53,12 @@ export function AcceptPlanDialog(props: AcceptPlanDialogProps) {
     >
       <div className={styles.body}>
         <Body1>
-          {`Each shift of each day of the period gets the plan's minimum and target as a date override of the cover needs. ${changed.length} of ${changes.length} change; the others already have these numbers. The weekly pattern stays as it is, and you can change any override afterwards on the cover needs page.`}
+          {`Each shift of each day of the period gets the plan's minimum and target as a date override of the cover needs. ${changed.length === changes.length ? `All ${changes.length} change.` : `${changed.length} of ${changes.length} change; the others already have these numbers.`} The weekly pattern stays as it is, and you can change any override afterwards on the cover needs page.`}
         </Body1>
         {lowered > 0 && (
           <MessageBar intent="warning" layout="multiline">
             <MessageBarBody>
-              {`${lowered} minimum${lowered === 1 ? ' is' : 's are'} lowered${toZero > 0 ? `, ${toZero} of them to 0` : ''}. Fewer people on shift than before: check that the forecast is right.`}
+              {`${lowered} minimum${lowered === 1 ? ' is' : 's are'} lowered${toZero > 0 ? `, ${toZero} of them to 0` : ''}. Fewer people on shift than before: check that the forecast is right. ${GUARD_RAIL_DEFERRAL}`}
             </MessageBarBody>
           </MessageBar>
         )}

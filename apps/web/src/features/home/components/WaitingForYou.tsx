@@ -88,7 +88,7 @@ export function WaitingItem(props: {
             {props.badge}
           </Badge>
         )}
-        <ChevronRightRegular aria-hidden="true" />
+        <ChevronRightRegular aria-hidden="true" className={styles.badge} />
       </a>
     </li>
   );
