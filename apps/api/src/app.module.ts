@@ -64,7 +64,13 @@ export class AppModule {
         ScaleOutModule.forRoot(scaleOut),
         TypeOrmModule.forRootAsync({
           // SQLite file by default, PostgreSQL when DATABASE_URL is set (database/open-database.ts).
-          useFactory: () => dataSourceOptions(databaseTarget(config)),
+          // The entities are those the modules register with TypeOrmModule.forFeature: each module
+          // owns its tables.
+          useFactory: () => ({
+            ...dataSourceOptions(databaseTarget(config)),
+            entities: [],
+            autoLoadEntities: true,
+          }),
           dataSourceFactory: (options) => openDatabase(databaseTarget(config), options!),
         }),
         redis ? ClusterWriteGenerationModule : WriteGenerationModule,

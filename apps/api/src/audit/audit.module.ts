@@ -1,4 +1,6 @@
 import { Global, Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditEntryEntity } from './audit-entry.entity';
 import { AuditService } from './audit.service';
 
 export { AuditService, type AuditRecord } from './audit.service';
@@ -9,6 +11,7 @@ export { AuditService, type AuditRecord } from './audit.service';
  */
 @Global()
 @Module({
+  imports: [TypeOrmModule.forFeature([AuditEntryEntity])],
   providers: [AuditService],
   exports: [AuditService],
 })

@@ -1,8 +1,18 @@
 import type Database from 'better-sqlite3';
+import { join } from 'node:path';
 import { DataSource, type DataSourceOptions, type QueryRunner } from 'typeorm';
-import { ENTITIES } from './entities';
 import { MIGRATIONS } from './migrations';
 import { POSTGRES_MIGRATIONS } from './migrations/postgres';
+
+/**
+ * Every entity file of the API by its name (`*.entity.ts`, `*.entities.ts`; `.js` once built), for
+ * the data sources opened outside Nest: the TypeORM command line (data-source.ts), the PostgreSQL
+ * migration writer and the schema tests. The application itself loads the entities its modules
+ * register (`TypeOrmModule.forFeature` with `autoLoadEntities`, app.module.ts), so this folder
+ * imports no module; test/entity-registration.e2e-spec.ts checks that both lists and the
+ * migrations' tables are the same.
+ */
+export const ENTITY_FILES = join(__dirname, '..', '**', '*.{entity,entities}.{ts,js}');
 
 /** Where the data lives: the SQLite file (the default) or a PostgreSQL database (DATABASE_URL). */
 export type DatabaseTarget = { type: 'sqlite'; file: string } | { type: 'postgres'; url: string };
@@ -34,7 +44,7 @@ export function dataSourceOptions(target: DatabaseTarget | string): DataSourceOp
     return {
       type: 'postgres',
       url: t.url,
-      entities: ENTITIES,
+      entities: [ENTITY_FILES],
       migrations: POSTGRES_MIGRATIONS,
       migrationsRun: false,
       migrationsTransactionMode: 'each',
@@ -51,7 +61,7 @@ export function dataSourceOptions(target: DatabaseTarget | string): DataSourceOp
   return {
     type: 'better-sqlite3',
     database: t.file,
-    entities: ENTITIES,
+    entities: [ENTITY_FILES],
     migrations: MIGRATIONS,
     migrationsRun: true,
     migrationsTransactionMode: 'each',

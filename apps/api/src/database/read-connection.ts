@@ -3,7 +3,6 @@ import type Database from 'better-sqlite3';
 import { DataSource, type EntityManager } from 'typeorm';
 import { AppConfig } from '../config/app-config';
 import { createDataSource, databaseTarget } from './data-source-options';
-import { ENTITIES } from './entities';
 
 /**
  * A second, read-only SQLite connection to the database file, for reads that must not wait for
@@ -21,14 +20,18 @@ import { ENTITIES } from './entities';
 export class ReadConnection implements OnModuleDestroy {
   constructor(private readonly dataSource: DataSource) {}
 
-  /** Opens the connection once the main one has created and migrated the file. */
-  static async open(config: AppConfig): Promise<ReadConnection> {
+  /**
+   * Opens the connection once the main one has created and migrated the file, with the entities
+   * the main one has (those the modules registered).
+   */
+  static async open(config: AppConfig, main: DataSource): Promise<ReadConnection> {
     const target = databaseTarget(config);
+    const entities = main.options.entities;
     if (target.type === 'postgres') {
       const pg = createDataSource({
         type: 'postgres',
         url: target.url,
-        entities: ENTITIES,
+        entities,
         migrationsRun: false,
         synchronize: false,
         extra: { max: 4, options: '-c default_transaction_read_only=on -c TimeZone=UTC' },
@@ -41,7 +44,7 @@ export class ReadConnection implements OnModuleDestroy {
       database: config.databaseFile,
       readonly: true,
       fileMustExist: true,
-      entities: ENTITIES,
+      entities,
       migrationsRun: false,
       synchronize: false,
       // The file is in WAL mode already (set by the main connection; it persists in the file).
@@ -70,7 +73,7 @@ export class ReadConnection implements OnModuleDestroy {
       provide: ReadConnection,
       // Depends on the main DataSource so the file exists and is migrated first.
       inject: [AppConfig, DataSource],
-      useFactory: (config: AppConfig) => ReadConnection.open(config),
+      useFactory: (config: AppConfig, main: DataSource) => ReadConnection.open(config, main),
     },
   ],
   exports: [ReadConnection],

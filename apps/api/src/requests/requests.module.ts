@@ -1,20 +1,24 @@
 import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
 import { AvailabilityService } from './availability.service';
 import { DateRequestsService } from './date-requests.service';
 import { LeaveService } from './leave.service';
 import { RequestAccess } from './request-access';
 import { RequestDtos } from './request-dtos';
 import { RequestViews } from './request-views.service';
+import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from './requests.entities';
 import { UnitsModule } from '../units/units.module';
 import { RequestsController } from './requests.controller';
 
 /**
  * Staff input: availability, date requests and leave, split by job (who may see and change what,
- * the answers' rows, each kind of input, and the views over them). The entities are registered in
- * database/entities.ts.
+ * the answers' rows, each kind of input, and the views over them).
  */
 @Module({
-  imports: [UnitsModule],
+  imports: [
+    TypeOrmModule.forFeature([AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity]),
+    UnitsModule,
+  ],
   controllers: [RequestsController],
   providers: [
     RequestAccess,

@@ -1,13 +1,14 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { UnitsModule } from '../units/units.module';
+import { RosterPeriodChangeEntity } from './roster-period-change.entity';
 import { RosterPeriodEntity } from './roster-period.entity';
 import { RosterPeriodsController } from './roster-periods.controller';
 import { RosterPeriodsService } from './roster-periods.service';
 import { PeriodWriter } from './period-writer';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([RosterPeriodEntity]), UnitsModule],
+  imports: [TypeOrmModule.forFeature([RosterPeriodEntity, RosterPeriodChangeEntity]), UnitsModule],
   controllers: [RosterPeriodsController],
   providers: [RosterPeriodsService, PeriodWriter],
   exports: [RosterPeriodsService, PeriodWriter],
