@@ -12,7 +12,7 @@ import { isRealDate } from '../common/dates';
 import { dateInWords, dateRangeInWords } from '../common/text/date-words';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
-import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
+import { ShiftTypesService } from '../shift-types/shift-types.service';
 import {
   type CreateDateRequestDto,
   type DateRequestQueryDto,
@@ -32,6 +32,7 @@ export class DateRequestsService {
     private readonly dataSource: DataSource,
     private readonly access: RequestAccess,
     private readonly dtos: RequestDtos,
+    private readonly shiftTypes: ShiftTypesService,
   ) {}
 
   private get m(): EntityManager {
@@ -144,7 +145,7 @@ export class DateRequestsService {
       if (shiftTypeId) errors.push('shiftTypeId must be empty for a day-off request');
     } else if (!shiftTypeId) {
       errors.push(`shiftTypeId is required for a ${kind === 'shiftOn' ? 'shift-on' : 'shift-off'} request`);
-    } else if (!(await this.m.countBy(ShiftTypeEntity, { id: shiftTypeId, unitId: period.unitId }))) {
+    } else if (!(await this.shiftTypes.isOfUnit(shiftTypeId, period.unitId))) {
       errors.push('shiftTypeId must be a shift type of this unit');
     }
     if (errors.length) throw new BadRequestException(errors);

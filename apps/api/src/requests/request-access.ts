@@ -1,11 +1,12 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { hasPermission } from '@rotaplex/contracts';
-import { DataSource, type EntityManager, In } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';
 import { canAccessUnit, visibleUnitIds } from '../common/unit-scope';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { type StaffMemberEntity } from '../staff/staff-member.entity';
+import { StaffService } from '../staff/staff.service';
 import { UnitsService } from '../units/units.service';
 
 /**
@@ -17,6 +18,7 @@ export class RequestAccess {
   constructor(
     private readonly dataSource: DataSource,
     private readonly units: UnitsService,
+    private readonly staff: StaffService,
   ) {}
 
   private get m(): EntityManager {
@@ -29,7 +31,7 @@ export class RequestAccess {
   }
 
   async staffOrFail(id: string): Promise<StaffMemberEntity> {
-    const staff = await this.m.findOneBy(StaffMemberEntity, { id });
+    const staff = await this.staff.byId(id);
     if (!staff) throw new NotFoundException('Staff member not found');
     return staff;
   }
@@ -56,10 +58,7 @@ export class RequestAccess {
 
   /** The caller's own active staff memberships (an inactive one takes no new requests). */
   async myStaff(user: AuthUser): Promise<StaffMemberEntity[]> {
-    return this.m.find(StaffMemberEntity, {
-      where: { userId: user.id, active: true },
-      order: { name: 'ASC' },
-    });
+    return this.staff.ofUser(user.id, this.m, true);
   }
 
   /** Staff member ids whose requests the caller may read (null: none beyond the unit filter). */
@@ -72,7 +71,7 @@ export class RequestAccess {
     const visible = visibleUnitIds(user);
     const units = await this.units.ofOrganisation(user.organisationId, unitId ? [unitId] : visible);
     if (!units.length) return [];
-    const staff = await this.m.findBy(StaffMemberEntity, { unitId: In(units.map((u) => u.id)) });
+    const staff = await this.staff.ofUnits(units.map((u) => u.id));
     return staff.map((s) => s.id);
   }
 

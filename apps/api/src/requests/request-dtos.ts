@@ -1,10 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import { type DateRequestDto, type LeaveDto, type Page, type RequestPeriodDto } from '@rotaplex/contracts';
-import { DataSource, type EntityManager, In } from 'typeorm';
 import { type RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UserEntity } from '../users/user.entity';
+import { ShiftTypesService } from '../shift-types/shift-types.service';
+import { type StaffMemberEntity } from '../staff/staff-member.entity';
+import { StaffService } from '../staff/staff.service';
+import { UsersService } from '../users/users.service';
 import { type DateRequestEntity, type LeaveRequestEntity } from './requests.entities';
 
 const iso = (d: Date | null): string | null => (d ? d.toISOString() : null);
@@ -18,21 +18,16 @@ export const cleanNote = (note: string | null | undefined): string | null => {
 /** Rows of date requests and leave as the API answers them (with names and shift codes). */
 @Injectable()
 export class RequestDtos {
-  constructor(private readonly dataSource: DataSource) {}
-
-  private get m(): EntityManager {
-    return this.dataSource.manager;
-  }
+  constructor(
+    private readonly staff: StaffService,
+    private readonly users: UsersService,
+    private readonly shiftTypes: ShiftTypesService,
+  ) {}
 
   async dateRequests(rows: DateRequestEntity[]): Promise<DateRequestDto[]> {
     const staff = await this.staffByIds(rows.map((r) => r.staffMemberId));
     const shiftIds = [...new Set(rows.map((r) => r.shiftTypeId).filter((s): s is string => s !== null))];
-    const shifts = new Map(
-      (shiftIds.length ? await this.m.findBy(ShiftTypeEntity, { id: In(shiftIds) }) : []).map((s) => [
-        s.id,
-        s,
-      ]),
-    );
+    const shifts = new Map((await this.shiftTypes.byIds(shiftIds)).map((s) => [s.id, s]));
     return rows.map((r) => ({
       id: r.id,
       rosterPeriodId: r.rosterPeriodId,
@@ -51,12 +46,7 @@ export class RequestDtos {
   async leave(rows: LeaveRequestEntity[]): Promise<LeaveDto[]> {
     const staff = await this.staffByIds(rows.map((r) => r.staffMemberId));
     const deciderIds = [...new Set(rows.map((r) => r.decidedById).filter((s): s is string => s !== null))];
-    const deciders = new Map(
-      (deciderIds.length ? await this.m.findBy(UserEntity, { id: In(deciderIds) }) : []).map((u) => [
-        u.id,
-        u.displayName,
-      ]),
-    );
+    const deciders = new Map((await this.users.byIds(deciderIds)).map((u) => [u.id, u.displayName]));
     return rows.map((r) => ({
       id: r.id,
       staffMemberId: r.staffMemberId,
@@ -76,9 +66,7 @@ export class RequestDtos {
 
   private async staffByIds(ids: string[]): Promise<Map<string, StaffMemberEntity>> {
     const unique = [...new Set(ids)];
-    return new Map(
-      (unique.length ? await this.m.findBy(StaffMemberEntity, { id: In(unique) }) : []).map((s) => [s.id, s]),
-    );
+    return new Map((await this.staff.byIds(unique)).map((s) => [s.id, s]));
   }
 }
 

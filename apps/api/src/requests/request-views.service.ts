@@ -11,7 +11,7 @@ import { type AuthUser } from '../common/auth-user';
 import { toPage } from '../common/pagination';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../roster-periods/roster-periods.service';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { StaffService } from '../staff/staff.service';
 import { UnitsService } from '../units/units.service';
 import { type MyRequestsQueryDto, type RequestListQueryDto } from './dto/requests.dto';
 import { RequestAccess } from './request-access';
@@ -30,6 +30,7 @@ export class RequestViews {
     private readonly access: RequestAccess,
     private readonly dtos: RequestDtos,
     private readonly units: UnitsService,
+    private readonly staff: StaffService,
   ) {}
 
   private get m(): EntityManager {
@@ -86,7 +87,7 @@ export class RequestViews {
 
   async periodRequests(user: AuthUser, periodId: string): Promise<PeriodRequestsDto> {
     const period = await this.access.managedPeriod(user, periodId);
-    const staff = await this.m.findBy(StaffMemberEntity, { unitId: period.unitId });
+    const staff = await this.staff.ofUnits([period.unitId]);
     const ids = staff.map((s) => s.id);
     const last = addDays(period.startDate, period.days - 1);
     const leave = ids.length

@@ -7,7 +7,10 @@ import { RequestAccess } from './request-access';
 import { RequestDtos } from './request-dtos';
 import { RequestViews } from './request-views.service';
 import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from './requests.entities';
+import { ShiftTypesModule } from '../shift-types/shift-types.module';
+import { StaffModule } from '../staff/staff.module';
 import { UnitsModule } from '../units/units.module';
+import { UsersModule } from '../users/users.module';
 import { RequestsController } from './requests.controller';
 
 /**
@@ -18,6 +21,9 @@ import { RequestsController } from './requests.controller';
   imports: [
     TypeOrmModule.forFeature([AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity]),
     UnitsModule,
+    StaffModule,
+    UsersModule,
+    ShiftTypesModule,
   ],
   controllers: [RequestsController],
   providers: [

@@ -6,7 +6,7 @@ import {
   shiftLengthMinutes,
   shiftTypeCautions,
 } from '@rotaplex/contracts';
-import { DataSource, Not, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { UnitsService } from '../units/units.service';
 import { type CreateShiftTypeDto, type UpdateShiftTypeDto } from './dto/shift-type.dto';
@@ -66,6 +66,16 @@ export class ShiftTypesService {
   /** Shift types of a unit by id (for other services). */
   async findForUnit(unitId: string): Promise<ShiftTypeEntity[]> {
     return this.shiftTypes.findBy({ unitId });
+  }
+
+  /** Whether the shift type is one of the unit's (for other services). */
+  async isOfUnit(id: string, unitId: string, em: EntityManager = this.dataSource.manager): Promise<boolean> {
+    return (await em.countBy(ShiftTypeEntity, { id, unitId })) > 0;
+  }
+
+  /** Shift types by id, any unit (for other services; unknown ids left out). */
+  async byIds(ids: string[], em: EntityManager = this.dataSource.manager): Promise<ShiftTypeEntity[]> {
+    return ids.length ? em.findBy(ShiftTypeEntity, { id: In(ids) }) : [];
   }
 
   private async load(user: AuthUser, unitId: string, id: string): Promise<ShiftTypeEntity> {

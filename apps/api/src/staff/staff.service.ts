@@ -14,7 +14,7 @@ import {
   type StaffMemberDto,
 } from '@rotaplex/contracts';
 import { isEmail } from 'class-validator';
-import { DataSource, Not, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { likePattern, toPage } from '../common/pagination';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
@@ -257,6 +257,44 @@ export class StaffService {
         s.active,
       ]),
     );
+  }
+
+  // Reads for other modules, without access checks (the caller has made them). Each runs in the
+  // caller's transaction when given its EntityManager, else on the main connection.
+
+  /** A staff member by id, or null. */
+  byId(id: string, em: EntityManager = this.dataSource.manager): Promise<StaffMemberEntity | null> {
+    return em.findOneBy(StaffMemberEntity, { id });
+  }
+
+  /** A staff member by id; TypeORM's EntityNotFoundError when there is none. */
+  byIdOrFail(id: string, em: EntityManager = this.dataSource.manager): Promise<StaffMemberEntity> {
+    return em.findOneByOrFail(StaffMemberEntity, { id });
+  }
+
+  /** Staff members by id (unknown ids left out). */
+  async byIds(ids: string[], em: EntityManager = this.dataSource.manager): Promise<StaffMemberEntity[]> {
+    return ids.length ? em.findBy(StaffMemberEntity, { id: In(ids) }) : [];
+  }
+
+  /** The staff members a user signs in as (in every unit), by name; with `activeOnly`, the active ones. */
+  ofUser(
+    userId: string,
+    em: EntityManager = this.dataSource.manager,
+    activeOnly = false,
+  ): Promise<StaffMemberEntity[]> {
+    return em.find(StaffMemberEntity, {
+      where: { userId, ...(activeOnly ? { active: true } : {}) },
+      order: { name: 'ASC' },
+    });
+  }
+
+  /** The staff members of the units. */
+  async ofUnits(
+    unitIds: string[],
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<StaffMemberEntity[]> {
+    return unitIds.length ? em.findBy(StaffMemberEntity, { unitId: In(unitIds) }) : [];
   }
 
   private async loadInOrganisation(user: AuthUser, id: string): Promise<StaffMemberEntity> {

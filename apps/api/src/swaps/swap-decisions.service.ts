@@ -25,8 +25,8 @@ import { dateInWords } from '../common/text/date-words';
 import { type OutgoingMail } from '../mail/mail.service';
 import { PeriodWriter } from '../roster-periods/period-writer';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UserEntity } from '../users/user.entity';
+import { StaffService } from '../staff/staff.service';
+import { UsersService } from '../users/users.service';
 import { evaluateChanges, staleCells } from './swap-evaluation';
 import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.service';
 import { SwapLinks } from './swap-links';
@@ -65,12 +65,15 @@ export class SwapDecisions {
     private readonly mailer: SwapMailer,
     private readonly auditTrail: AuditService,
     private readonly writer: PeriodWriter,
+    private readonly staff: StaffService,
+    private readonly users: UsersService,
   ) {}
 
   async cancel(user: AuthUser, id: string): Promise<SwapRequestDto> {
     const outcome = await this.dataSource.transaction(async (em): Promise<Outcome> => {
       const row = await this.reads.visibleRequest(em, user, id);
-      const me = await em.findOneBy(StaffMemberEntity, { id: row.proposerStaffMemberId, userId: user.id });
+      const proposer = await this.staff.byId(row.proposerStaffMemberId, em);
+      const me = proposer?.userId === user.id ? proposer : null;
       if (!me) throw new ForbiddenException('Only the person who asked can cancel this request');
       if (row.status !== 'proposed' && row.status !== 'accepted') {
         throw new ConflictException(`This request is already ${row.status}`);
@@ -175,13 +178,13 @@ export class SwapDecisions {
     const reason = body.reason?.trim() || null;
     if (body.decision === 'accept' || body.decision === 'decline') {
       const colleague = row.colleagueStaffMemberId
-        ? await em.findOneBy(StaffMemberEntity, { id: row.colleagueStaffMemberId })
+        ? await this.staff.byId(row.colleagueStaffMemberId, em)
         : null;
       if (!colleague || colleague.userId !== actor.id) {
         throw new ForbiddenException('Only the colleague asked can accept or decline this request');
       }
       if (row.status !== 'proposed') throw new ConflictException(`This request is already ${row.status}`);
-      const proposer = await em.findOneByOrFail(StaffMemberEntity, { id: row.proposerStaffMemberId });
+      const proposer = await this.staff.byIdOrFail(row.proposerStaffMemberId, em);
       await this.links.retire(em, row.id, 'colleague');
       if (body.decision === 'decline') {
         await this.setStatus(
@@ -380,16 +383,8 @@ export class SwapDecisions {
   }
 
   private async actorOf(em: EntityManager, userId: string): Promise<Actor> {
-    const user = await em.findOne(UserEntity, { where: { id: userId }, relations: { units: true } });
-    if (!user || !user.active)
-      throw new ForbiddenException('The account this link was sent to is no longer active');
-    return {
-      id: user.id,
-      role: user.role,
-      unitIds: user.units.map((u) => u.id),
-      organisationId: user.organisationId,
-      displayName: user.displayName,
-      email: user.email,
-    };
+    const user = await this.users.activeAuthUserIn(userId, em);
+    if (!user) throw new ForbiddenException('The account this link was sent to is no longer active');
+    return user;
   }
 }

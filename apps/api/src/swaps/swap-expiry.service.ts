@@ -5,7 +5,7 @@ import { Brackets, DataSource } from 'typeorm';
 import { dateInWords } from '../common/text/date-words';
 import { localDate } from '../common/dates';
 import { sqliteUtc } from '../outbox/outbox-delivery.service';
-import { UnitEntity } from '../units/unit.entity';
+import { UnitsService } from '../units/units.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';
 
 /** Statuses that still wait for a decision. */
@@ -39,7 +39,10 @@ export function isOverdue(row: Pick<SwapRequestEntity, 'status' | 'firstDate'>, 
 export class SwapExpiryService implements OnApplicationBootstrap {
   private readonly logger = new Logger(SwapExpiryService.name);
 
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly units: UnitsService,
+  ) {}
 
   async onApplicationBootstrap(): Promise<void> {
     // A server that was stopped for a while catches up before it answers.
@@ -55,13 +58,10 @@ export class SwapExpiryService implements OnApplicationBootstrap {
   async expireOverdue(): Promise<number> {
     const m = this.dataSource.manager;
     const now = new Date();
-    const zones = await m
-      .createQueryBuilder(UnitEntity, 'u')
-      .select('DISTINCT u.timeZone', 'timeZone')
-      .getRawMany<{ timeZone: string }>();
+    const zones = await this.units.timeZonesInUse();
     // Units in zones that share today's local date are one condition (at most three dates exist at once).
     const byDate = new Map<string, string[]>();
-    for (const { timeZone } of zones) {
+    for (const timeZone of zones) {
       const today = localDate(now, timeZone);
       byDate.set(today, [...(byDate.get(today) ?? []), timeZone]);
     }

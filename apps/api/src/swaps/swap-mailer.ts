@@ -1,9 +1,10 @@
 import { Injectable } from '@nestjs/common';
-import { type EntityManager, In } from 'typeorm';
+import { type EntityManager } from 'typeorm';
 import { MailService, type OutgoingMail } from '../mail/mail.service';
 import { type RosterInput } from '../roster-input/roster-input.service';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UserEntity } from '../users/user.entity';
+import { StaffService } from '../staff/staff.service';
+import { type UserEntity } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { SwapLinks } from './swap-links';
 import { swapMail } from './swap-mails';
 import { type SwapRequestEntity } from './swap-request.entity';
@@ -24,6 +25,8 @@ export class SwapMailer {
   constructor(
     private readonly mail: MailService,
     private readonly links: SwapLinks,
+    private readonly staff: StaffService,
+    private readonly users: UsersService,
   ) {}
 
   /** Queues the mails in the outbox inside the change's transaction: they go only if it commits. */
@@ -33,13 +36,9 @@ export class SwapMailer {
 
   /** Active managers of the unit (admins of the organisation when the unit has none). */
   async approvers(em: EntityManager, input: RosterInput): Promise<UserEntity[]> {
-    const managers = await em
-      .createQueryBuilder(UserEntity, 'u')
-      .innerJoin('u.units', 'unit', 'unit.id = :unitId', { unitId: input.unit.id })
-      .where('u.role = :role AND u.active = :active', { role: 'manager', active: true })
-      .getMany();
+    const managers = await this.users.activeManagersOf(input.unit.id, em);
     if (managers.length) return managers;
-    return em.findBy(UserEntity, { organisationId: input.unit.organisationId, role: 'admin', active: true });
+    return this.users.activeAdminsOf(input.unit.organisationId, em);
   }
 
   /** One mail with a fresh single-use approval link to each approver of the unit. */
@@ -111,8 +110,8 @@ export class SwapMailer {
     lines: string[],
   ): Promise<OutgoingMail[]> {
     const mails: OutgoingMail[] = [];
-    for (const s of await em.findBy(StaffMemberEntity, { id: In(staffIds) })) {
-      const user = s.userId ? await em.findOneBy(UserEntity, { id: s.userId }) : null;
+    for (const s of await this.staff.byIds(staffIds, em)) {
+      const user = s.userId ? await this.users.byId(s.userId, em) : null;
       const to = user?.email ?? s.email;
       if (!to) continue;
       mails.push(

@@ -8,7 +8,7 @@ import { dateInWords } from '../common/text/date-words';
 import { type OutgoingMail } from '../mail/mail.service';
 import { type RosterInput } from '../roster-input/roster-input.service';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
-import { UserEntity } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { evaluateChanges } from './swap-evaluation';
 import { SwapMailer } from './swap-mailer';
 import { describe, newMessages, shiftOf, shiftWords } from './swap-mails';
@@ -26,6 +26,7 @@ export class SwapPlanning {
     private readonly dataSource: DataSource,
     private readonly reads: SwapReads,
     private readonly mailer: SwapMailer,
+    private readonly users: UsersService,
   ) {}
 
   async preview(user: AuthUser, body: ProposeSwapDto): Promise<SwapPreviewDto> {
@@ -64,7 +65,7 @@ export class SwapPlanning {
           decidedById: null,
         }),
       );
-      const colleagueUser = await em.findOneByOrFail(UserEntity, { id: colleague.userId! });
+      const colleagueUser = await this.users.byIdOrFail(colleague.userId!, em);
       mails.push(
         await this.mailer.colleagueLink(
           em,

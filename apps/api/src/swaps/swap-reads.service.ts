@@ -6,14 +6,15 @@ import {
   type SwapOptionsDto,
   type SwapRequestDto,
 } from '@rotaplex/contracts';
-import { DataSource, type EntityManager, In } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';
 import { assertUnitAccess, canAccessUnit } from '../common/unit-scope';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { type StaffMemberEntity } from '../staff/staff-member.entity';
+import { StaffService } from '../staff/staff.service';
 import { UnitsService } from '../units/units.service';
 import { type SwapListQuery } from './dto/swap.dto';
 import { changeDto } from './swap-evaluation';
@@ -33,6 +34,7 @@ export class SwapReads {
     private readonly input: RosterInputService,
     private readonly units: UnitsService,
     private readonly shiftTypes: ShiftTypesService,
+    private readonly staff: StaffService,
   ) {}
 
   async options(user: AuthUser, periodId: string): Promise<SwapOptionsDto> {
@@ -69,7 +71,7 @@ export class SwapReads {
     const empty = { items: [], total: 0, page: query.page, pageSize: query.pageSize };
     const qb = m.createQueryBuilder(SwapRequestEntity, 'r').orderBy('r.createdAt', 'DESC').addOrderBy('r.id');
     if (user.role === 'staff') {
-      const mine = (await m.findBy(StaffMemberEntity, { userId: user.id })).map((s) => s.id);
+      const mine = (await this.staff.ofUser(user.id, m)).map((s) => s.id);
       if (!mine.length) return empty;
       if (query.waitingForMe) {
         qb.where(`r.colleagueStaffMemberId IN (:...mine) AND r.status = 'proposed'`, { mine });
@@ -138,7 +140,7 @@ export class SwapReads {
     if (!row) throw new NotFoundException('Swap request not found');
     if (user.role === 'staff') {
       const ids = [row.proposerStaffMemberId, row.colleagueStaffMemberId].filter((x): x is string => !!x);
-      const mine = await em.countBy(StaffMemberEntity, { id: In(ids), userId: user.id });
+      const mine = (await this.staff.byIds(ids, em)).some((s) => s.userId === user.id);
       if (!mine) throw new NotFoundException('Swap request not found');
     } else {
       if ((await this.units.organisationOf(row.unitId)) !== user.organisationId)
@@ -162,7 +164,7 @@ export class SwapReads {
         ]),
       ),
     ];
-    const staff = staffIds.length ? await em.findBy(StaffMemberEntity, { id: In(staffIds) }) : [];
+    const staff = await this.staff.byIds(staffIds, em);
     const names = new Map(staff.map((s) => [s.id, s.name]));
     const shiftTypes = (
       await Promise.all([...new Set(rows.map((r) => r.unitId))].map((u) => this.shiftTypes.findForUnit(u)))

@@ -4,7 +4,9 @@ import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
 import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
 import { ShiftTypesModule } from '../shift-types/shift-types.module';
+import { StaffModule } from '../staff/staff.module';
 import { UnitsModule } from '../units/units.module';
+import { UsersModule } from '../users/users.module';
 import { SwapDecisions } from './swap-decisions.service';
 import { SwapExpiryService } from './swap-expiry.service';
 import { SwapLinks } from './swap-links';
@@ -23,6 +25,8 @@ import { SwapsService } from './swaps.service';
     MailModule,
     UnitsModule,
     ShiftTypesModule,
+    StaffModule,
+    UsersModule,
   ],
   controllers: [SwapsController, SwapLinksController],
   providers: [SwapsService, SwapReads, SwapPlanning, SwapDecisions, SwapLinks, SwapMailer, SwapExpiryService],

@@ -80,6 +80,15 @@ export class UnitsService {
     return unit?.timeZone ?? 'UTC';
   }
 
+  /** Every IANA time zone some unit lives in (for the scheduled expiry of other modules). */
+  async timeZonesInUse(): Promise<string[]> {
+    const rows = await this.units
+      .createQueryBuilder('u')
+      .select('DISTINCT u.timeZone', 'timeZone')
+      .getRawMany<{ timeZone: string }>();
+    return rows.map((r) => r.timeZone);
+  }
+
   /** The units of an organisation, all or only the given ids (for other modules). */
   async ofOrganisation(organisationId: string, ids: string[] | null = null): Promise<UnitEntity[]> {
     return this.units.findBy({ organisationId, ...(ids ? { id: In(ids) } : {}) });

@@ -2,7 +2,7 @@ import { ConflictException, ForbiddenException, Injectable, NotFoundException } 
 import { InjectRepository } from '@nestjs/typeorm';
 import { type Page, type UserDto, WEB_PATHS } from '@rotaplex/contracts';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
-import { DataSource, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { OneTimeTokensService } from '../auth/one-time-tokens.service';
 import { RefreshTokensService } from '../auth/refresh-tokens.service';
 import { type AuthUser } from '../common/auth-user';
@@ -149,6 +149,44 @@ export class UsersService {
       return user && user.active ? toAuthUser(user) : null;
     });
     return found && { ...found, unitIds: [...found.unitIds] };
+  }
+
+  // Reads for other modules, without access checks (the caller has made them). Each runs in the
+  // caller's transaction when given its EntityManager, else on the main connection.
+
+  /** A user by id, or null. */
+  byId(id: string, em: EntityManager = this.dataSource.manager): Promise<UserEntity | null> {
+    return em.findOneBy(UserEntity, { id });
+  }
+
+  /** A user by id; TypeORM's EntityNotFoundError when there is none. */
+  byIdOrFail(id: string, em: EntityManager = this.dataSource.manager): Promise<UserEntity> {
+    return em.findOneByOrFail(UserEntity, { id });
+  }
+
+  /** Users by id (unknown ids left out). */
+  async byIds(ids: string[], em: EntityManager = this.dataSource.manager): Promise<UserEntity[]> {
+    return ids.length ? em.findBy(UserEntity, { id: In(ids) }) : [];
+  }
+
+  /** A user as the guards see them, read now (no cache); null when missing or deactivated. */
+  async activeAuthUserIn(id: string, em: EntityManager = this.dataSource.manager): Promise<AuthUser | null> {
+    const user = await em.findOne(UserEntity, { where: { id }, relations: { units: true } });
+    return user && user.active ? toAuthUser(user) : null;
+  }
+
+  /** The active managers of a unit. */
+  activeManagersOf(unitId: string, em: EntityManager = this.dataSource.manager): Promise<UserEntity[]> {
+    return em
+      .createQueryBuilder(UserEntity, 'u')
+      .innerJoin('u.units', 'unit', 'unit.id = :unitId', { unitId })
+      .where('u.role = :role AND u.active = :active', { role: 'manager', active: true })
+      .getMany();
+  }
+
+  /** The active admins of an organisation. */
+  activeAdminsOf(organisationId: string, em: EntityManager = this.dataSource.manager): Promise<UserEntity[]> {
+    return em.findBy(UserEntity, { organisationId, role: 'admin', active: true });
   }
 
   private async sendInvitation(caller: AuthUser, user: UserEntity, token: string): Promise<void> {
