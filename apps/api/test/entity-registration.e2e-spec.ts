@@ -39,7 +39,7 @@ describe('entities registered by their modules', () => {
   afterAll(async () => {
     await standalone?.destroy();
     await t?.close();
-    rmSync(dir, { recursive: true, force: true });
+    if (dir) rmSync(dir, { recursive: true, force: true });
   });
 
   it('loads in the app, from the modules alone, the entities of every entity file', () => {
