@@ -11,3 +11,4 @@ export * from './lib/publishing';
 export * from './lib/my-roster';
 export * from './lib/guard-rails';
 export * from './lib/demand';
+export * from './lib/open-shifts';

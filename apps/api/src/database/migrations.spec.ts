@@ -41,6 +41,7 @@ describe('database migrations', () => {
         'mail_messages',
         'migrations',
         'one_time_tokens',
+        'open_shift_outside_offers',
         'organisations',
         'outbox_messages',
         'refresh_tokens',

@@ -1,12 +1,14 @@
 import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
 import { SwapsModule } from '../swaps/swaps.module';
 import { OpenShiftsController } from './open-shifts.controller';
 import { OpenShiftsService } from './open-shifts.service';
+import { OutsideOfferEntity } from './outside-offer.entity';
 
 @Module({
-  imports: [SwapsModule, RosterInputModule, MailModule],
+  imports: [TypeOrmModule.forFeature([OutsideOfferEntity]), SwapsModule, RosterInputModule, MailModule],
   controllers: [OpenShiftsController],
   providers: [OpenShiftsService],
 })

@@ -12,7 +12,9 @@ import {
   type OpenShiftDto,
   type Page,
   ROSTER_PERIOD_MAX_DAYS,
+  type OutsideOfferDto,
   type SwapRequestDto,
+  type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
 import { DataSource, In } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
@@ -34,6 +36,14 @@ import { type OpenShiftQuery } from './dto/open-shift.dto';
 import { AppConfig } from '../config/app-config';
 import { MailService } from '../mail/mail.service';
 import { openShiftMail, ruleInWords } from './open-shift-words';
+import { AuditService } from '../audit/audit.service';
+import {
+  type CreateOutsideOfferBody,
+  type FillOutsideOfferBody,
+  type WhatItWouldTakeQueryDto,
+} from './dto/outside-offer.dto';
+import { currentOffers, lessFilledOutside, offerDto, offerForStaff, OutsideOffers } from './outside-offers';
+import { HOW_TO_CHANGE_PUBLISHED, whatItWouldTake } from './what-it-would-take';
 
 type Cell = Pick<AssignmentEntity, 'staffMemberId' | 'date' | 'shiftTypeId'>;
 
@@ -92,6 +102,7 @@ interface PeriodOpenShifts {
 @Injectable()
 export class OpenShiftsService {
   private readonly cache: GenerationCache<PeriodOpenShifts>;
+  private readonly outside: OutsideOffers;
 
   constructor(
     private readonly dataSource: DataSource,
@@ -99,9 +110,11 @@ export class OpenShiftsService {
     private readonly swaps: SwapsService,
     private readonly mail: MailService,
     private readonly config: AppConfig,
+    audit: AuditService,
     writes: WriteGeneration,
   ) {
     this.cache = new GenerationCache(writes, { maxEntries: 32 });
+    this.outside = new OutsideOffers(input, audit, unmetNeeds);
   }
 
   /**
@@ -141,7 +154,12 @@ export class OpenShiftsService {
         continue;
       }
       const me = open.input.staff.find((s) => s.userId === user.id);
-      if (me) all.push(...(query.withBlocked ? this.withReasons(open, me) : this.claimableBy(open, me)));
+      if (me) {
+        const mine = query.withBlocked ? this.withReasons(open, me) : this.claimableBy(open, me);
+        all.push(
+          ...mine.map((o) => (o.outsideOffer ? { ...o, outsideOffer: offerForStaff(o.outsideOffer) } : o)),
+        );
+      }
     }
     // With the blocked ones too, the shifts the caller may take come first.
     all.sort(
@@ -176,7 +194,8 @@ export class OpenShiftsService {
       skillId: p.skillId,
     }));
     const skills = await this.skillCodes(input);
-    const open = unmetNeeds(input, rows, today).map((need) => {
+    const offers = await currentOffers(m, periodId);
+    const open = lessFilledOutside(unmetNeeds(input, rows, today), offers).map((need) => {
       const shift = input.shiftTypes.find((s) => s.id === need.shiftTypeId)!;
       return {
         rosterPeriodId: periodId,
@@ -195,6 +214,7 @@ export class OpenShiftsService {
           (c) =>
             c.change?.date === need.date && c.change.after === need.shiftTypeId && c.skillId === need.skillId,
         ).length,
+        outsideOffer: need.offer ? offerDto(need.offer) : null,
       };
     });
     return {
@@ -298,6 +318,56 @@ export class OpenShiftsService {
     return { notified: eligible.length };
   }
 
+  /**
+   * For one open shift: each person of the unit with the skill who is not away that day, with the
+   * rules taking it would break (nearest first), the cautions, and how the product lets a roster
+   * change. Managers and planners of the unit; 409 when the shift is not open.
+   */
+  async whatItWouldTake(user: AuthUser, query: WhatItWouldTakeQueryDto): Promise<WhatItWouldTakeDto> {
+    const input = await this.input.load(query.rosterPeriodId);
+    assertUnitAccess(user, input.period.unitId);
+    if (input.period.status !== 'published') {
+      throw new ConflictException(
+        `Open shifts are for published rosters; this period is ${input.period.status}`,
+      );
+    }
+    const skillId = query.skillId || null;
+    const today = localDate(new Date(), input.unit.timeZone);
+    const open = await this.cache.get(`${input.period.id}|${today}`, () =>
+      this.compute(input.period.id, today),
+    );
+    const shift = open.open.find(
+      (o) => o.date === query.date && o.shiftTypeId === query.shiftTypeId && o.skillId === skillId,
+    );
+    if (!shift) {
+      throw new ConflictException('This shift is not open (it is covered, past or not a need of the roster)');
+    }
+    const found = whatItWouldTake(open.input, open.rows, shift);
+    return {
+      rosterPeriodId: input.period.id,
+      date: shift.date,
+      shiftTypeId: shift.shiftTypeId,
+      skillId,
+      ...found,
+      howToChange: HOW_TO_CHANGE_PUBLISHED,
+    };
+  }
+
+  /** Records that an open shift was offered to bank or agency staff outside the roster (with audit). */
+  createOutsideOffer(user: AuthUser, body: CreateOutsideOfferBody): Promise<OutsideOfferDto> {
+    return this.dataSource.transaction((em) => this.outside.create(em, user, body));
+  }
+
+  /** Takes an offer outside the roster back (an offer or a fill); the shift counts as open again. */
+  withdrawOutsideOffer(user: AuthUser, id: string): Promise<OutsideOfferDto> {
+    return this.dataSource.transaction((em) => this.outside.withdraw(em, user, id));
+  }
+
+  /** Marks an offer filled by people from outside the roster: the shift counts that many fewer open. */
+  fillOutsideOffer(user: AuthUser, id: string, body: FillOutsideOfferBody): Promise<OutsideOfferDto> {
+    return this.dataSource.transaction((em) => this.outside.fill(em, user, id, body));
+  }
+
   private async timeZones(unitIds: string[]): Promise<Map<string, string>> {
     const ids = [...new Set(unitIds)];
     const units = ids.length ? await this.dataSource.manager.findBy(UnitEntity, { id: In(ids) }) : [];
@@ -316,7 +386,8 @@ export class OpenShiftsService {
       const me = this.swaps.staffOf(user, input);
       const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: input.period.id });
       const today = localDate(new Date(), input.unit.timeZone);
-      const need = unmetNeeds(input, rows, today).find(
+      const offers = await currentOffers(em, input.period.id);
+      const need = lessFilledOutside(unmetNeeds(input, rows, today), offers).find(
         (n) =>
           n.date === body.date && n.shiftTypeId === body.shiftTypeId && n.skillId === (body.skillId ?? null),
       );

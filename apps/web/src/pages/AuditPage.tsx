@@ -33,6 +33,7 @@ const KIND_LABELS: Record<AuditKind, string> = {
   swap: 'Swap',
   'open-shift-claim': 'Open shift claimed',
   'manual-edit': 'Edit',
+  'open-shift-outside': 'Open shift outside the roster',
 };
 
 /** How many cells an entry's before/after lists (when they are lists of cells). */

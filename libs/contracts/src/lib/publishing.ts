@@ -28,7 +28,14 @@ export interface OutboxMessageDto {
 
 // ---------------------------------------------------------------- audit
 
-export const AUDIT_KINDS = ['publish', 'repair', 'swap', 'open-shift-claim', 'manual-edit'] as const;
+export const AUDIT_KINDS = [
+  'publish',
+  'repair',
+  'swap',
+  'open-shift-claim',
+  'manual-edit',
+  'open-shift-outside',
+] as const;
 export type AuditKind = (typeof AUDIT_KINDS)[number];
 
 export interface AuditEntryDto {

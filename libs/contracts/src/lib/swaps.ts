@@ -1,3 +1,5 @@
+import type { OutsideOfferDto } from './open-shifts';
+
 /**
  * Swaps, give-aways and open-shift claims on a published roster, and the e-mailed decision links.
  * One change request type covers all three: a swap (A and B exchange shifts), an offer (A gives a
@@ -135,6 +137,8 @@ export interface OpenShiftDto {
    */
   mayTake?: boolean;
   whyNot?: string[];
+  /** The current offer of this shift to bank or agency staff outside the roster, if any. */
+  outsideOffer?: OutsideOfferDto | null;
 }
 
 /** Query of GET /open-shifts. */

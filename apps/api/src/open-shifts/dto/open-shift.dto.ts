@@ -10,6 +10,7 @@ import { Transform } from 'class-transformer';
 import { IsBoolean, IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
 import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 import { PageQueryDto } from '../../common/pagination';
+import { OutsideOfferResponse } from './outside-offer.dto';
 
 /** page (from 1), pageSize (1 to MAX_PAGE_SIZE, default 20) and an optional period. */
 export class OpenShiftQuery extends PickType(PageQueryDto, ['page', 'pageSize'] as const) {
@@ -93,6 +94,12 @@ class OpenShiftResponse implements OpenShiftDto {
   @ApiPropertyOptional({ type: [String], description: 'withBlocked only: why the caller may not take it' })
   whyNot?: string[];
   @ApiProperty({ description: 'Claims waiting for a manager' }) pendingClaims!: number;
+  @ApiPropertyOptional({
+    type: OutsideOfferResponse,
+    nullable: true,
+    description: 'The current offer to bank or agency staff outside the roster (staff: its state only)',
+  })
+  outsideOffer?: OutsideOfferResponse | null;
 }
 
 export class OpenShiftPageResponse implements Page<OpenShiftDto> {
