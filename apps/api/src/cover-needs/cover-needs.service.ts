@@ -13,8 +13,11 @@ import {
 } from '@rotaplex/contracts';
 import { DataSource, type EntityManager, In, IsNull, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
-import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
-import { SkillEntity } from '../skills/skill.entity';
+import { isRealDate } from '../common/dates';
+import { type ShiftTypeEntity } from '../shift-types/shift-type.entity';
+import { ShiftTypesService } from '../shift-types/shift-types.service';
+import { type SkillEntity } from '../skills/skill.entity';
+import { SkillsService } from '../skills/skills.service';
 import { parseCsv } from '../staff/csv';
 import { UnitsService } from '../units/units.service';
 import { CoverOverrideEntity, CoverPatternRowEntity } from './cover-need.entity';
@@ -24,6 +27,9 @@ import {
   type CreateCoverOverrideDto,
   DATE_PATTERN,
 } from './dto/cover-need.dto';
+
+/** @deprecated import isRealDate from common/dates (kept for roster-periods until it does). */
+export { isRealDate } from '../common/dates';
 
 type Need = { shiftTypeId: string; skillId: string | null; min: number; target: number };
 type PatternRow = Need & { weekday: number };
@@ -36,6 +42,8 @@ export class CoverNeedsService {
     @InjectRepository(CoverOverrideEntity) private readonly overrides: Repository<CoverOverrideEntity>,
     private readonly units: UnitsService,
     private readonly dataSource: DataSource,
+    private readonly shiftTypes: ShiftTypesService,
+    private readonly skills: SkillsService,
   ) {}
 
   async get(user: AuthUser, unitId: string): Promise<CoverNeedsDto> {
@@ -332,10 +340,14 @@ export class CoverNeedsService {
     return saved;
   }
 
-  private async references(user: AuthUser, unitId: string) {
+  /**
+   * What rows of cover needs (and of demand) may name: the unit's shift types and the caller's
+   * organisation's skills, by id and by code.
+   */
+  async references(user: AuthUser, unitId: string) {
     const [shifts, skills] = await Promise.all([
-      this.dataSource.getRepository(ShiftTypeEntity).findBy({ unitId }),
-      this.dataSource.getRepository(SkillEntity).findBy({ organisationId: user.organisationId }),
+      this.shiftTypes.findForUnit(unitId),
+      this.skills.ofOrganisation(user.organisationId),
     ]);
     return {
       shiftIds: new Set(shifts.map((s) => s.id)),
@@ -363,12 +375,6 @@ function needLabel(
 /** The cautions, closed by the deferral to local law and agreements when there are any. */
 function withDeferral(cautions: string[]): string[] {
   return cautions.length ? [...cautions, GUARD_RAIL_DEFERRAL] : [];
-}
-
-/** A YYYY-MM-DD string that names a real calendar date (not 2026-02-30). */
-export function isRealDate(text: string): boolean {
-  const d = new Date(`${text}T00:00:00Z`);
-  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === text;
 }
 
 function toOverrideDto(o: CoverOverrideEntity): CoverOverrideDto {

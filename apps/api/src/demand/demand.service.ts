@@ -32,11 +32,11 @@ import {
 import { DataSource, Repository } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
-import { CoverNeedsService, isRealDate } from '../cover-needs/cover-needs.service';
+import { isRealDate } from '../common/dates';
+import { CoverNeedsService } from '../cover-needs/cover-needs.service';
 import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
-import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
-import { SkillEntity } from '../skills/skill.entity';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
+import { ShiftTypesService } from '../shift-types/shift-types.service';
+import { StaffService } from '../staff/staff.service';
 import { parseCsv } from '../staff/csv';
 import { UnitsService } from '../units/units.service';
 import { DemandAcceptanceEntity, UnitDemandEntity } from './demand.entities';
@@ -159,6 +159,8 @@ export class DemandService implements OnModuleDestroy {
     private readonly periods: RosterPeriodsService,
     private readonly coverNeeds: CoverNeedsService,
     private readonly dataSource: DataSource,
+    private readonly shiftTypesService: ShiftTypesService,
+    private readonly staff: StaffService,
   ) {}
 
   async onModuleDestroy(): Promise<void> {
@@ -180,7 +182,7 @@ export class DemandService implements OnModuleDestroy {
   /** Replaces the unit's demand (both parts) after checking every row; one write. */
   async put(user: AuthUser, unitId: string, body: PutUnitDemandDto): Promise<UnitDemandDto> {
     await this.units.get(user, unitId);
-    const refs = await this.references(user, unitId);
+    const refs = await this.coverNeeds.references(user, unitId);
     const contact = body.contactCentre ? plainContact(body.contactCentre) : null;
     const ward = body.ward ? plainWard(body.ward) : null;
     const errors = [
@@ -310,10 +312,7 @@ export class DemandService implements OnModuleDestroy {
     const unitId = period.unitId;
     const row = await this.demands.findOneBy({ unitId });
     const dates = Array.from({ length: period.days }, (_, i) => addDays(period.startDate, i));
-    const shiftTypes = await this.dataSource.getRepository(ShiftTypeEntity).find({
-      where: { unitId },
-      order: { start: 'ASC', code: 'ASC' },
-    });
+    const shiftTypes = await this.shiftTypesService.inDayOrder(unitId);
     const cautions: string[] = [];
     let contactCentre: DemandPlanDto['contactCentre'] = null;
     const contact = row?.contactCentre ?? null;
@@ -369,7 +368,7 @@ export class DemandService implements OnModuleDestroy {
     }
     let ward: DemandPlanDto['ward'] = null;
     if (row?.ward) {
-      const knownSkills = (await this.references(user, unitId)).skillIds;
+      const knownSkills = (await this.coverNeeds.references(user, unitId)).skillIds;
       const usable = { ...row.ward, ratios: row.ward.ratios.filter((r) => knownSkills.has(r.skillId)) };
       ward = {
         requirement: wardPlan(
@@ -458,24 +457,10 @@ export class DemandService implements OnModuleDestroy {
       .where('a.rosterPeriodId = :periodId AND a.shiftTypeId IS NOT NULL', { periodId })
       .getMany();
     if (skillId === null) return rows.map((r) => ({ date: r.date, shiftTypeId: r.shiftTypeId as string }));
-    const skilled = await this.dataSource
-      .getRepository(StaffMemberEntity)
-      .createQueryBuilder('s')
-      .innerJoin('s.skills', 'k', 'k.id = :skillId', { skillId })
-      .select(['s.id'])
-      .getMany();
-    const ids = new Set(skilled.map((s) => s.id));
+    const ids = new Set(await this.staff.idsWithSkill(skillId));
     return rows
       .filter((r) => ids.has(r.staffMemberId))
       .map((r) => ({ date: r.date, shiftTypeId: r.shiftTypeId as string }));
-  }
-
-  private async references(user: AuthUser, unitId: string) {
-    const [shifts, skills] = await Promise.all([
-      this.dataSource.getRepository(ShiftTypeEntity).findBy({ unitId }),
-      this.dataSource.getRepository(SkillEntity).findBy({ organisationId: user.organisationId }),
-    ]);
-    return { shiftIds: new Set(shifts.map((s) => s.id)), skillIds: new Set(skills.map((s) => s.id)) };
   }
 }
 

@@ -68,6 +68,11 @@ export class ShiftTypesService {
     return this.shiftTypes.findBy({ unitId });
   }
 
+  /** Shift types of a unit in the order of the day: by start time, then code (for other services). */
+  async inDayOrder(unitId: string): Promise<ShiftTypeEntity[]> {
+    return this.shiftTypes.find({ where: { unitId }, order: { start: 'ASC', code: 'ASC' } });
+  }
+
   /** Whether the shift type is one of the unit's (for other services). */
   async isOfUnit(id: string, unitId: string, em: EntityManager = this.dataSource.manager): Promise<boolean> {
     return (await em.countBy(ShiftTypeEntity, { id, unitId })) > 0;

@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { type SkillDto } from '@rotaplex/contracts';
-import { DataSource, In, Not, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { type CreateSkillDto, type UpdateSkillDto } from './dto/skill.dto';
 import { SkillEntity } from './skill.entity';
@@ -60,6 +60,14 @@ export class SkillsService {
       }
       await em.delete(SkillEntity, { id });
     });
+  }
+
+  /** Every skill of the organisation (for other services). */
+  ofOrganisation(
+    organisationId: string,
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<SkillEntity[]> {
+    return em.findBy(SkillEntity, { organisationId });
   }
 
   /** Skills of the organisation by code (upper case); 400 naming `field` for unknown codes. */

@@ -289,6 +289,16 @@ export class StaffService {
     });
   }
 
+  /** Ids of the staff members (of any unit) who have the skill. */
+  async idsWithSkill(skillId: string, em: EntityManager = this.dataSource.manager): Promise<string[]> {
+    const rows = await em
+      .createQueryBuilder(StaffMemberEntity, 's')
+      .innerJoin('s.skills', 'k', 'k.id = :skillId', { skillId })
+      .select(['s.id'])
+      .getMany();
+    return rows.map((s) => s.id);
+  }
+
   /** The staff members of the units. */
   async ofUnits(
     unitIds: string[],
