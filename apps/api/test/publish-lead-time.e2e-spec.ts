@@ -112,11 +112,13 @@ describe('publish lead time', () => {
   it('cautions when a roster starts sooner than the lead time, and not when it starts later', async () => {
     const today = localDate(new Date(), unit.timeZone);
     const soon = await period(addDays(today, 7));
-    const cautions = (await check(soon.id)).cautions;
-    expect(cautions[0]).toMatch(
+    const soonCheck = await check(soon.id);
+    expect(soonCheck.lateNotice).toMatch(
       /^This roster starts in 7 days: less notice than the 14 days this unit aims to give\..*local law and agreements decide\.$/,
     );
+    // The late notice is its own line of the check, not one of the settings cautions.
+    expect(soonCheck.cautions.some((c) => /less notice/.test(c))).toBe(false);
     const later = await period(addDays(today, 14));
-    expect((await check(later.id)).cautions.some((c) => /less notice/.test(c))).toBe(false);
+    expect((await check(later.id)).lateNotice).toBeNull();
   });
 });

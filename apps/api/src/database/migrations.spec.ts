@@ -37,6 +37,7 @@ describe('database migrations', () => {
         'cover_pattern_rows',
         'date_requests',
         'demand_acceptances',
+        'late_changes',
         'leave_requests',
         'mail_messages',
         'migrations',

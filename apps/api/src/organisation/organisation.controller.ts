@@ -1,7 +1,8 @@
-import { Body, Controller, Get, Patch } from '@nestjs/common';
+import { Body, Controller, Get, Patch, Put } from '@nestjs/common';
 import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { OrganisationResponse } from './dto/organisation-response.dto';
-import { type OrganisationDto } from '@rotaplex/contracts';
+import { type NoticeWindowSettingsDto, type OrganisationDto } from '@rotaplex/contracts';
+import { NoticeWindowResponse, UpdateNoticeWindowDto } from './dto/notice-window.dto';
 import { type AuthUser } from '../common/auth-user';
 import { Authenticated, RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -18,6 +19,24 @@ export class OrganisationController {
   @ApiOkResponse({ type: OrganisationResponse })
   get(@CurrentUser() user: AuthUser): Promise<OrganisationDto> {
     return this.organisation.get(user.organisationId);
+  }
+
+  /** The notice window for late changes to published rosters, and whether predictability pay is recorded. */
+  @Get('notice-window')
+  @RequirePermissions('reports:read')
+  @ApiOkResponse({ type: NoticeWindowResponse })
+  noticeWindow(@CurrentUser() user: AuthUser): Promise<NoticeWindowSettingsDto> {
+    return this.organisation.noticeWindow(user.organisationId);
+  }
+
+  @Put('notice-window')
+  @RequirePermissions('organisation:manage')
+  @ApiOkResponse({ type: NoticeWindowResponse })
+  setNoticeWindow(
+    @CurrentUser() user: AuthUser,
+    @Body() body: UpdateNoticeWindowDto,
+  ): Promise<NoticeWindowSettingsDto> {
+    return this.organisation.setNoticeWindow(user.organisationId, body);
   }
 
   @Patch()

@@ -112,6 +112,7 @@ export class PublishCheckResponse implements PublishCheckDto {
   @ApiProperty({ type: [BelowMinimumShiftResponse] }) belowMinimum!: BelowMinimumShiftResponse[];
   @ApiProperty({ type: [FindingResponse] }) ruleFindings!: FindingResponse[];
   @ApiProperty({ type: [UnhonouredLeaveResponse] }) unhonouredLeave!: UnhonouredLeaveResponse[];
+  @ApiProperty({ type: String, nullable: true }) lateNotice!: string | null;
   @ApiProperty({ type: [String] }) cautions!: string[];
   @ApiProperty({ type: [String] }) blockers!: string[];
   @ApiProperty() needsAcknowledgement!: boolean;

@@ -21,6 +21,7 @@ import { type PageQueryDto, toPage } from '../common/pagination';
 import { AppConfig } from '../config/app-config';
 import { ContractEntity } from '../contracts/contract.entity';
 import { MailService } from '../mail/mail.service';
+import { LateChangeEntity } from '../roster-periods/late-change.entity';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
@@ -31,6 +32,7 @@ import { toCsv } from '../staff/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
 import { belowMinimum, leadTimeCaution, settingCautions, unhonouredLeave } from './publish-check';
 import { localDate } from '../common/dates';
+import { dateInWords } from '../common/text/date-words';
 import { unmetNeeds } from '../open-shifts/open-shifts.service';
 import { ClaimCheck } from '../swaps/swap-evaluation';
 import { formatShiftTimes, type MailShift, rosterMail } from './roster-mail';
@@ -81,16 +83,12 @@ export class PublishingService {
       belowMinimum: short,
       ruleFindings: checkDto(input, roster).violations,
       unhonouredLeave: unhonouredLeave(input, roster),
-      cautions: [
-        ...[
-          leadTimeCaution(
-            localDate(new Date(), input.unit.timeZone),
-            input.period.startDate,
-            input.unit.publishLeadDays,
-          ),
-        ].filter((c): c is string => c !== null),
-        ...settingCautions(input, roster, contracts),
-      ],
+      lateNotice: leadTimeCaution(
+        localDate(new Date(), input.unit.timeZone),
+        input.period.startDate,
+        input.unit.publishLeadDays,
+      ),
+      cautions: settingCautions(input, roster, contracts),
       blockers,
       needsAcknowledgement: short.length > 0,
     };
@@ -207,10 +205,17 @@ export class PublishingService {
         }
         const changes = diffRosters(input, before, roster);
         // Through the period's writer: the version rises, clients holding the old roster must reload.
-        await saveSolvedRoster(em, this.writer, input, roster, {
+        // A shift taken off for the person's own approved leave counts as asked for by them.
+        const version = await saveSolvedRoster(em, this.writer, input, roster, {
           kind: 'repair',
           actorUserId: run.requestedById,
+          leaveCells: new Set(
+            input.problem.absences
+              .filter((a) => a.kind === 'leave')
+              .map((a) => `${a.personId}|${input.dates[a.day]}`),
+          ),
         });
+        const late = await em.findBy(LateChangeEntity, { rosterPeriodId: periodId, version });
         const after = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
         await em.insert(RosterPublicationEntity, {
           id: randomUUID(),
@@ -225,7 +230,9 @@ export class PublishingService {
           rosterPeriodId: periodId,
           actorUserId: run.requestedById,
           kind: 'repair',
-          summary: `Repair changed ${changes.length} ${changes.length === 1 ? 'cell' : 'cells'} for ${changedPeople.size} ${changedPeople.size === 1 ? 'person' : 'people'}`,
+          summary:
+            `Repair changed ${changes.length} ${changes.length === 1 ? 'cell' : 'cells'} for ${changedPeople.size} ${changedPeople.size === 1 ? 'person' : 'people'}` +
+            lateSummary(late),
           before: changes.map((c) => ({
             staffMemberId: c.staffMemberId,
             date: c.date,
@@ -233,7 +240,7 @@ export class PublishingService {
           })),
           after: changes.map((c) => ({ staffMemberId: c.staffMemberId, date: c.date, shiftTypeId: c.after })),
         });
-        await this.mailPeople(em, input, roster, changedPeople, 'changed');
+        await this.mailPeople(em, input, roster, changedPeople, 'changed', lateNotes(late));
       },
     };
     return this.solveRuns.start(user, periodId, { timeLimitSeconds }, mode);
@@ -339,6 +346,7 @@ export class PublishingService {
     roster: Roster,
     only: Set<string> | null,
     kind: 'published' | 'changed',
+    lateNote: Map<string, string> = new Map(),
   ): Promise<number> {
     const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
     const link = `${this.config.publicUrl ?? ''}/`;
@@ -361,6 +369,7 @@ export class PublishingService {
         link,
         kind,
         openShifts: mayTake.get(person.id) ?? 0,
+        lateNote: lateNote.get(person.id),
       });
       await this.mail.send({ to: person.email, ...content }, em);
       sent++;
@@ -394,6 +403,41 @@ function openShiftsByPerson(input: RosterInput, roster: Roster): Map<string, num
         !check.blocked(person.id, o.date, o.shiftTypeId),
     ).length;
     if (n > 0) out.set(person.id, n);
+  }
+  return out;
+}
+
+/**
+ * The audit summary's words on a change's cells inside the notice window: how many, how many asked
+ * for by the person, and the predictability pay recorded.
+ */
+export function lateSummary(late: readonly LateChangeEntity[]): string {
+  if (late.length === 0) return '';
+  const window = late[0].noticeWindowDays;
+  const employee = late.filter((l) => l.initiatedBy === 'employee').length;
+  const paid = late.filter((l) => l.payHours !== null);
+  const hours = paid.reduce((n, l) => n + (l.payHours ?? 0), 0);
+  return (
+    `; ${late.length} ${late.length === 1 ? 'change is' : 'changes are'} inside the ${window}-day notice window` +
+    (employee > 0 ? ` (${employee} asked for by the person, commonly exempt)` : '') +
+    (paid.length > 0
+      ? `; predictability pay recorded: ${hours} h for ${paid.length} ${paid.length === 1 ? 'change' : 'changes'}`
+      : '')
+  );
+}
+
+/** Per person, the e-mail's line on their late changes. */
+export function lateNotes(late: readonly LateChangeEntity[]): Map<string, string> {
+  const out = new Map<string, string>();
+  for (const person of new Set(late.map((l) => l.staffMemberId))) {
+    const mine = late.filter((l) => l.staffMemberId === person);
+    const days = [...new Set(mine.map((l) => l.date))].sort().map(dateInWords);
+    out.set(
+      person,
+      `This is a late change: ${days.join(', ')} ${days.length === 1 ? 'is' : 'are'} less than ` +
+        `${mine[0].noticeWindowDays} days away. Where a notice-window law or agreement applies, ` +
+        'it decides what this means for you; ask your manager or payroll team.',
+    );
   }
   return out;
 }

@@ -26,6 +26,8 @@ export interface RosterMailInput {
   kind: 'published' | 'changed';
   /** Open shifts of this roster the person may take (skill, free that day, no rule broken); 0 or absent: none. */
   openShifts?: number;
+  /** For a change inside the notice window: the line saying it is a late change. */
+  lateNote?: string;
 }
 
 /**
@@ -78,6 +80,7 @@ export function rosterMail(p: RosterMailInput): MailContent {
     '',
     ...(lines.length ? lines.map((l) => `- ${l}`) : [none]),
     '',
+    ...(p.lateNote ? [p.lateNote, ''] : []),
     ...(openLine ? [openLine, ''] : []),
     `See the roster: ${p.link}`,
     '',
@@ -92,7 +95,7 @@ ${
   lines.length
     ? `<ul style="margin:0 0 16px;padding-left:20px">\n${lines.map((l) => `<li>${escapeHtml(l)}</li>`).join('\n')}\n</ul>`
     : `<p style="margin:0 0 16px">${escapeHtml(none)}</p>`
-}${openLine ? `\n<p style="margin:0 0 16px">${escapeHtml(openLine)}</p>` : ''}
+}${p.lateNote ? `\n<p style="margin:0 0 16px">${escapeHtml(p.lateNote)}</p>` : ''}${openLine ? `\n<p style="margin:0 0 16px">${escapeHtml(openLine)}</p>` : ''}
 <p style="margin:24px 0"><a href="${escapeHtml(p.link)}" style="background:#0f5c57;color:#ffffff;padding:10px 18px;border-radius:4px;text-decoration:none">See the roster</a></p>
 </body></html>`;
   return { subject, text, html };

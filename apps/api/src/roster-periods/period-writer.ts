@@ -5,6 +5,7 @@ import { type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { UserEntity } from '../users/user.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
+import { recordLateChanges, type ShiftChange } from './notice-window';
 import { RosterPeriodEntity } from './roster-period.entity';
 
 /** One cell as it must be after the change: a shift (or null for a day off) and its pin. */
@@ -20,6 +21,11 @@ export interface CellChangeBy {
   kind: RosterChangeKind;
   /** The user who asked for it; null for the system. */
   actorUserId: string | null;
+  /**
+   * "staffMemberId|date" of cells whose person is on approved leave that day: a shift taken off
+   * there counts as asked for by the person (notice-window.ts).
+   */
+  leaveCells?: ReadonlySet<string>;
 }
 
 /**
@@ -27,7 +33,9 @@ export interface CellChangeBy {
  * and claim approval) goes through it, inside the caller's transaction (which checks the change and
  * records its audit entry and mails): it writes the rows, raises `roster_periods.version` by one and
  * records the change, so a publish or decision holding an older version is refused with what
- * changed. A change that leaves every cell as it was writes nothing and keeps the version.
+ * changed. A change that leaves every cell as it was writes nothing and keeps the version. On a
+ * published period, shifts changed inside the organisation's notice window are recorded as late
+ * changes (with predictability pay when the organisation records it) in the same transaction.
  */
 @Injectable()
 export class PeriodWriter {
@@ -41,11 +49,16 @@ export class PeriodWriter {
     const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
     const byCell = new Map(rows.map((r) => [`${r.staffMemberId}|${r.date}`, r]));
     let changed = 0;
+    const shiftChanges: ShiftChange[] = [];
     for (const c of cells) {
       const existing = byCell.get(`${c.staffMemberId}|${c.date}`) ?? null;
       if ((existing?.shiftTypeId ?? null) === c.shiftTypeId && (existing?.pinned ?? false) === c.pinned)
         continue;
       changed++;
+      if ((existing?.shiftTypeId ?? null) !== c.shiftTypeId) {
+        const before = existing?.shiftTypeId ?? null;
+        shiftChanges.push({ staffMemberId: c.staffMemberId, date: c.date, before, after: c.shiftTypeId });
+      }
       if (c.shiftTypeId === null && !c.pinned) {
         if (existing) await em.delete(AssignmentEntity, { id: existing.id });
       } else if (existing) {
@@ -64,7 +77,7 @@ export class PeriodWriter {
         });
       }
     }
-    return this.bump(em, periodId, changed, by);
+    return this.bump(em, periodId, changed, by, shiftChanges);
   }
 
   /**
@@ -86,12 +99,25 @@ export class PeriodWriter {
       .filter((s) => !pinned.has(`${s.staffMemberId}|${s.date}`))
       .map((s) => ({ rosterPeriodId: periodId, ...s, pinned: false }));
     const now = new Set(rows.map((r) => `${r.staffMemberId}|${r.date}`));
+    const shiftChanges: ShiftChange[] = rows
+      .filter((r) => (old.get(`${r.staffMemberId}|${r.date}`) ?? null) !== r.shiftTypeId)
+      .map((r) => ({
+        staffMemberId: r.staffMemberId,
+        date: r.date,
+        before: old.get(`${r.staffMemberId}|${r.date}`) ?? null,
+        after: r.shiftTypeId,
+      }));
+    for (const [k, before] of old) {
+      if (now.has(k) || before === null) continue;
+      const [staffMemberId, date] = k.split('|');
+      shiftChanges.push({ staffMemberId, date, before, after: null });
+    }
     let changed = rows.filter((r) => old.get(`${r.staffMemberId}|${r.date}`) !== r.shiftTypeId).length;
     changed += [...old.keys()].filter((k) => !now.has(k)).length;
-    if (changed === 0) return this.bump(em, periodId, 0, by);
+    if (changed === 0) return this.bump(em, periodId, 0, by, []);
     await em.delete(AssignmentEntity, { rosterPeriodId: periodId, pinned: false });
     for (let i = 0; i < rows.length; i += 200) await em.insert(AssignmentEntity, rows.slice(i, i + 200));
-    return this.bump(em, periodId, changed, by);
+    return this.bump(em, periodId, changed, by, shiftChanges);
   }
 
   /**
@@ -155,7 +181,13 @@ export class PeriodWriter {
     }));
   }
 
-  private async bump(em: EntityManager, periodId: string, cells: number, by: CellChangeBy): Promise<number> {
+  private async bump(
+    em: EntityManager,
+    periodId: string,
+    cells: number,
+    by: CellChangeBy,
+    shiftChanges: readonly ShiftChange[],
+  ): Promise<number> {
     if (cells === 0) return (await em.findOneByOrFail(RosterPeriodEntity, { id: periodId })).version;
     await em.increment(RosterPeriodEntity, { id: periodId }, 'version', 1);
     const { version } = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
@@ -178,6 +210,11 @@ export class PeriodWriter {
       actorUserId,
       actorName,
       at: new Date(),
+    });
+    await recordLateChanges(em, periodId, version, shiftChanges, {
+      kind: by.kind,
+      actorName,
+      leaveCells: by.leaveCells,
     });
     return version;
   }

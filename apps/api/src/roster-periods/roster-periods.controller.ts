@@ -7,7 +7,7 @@ import {
   ApiOkResponse,
   ApiTags,
 } from '@nestjs/swagger';
-import { type Page, type RosterPeriodDto } from '@rotaplex/contracts';
+import { type LateChangesDto, type Page, type RosterPeriodDto } from '@rotaplex/contracts';
 import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -38,6 +38,17 @@ export class RosterPeriodsController {
   @ApiOkResponse({ type: RosterPeriodResponse })
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<RosterPeriodDto> {
     return this.periods.get(user, id);
+  }
+
+  @Get(':id/late-changes')
+  @RequirePermissions('reports:read')
+  @ApiOkResponse({
+    description:
+      'Changes to the published roster inside the notice window, who they came from, and the ' +
+      'predictability pay recorded per person (the organisation records it; local law decides)',
+  })
+  lateChanges(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<LateChangesDto> {
+    return this.periods.lateChanges(user, id);
   }
 
   @Post()

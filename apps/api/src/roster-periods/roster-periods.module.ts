@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { UnitsModule } from '../units/units.module';
+import { LateChangeEntity } from './late-change.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
 import { RosterPeriodEntity } from './roster-period.entity';
 import { RosterPeriodsController } from './roster-periods.controller';
@@ -8,7 +9,10 @@ import { RosterPeriodsService } from './roster-periods.service';
 import { PeriodWriter } from './period-writer';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([RosterPeriodEntity, RosterPeriodChangeEntity]), UnitsModule],
+  imports: [
+    TypeOrmModule.forFeature([RosterPeriodEntity, RosterPeriodChangeEntity, LateChangeEntity]),
+    UnitsModule,
+  ],
   controllers: [RosterPeriodsController],
   providers: [RosterPeriodsService, PeriodWriter],
   exports: [RosterPeriodsService, PeriodWriter],

@@ -1,10 +1,17 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { type Page, type RosterPeriodDto } from '@rotaplex/contracts';
+import {
+  type LateChangesDto,
+  NOTICE_WINDOW_CAUTION,
+  type Page,
+  type RosterPeriodDto,
+} from '@rotaplex/contracts';
 import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { isRealDate } from '../cover-needs/cover-needs.service';
+import { OrganisationEntity } from '../organisation/organisation.entity';
+import { toNoticeWindowDto } from '../organisation/organisation.service';
 import { UnitEntity } from '../units/unit.entity';
 import { UnitsService } from '../units/units.service';
 import {
@@ -12,6 +19,8 @@ import {
   type RosterPeriodQueryDto,
   type UpdateRosterPeriodDto,
 } from './dto/roster-period.dto';
+import { LateChangeEntity } from './late-change.entity';
+import { owedPerPerson, toLateChangeDto } from './notice-window';
 import { RosterPeriodEntity } from './roster-period.entity';
 
 /** Staff see only published and archived periods; drafts are for planners. */
@@ -51,6 +60,27 @@ export class RosterPeriodsService {
 
   async get(user: AuthUser, id: string): Promise<RosterPeriodDto> {
     return toRosterPeriodDto(await this.load(user, id));
+  }
+
+  /**
+   * The period's changes made inside the notice window after publishing, newest first, with the
+   * predictability pay recorded per person and the organisation's setting as it is now.
+   */
+  async lateChanges(user: AuthUser, id: string): Promise<LateChangesDto> {
+    const period = await this.load(user, id); // 404 / 403 by unit
+    const em = this.dataSource.manager;
+    const rows = await em.find(LateChangeEntity, {
+      where: { rosterPeriodId: period.id },
+      order: { version: 'DESC', date: 'ASC', staffName: 'ASC', id: 'ASC' },
+    });
+    const org = await em.findOneByOrFail(OrganisationEntity, { id: user.organisationId });
+    return {
+      rosterPeriodId: period.id,
+      settings: toNoticeWindowDto(org),
+      changes: rows.map(toLateChangeDto),
+      owed: owedPerPerson(rows),
+      caution: NOTICE_WINDOW_CAUTION,
+    };
   }
 
   async create(user: AuthUser, body: CreateRosterPeriodDto): Promise<RosterPeriodDto> {

@@ -8,6 +8,7 @@ import {
   PrimaryGeneratedColumn,
   UpdateDateColumn,
 } from 'typeorm';
+import { PUBLISH_LEAD_DAYS_DEFAULT } from '@rotaplex/contracts';
 import { OrganisationEntity } from '../organisation/organisation.entity';
 
 /** A ward, store or team: the place a roster is planned for. Has an IANA time zone. */
@@ -31,8 +32,11 @@ export class UnitEntity {
   @Column({ type: 'varchar', length: 64 })
   timeZone!: string;
 
-  /** Days before a period starts by which its roster should be published (PUBLISH_LEAD_DAYS_DEFAULT). */
-  @Column({ type: 'integer', default: 42 })
+  /**
+   * Days before a period starts by which its roster should be published: PUBLISH_LEAD_DAYS_DEFAULT,
+   * the 6 weeks many hospitals aim for (Drake, J Adv Nurs 2018;74(8):1831-38).
+   */
+  @Column({ type: 'integer', default: PUBLISH_LEAD_DAYS_DEFAULT })
   publishLeadDays!: number;
 
   @CreateDateColumn({ type: 'datetime' })

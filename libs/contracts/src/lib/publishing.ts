@@ -105,6 +105,12 @@ export interface PublishCheckDto {
   belowMinimum: BelowMinimumShiftDto[];
   ruleFindings: RosterViolationDto[];
   unhonouredLeave: UnhonouredLeaveDto[];
+  /**
+   * Less notice than the unit's publish lead time: the caution in words (days of notice, the unit's
+   * lead time, what late rosters cost, and that local law decides on notice windows); null when the
+   * roster goes out in time.
+   */
+  lateNotice: string | null;
   /** Settings the roster uses beyond the guard rails (contracts outside the presets, long shifts). */
   cautions: string[];
   /** Why it cannot be published at all (an empty roster, not a draft); empty when it can. */

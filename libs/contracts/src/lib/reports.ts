@@ -147,3 +147,4 @@ export const REPORTS_ROUTES = {
   report: '/reports',
   payrollCsv: '/reports/payroll.csv',
 } as const;
+export * from './notice-window';

@@ -11,6 +11,7 @@ import { SolveRunMode1765454400000 } from './1765454400000-solve-run-mode';
 import { RosterPeriodChanges1765540800000 } from './1765540800000-roster-period-changes';
 import { UnitPublishLead1765713600000 } from './1765713600000-unit-publish-lead';
 import { Demand1765800000000 } from './1765800000000-demand';
+import { NoticeWindow1765972800000 } from './1765972800000-notice-window';
 import { OpenShiftOutsideOffers1765886400000 } from './1765886400000-open-shift-outside-offers';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
@@ -29,4 +30,5 @@ export const MIGRATIONS = [
   UnitPublishLead1765713600000,
   Demand1765800000000,
   OpenShiftOutsideOffers1765886400000,
+  NoticeWindow1765972800000,
 ];

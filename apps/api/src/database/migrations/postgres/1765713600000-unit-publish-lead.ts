@@ -2,7 +2,8 @@ import { type MigrationInterface, type QueryRunner } from 'typeorm';
 
 /**
  * PostgreSQL's twin of UnitPublishLead1765713600000, written by TypeORM's schema diff
- * (generate-postgres-migration.ts, run for Demand1765800000000 and split by table).
+ * (generate-postgres-migration.ts, run for Demand1765800000000 and split by table). Default 42 days:
+ * the 6 weeks many hospitals aim for (Drake, J Adv Nurs 2018;74(8):1831-38).
  */
 export class UnitPublishLead1765713600000 implements MigrationInterface {
   name = 'UnitPublishLead1765713600000';
