@@ -19,8 +19,8 @@ import { type Request } from 'express';
 import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { readCsvBody } from '../staff/csv';
-import { CsvImportResponse } from '../staff/dto/staff.dto';
+import { readCsvBody } from '../common/csv';
+import { CsvImportResponse } from '../common/csv-import.dto';
 import { CoverNeedsService } from './cover-needs.service';
 import {
   CoverImportQueryDto,

@@ -18,7 +18,7 @@ import { type ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import { type SkillEntity } from '../skills/skill.entity';
 import { SkillsService } from '../skills/skills.service';
-import { parseCsv } from '../staff/csv';
+import { parseCsv } from '../common/csv';
 import { UnitsService } from '../units/units.service';
 import { CoverOverrideEntity, CoverPatternRowEntity } from './cover-need.entity';
 import {

@@ -20,8 +20,8 @@ import { type AuthUser } from '../common/auth-user';
 import { RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
-import { readCsvBody } from '../staff/csv';
-import { CsvImportResponse } from '../staff/dto/staff.dto';
+import { readCsvBody } from '../common/csv';
+import { CsvImportResponse } from '../common/csv-import.dto';
 import { DemandService } from './demand.service';
 import { AcceptDemandPlanDto, DemandImportQueryDto, PutUnitDemandDto } from './dto/demand.dto';
 

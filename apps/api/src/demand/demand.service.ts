@@ -37,7 +37,7 @@ import { CoverNeedsService } from '../cover-needs/cover-needs.service';
 import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import { StaffService } from '../staff/staff.service';
-import { parseCsv } from '../staff/csv';
+import { parseCsv } from '../common/csv';
 import { UnitsService } from '../units/units.service';
 import { DemandAcceptanceEntity, UnitDemandEntity } from './demand.entities';
 import { type AcceptDemandPlanDto, type DemandImportQueryDto, type PutUnitDemandDto } from './dto/demand.dto';

@@ -14,7 +14,7 @@
 import { PAYROLL_CSV_COLUMNS } from '@rotaplex/contracts';
 import { ProblemIndex, type Roster, type RosterProblem } from '@rotaplex/roster-model';
 import { stringify } from 'csv-stringify/sync';
-import { neutraliseCell } from '../staff/csv';
+import { neutraliseCell } from '../common/csv';
 import { cents } from './period-figures';
 
 export interface PayrollSource {

@@ -25,11 +25,12 @@ import {
 import { type CsvImportResult, type Page, STAFF_CSV_COLUMNS, type StaffMemberDto } from '@rotaplex/contracts';
 import { type Request } from 'express';
 import { type AuthUser } from '../common/auth-user';
+import { readCsvBody } from '../common/csv';
+import { CsvImportResponse } from '../common/csv-import.dto';
 import { Authenticated, RequirePermissions } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import {
   CreateStaffMemberDto,
-  CsvImportResponse,
   StaffExportQueryDto,
   StaffImportQueryDto,
   StaffMemberResponse,
@@ -37,7 +38,6 @@ import {
   StaffQueryDto,
   UpdateStaffMemberDto,
 } from './dto/staff.dto';
-import { readCsvBody } from './csv';
 import { StaffService } from './staff.service';
 
 /**

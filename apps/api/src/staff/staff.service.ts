@@ -23,7 +23,7 @@ import { SkillEntity } from '../skills/skill.entity';
 import { SkillsService } from '../skills/skills.service';
 import { UnitsService } from '../units/units.service';
 import { UserEntity } from '../users/user.entity';
-import { parseCsv, toCsv } from './csv';
+import { parseCsv, toCsv } from '../common/csv';
 import {
   type CreateStaffMemberDto,
   type StaffImportQueryDto,

@@ -1,8 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   type CreateStaffMemberRequest,
-  type CsvImportResult,
-  type CsvRowError,
   type Page,
   STAFF_SORT_FIELDS,
   type StaffListQuery,
@@ -173,23 +171,4 @@ export class StaffPageResponse implements Page<StaffMemberDto> {
   @ApiProperty() total!: number;
   @ApiProperty() page!: number;
   @ApiProperty() pageSize!: number;
-}
-
-export class CsvRowErrorResponse implements CsvRowError {
-  @ApiProperty({ description: 'Line in the file (1 = header)' }) line!: number;
-  @ApiProperty() field!: string;
-  @ApiProperty() message!: string;
-}
-
-export class CsvImportResponse implements CsvImportResult {
-  @ApiProperty() dryRun!: boolean;
-  @ApiProperty() rows!: number;
-  @ApiProperty() saved!: number;
-  @ApiProperty({ type: [CsvRowErrorResponse] }) errors!: CsvRowErrorResponse[];
-  @ApiProperty({
-    type: [String],
-    required: false,
-    description: 'Cautions on what the file sets (a cover minimum lowered to 0), also on a dry run',
-  })
-  cautions?: string[];
 }
