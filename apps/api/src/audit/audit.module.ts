@@ -1,5 +1,6 @@
 import { Global, Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { UsersModule } from '../users/users.module';
 import { AuditEntryEntity } from './audit-entry.entity';
 import { AuditService } from './audit.service';
 
@@ -11,7 +12,7 @@ export { AuditService, type AuditRecord } from './audit.service';
  */
 @Global()
 @Module({
-  imports: [TypeOrmModule.forFeature([AuditEntryEntity])],
+  imports: [TypeOrmModule.forFeature([AuditEntryEntity]), UsersModule],
   providers: [AuditService],
   exports: [AuditService],
 })

@@ -2,7 +2,7 @@ import { BadRequestException, Injectable } from '@nestjs/common';
 import { AUDIT_KINDS, type AuditKind } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { type EntityManager } from 'typeorm';
-import { UserEntity } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { AuditEntryEntity } from './audit-entry.entity';
 
 export interface AuditRecord {
@@ -20,16 +20,15 @@ const MAX_SUMMARY_LENGTH = 1000;
 /** Writes the audit trail of published rosters. Always in the transaction of the change it records. */
 @Injectable()
 export class AuditService {
+  constructor(private readonly users: UsersService) {}
+
   async record(em: EntityManager, entry: AuditRecord): Promise<void> {
     if (!(AUDIT_KINDS as readonly string[]).includes(entry.kind)) {
       throw new BadRequestException(`kind must be one of ${AUDIT_KINDS.join(', ')}`);
     }
     let actorName = 'Rotaplex (system)';
     if (entry.actorUserId !== null) {
-      const user = await em.findOne(UserEntity, {
-        where: { id: entry.actorUserId },
-        select: { id: true, displayName: true },
-      });
+      const user = await this.users.byId(entry.actorUserId, em);
       if (!user) throw new BadRequestException(`actorUserId: no user ${entry.actorUserId}`);
       actorName = user.displayName.slice(0, 200);
     }

@@ -7,8 +7,8 @@ import { type AuthUser } from '../common/auth-user';
 import { sha256 } from '../common/crypto';
 import { AppConfig } from '../config/app-config';
 import { ReadConnection } from '../database/read-connection';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UserEntity } from '../users/user.entity';
+import { StaffService } from '../staff/staff.service';
+import { UsersService } from '../users/users.service';
 import { CalendarFeedEntity, CalendarFeedEventEntity } from './calendar-feed.entity';
 import { type FeedEvent, type FeedEventContent, writeCalendar } from './ical-feed';
 import { type PublishedShift, publishedShifts } from './published-shifts';
@@ -59,6 +59,8 @@ export class CalendarFeedsService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly reads: ReadConnection,
     config: AppConfig,
+    private readonly staff: StaffService,
+    private readonly users: UsersService,
   ) {
     if (!config.jwtSecret) throw new Error('The server secret is not resolved');
     // A key of its own, derived from the server secret (a new JWT_SECRET also changes every feed URL).
@@ -110,7 +112,7 @@ export class CalendarFeedsService {
     const read = this.reads.manager;
     const feed = await read.findOne(CalendarFeedEntity, { where: { tokenHash: sha256(token) } });
     if (!feed) throw notFound;
-    const user = await read.findOne(UserEntity, { where: { id: feed.userId } });
+    const user = await this.users.byId(feed.userId, read);
     if (!user || !user.active) throw notFound;
     const title = `Rotaplex roster (${user.displayName})`;
     const seen = await this.compare(feed.userId, read);
@@ -138,7 +140,7 @@ export class CalendarFeedsService {
     userId: string,
     em: EntityManager,
   ): Promise<{ events: FeedEvent[]; changed: CalendarFeedEventEntity[] }> {
-    const records = await em.find(StaffMemberEntity, { where: { userId }, select: { id: true } });
+    const records = await this.staff.ofUser(userId, em);
     const shifts = await publishedShifts(em, { staffMemberIds: records.map((r) => r.id) });
     const current = new Map(shifts.map((s) => [feedUid(s.staffMemberId, s.date), feedContent(s)]));
     const repo = em.getRepository(CalendarFeedEventEntity);

@@ -1,6 +1,9 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { ReadConnectionModule } from '../database/read-connection';
+import { StaffModule } from '../staff/staff.module';
+import { UnitsModule } from '../units/units.module';
+import { UsersModule } from '../users/users.module';
 import { CalendarFeedEntity, CalendarFeedEventEntity } from './calendar-feed.entity';
 import { CalendarFeedsController } from './calendar-feeds.controller';
 import { CalendarFeedsService } from './calendar-feeds.service';
@@ -9,7 +12,13 @@ import { MyRosterService } from './my-roster.service';
 
 /** My roster (published shifts of me and my units) and the personal iCalendar feed. */
 @Module({
-  imports: [TypeOrmModule.forFeature([CalendarFeedEntity, CalendarFeedEventEntity]), ReadConnectionModule],
+  imports: [
+    TypeOrmModule.forFeature([CalendarFeedEntity, CalendarFeedEventEntity]),
+    ReadConnectionModule,
+    StaffModule,
+    UnitsModule,
+    UsersModule,
+  ],
   controllers: [MyRosterController, CalendarFeedsController],
   providers: [MyRosterService, CalendarFeedsService],
   exports: [CalendarFeedsService],

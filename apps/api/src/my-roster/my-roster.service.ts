@@ -3,8 +3,8 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { MY_ROSTER_MAX_DAYS, type MyRosterDto, type MyRosterQuery } from '@rotaplex/contracts';
 import { DataSource } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
-import { StaffMemberEntity } from '../staff/staff-member.entity';
-import { UnitEntity } from '../units/unit.entity';
+import { StaffService } from '../staff/staff.service';
+import { UnitsService } from '../units/units.service';
 import { publishedShifts } from './published-shifts';
 
 const DAY_MS = 86_400_000;
@@ -23,7 +23,11 @@ function dayNumber(date: string): number {
  */
 @Injectable()
 export class MyRosterService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly staff: StaffService,
+    private readonly units: UnitsService,
+  ) {}
 
   async shifts(user: AuthUser, query: MyRosterQuery): Promise<MyRosterDto> {
     const days = dayNumber(query.to) - dayNumber(query.from) + 1;
@@ -32,13 +36,11 @@ export class MyRosterService {
       throw new BadRequestException(`Ask for at most ${MY_ROSTER_MAX_DAYS} days at a time`);
     }
     const em = this.dataSource.manager;
-    const records = await em.find(StaffMemberEntity, { where: { userId: user.id } });
+    const records = await this.staff.ofUser(user.id, em);
     const mine = new Set(records.map((r) => r.id));
     // Colleagues: only units where the caller is an active member of the roster.
     const unitIds = [...new Set(records.filter((r) => r.active).map((r) => r.unitId))];
-    const units = unitIds.length
-      ? await em.createQueryBuilder(UnitEntity, 'u').where('u.id IN (:...ids)', { ids: unitIds }).getMany()
-      : [];
+    const units = await this.units.byIds(unitIds, em);
     const [own, team] = await Promise.all([
       publishedShifts(em, { staffMemberIds: [...mine], from: query.from, to: query.to }),
       publishedShifts(em, { unitIds, from: query.from, to: query.to }),

@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { PUBLISH_LEAD_DAYS_DEFAULT, type UnitDto } from '@rotaplex/contracts';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { type CreateUnitDto, type UpdateUnitDto } from './dto/unit.dto';
@@ -87,6 +87,11 @@ export class UnitsService {
       .select('DISTINCT u.timeZone', 'timeZone')
       .getRawMany<{ timeZone: string }>();
     return rows.map((r) => r.timeZone);
+  }
+
+  /** Units by id, any organisation (for other modules; unknown ids left out). */
+  async byIds(ids: string[], em: EntityManager = this.dataSource.manager): Promise<UnitEntity[]> {
+    return ids.length ? em.findBy(UnitEntity, { id: In(ids) }) : [];
   }
 
   /** The units of an organisation, all or only the given ids (for other modules). */
