@@ -1,4 +1,5 @@
-import { localDate } from './dates';
+import { DateUtils } from 'typeorm/util/DateUtils';
+import { localDate, sqliteUtc } from './dates';
 
 describe('localDate', () => {
   // Offsets from the IANA time zone database (tzdata), as published for 2026-2027.
@@ -27,6 +28,15 @@ describe('localDate', () => {
       for (const zone of ['Europe/London', 'Australia/Sydney', 'Asia/Kolkata']) {
         expect(localDate(d, zone)).toBe(intl(d, zone));
       }
+    }
+  });
+});
+
+describe('sqliteUtc', () => {
+  it("writes an instant as TypeORM stores datetime columns on SQLite (TypeORM's DateUtils)", () => {
+    for (const iso of ['2027-01-04T23:30:00.000Z', '2030-03-31T00:30:00.123Z', '1999-12-31T23:59:59.999Z']) {
+      const at = new Date(iso);
+      expect(sqliteUtc(at)).toBe(DateUtils.mixedDateToUtcDatetimeString(at));
     }
   });
 });

@@ -15,6 +15,15 @@ export function isRealDate(date: string): boolean {
   return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === date;
 }
 
+/**
+ * "YYYY-MM-DD HH:MM:SS.SSS" in UTC, the form TypeORM stores datetime columns in on SQLite, for
+ * comparisons in hand-written conditions. On PostgreSQL the sessions run in UTC
+ * (database/data-source-options.ts), so the text means the same instant.
+ */
+export function sqliteUtc(date: Date): string {
+  return date.toISOString().replace('T', ' ').replace('Z', '');
+}
+
 /** Days from `a` to `b` ("YYYY-MM-DD"), b - a. */
 export function daysBetween(a: string, b: string): number {
   return Math.round((Date.parse(`${b}T00:00:00Z`) - Date.parse(`${a}T00:00:00Z`)) / 86_400_000);

@@ -2,6 +2,7 @@ import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy }
 import { InjectRepository } from '@nestjs/typeorm';
 import { createTransport, type Transporter } from 'nodemailer';
 import { type EntityManager, Like, Not, type QueryRunner, Repository } from 'typeorm';
+import { sqliteUtc } from '../common/dates';
 import { AppConfig, type OutboxSettings } from '../config/app-config';
 import { MailBodyCipher, outboxBodyContext, SEALED_PREFIX } from '../mail/mail-body-cipher';
 import { MailCatcherService } from '../mail/mail-catcher.service';
@@ -17,14 +18,6 @@ const MAX_ERROR_LENGTH = 2000;
  * lease was left by a process that stopped, and any instance sends it again.
  */
 export const SENDING_LEASE_MS = 5 * 60_000;
-
-/**
- * "YYYY-MM-DD HH:MM:SS.SSS" in UTC, the form TypeORM stores datetime columns in on SQLite. On
- * PostgreSQL the sessions run in UTC (data-source-options.ts), so the text means the same instant.
- */
-export function sqliteUtc(date: Date): string {
-  return date.toISOString().replace('T', ' ').replace('Z', '');
-}
 
 /**
  * Delivers the outbox: one loop that sends every due pending message over SMTP (the configured

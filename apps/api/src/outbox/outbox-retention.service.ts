@@ -3,7 +3,7 @@ import { Cron, CronExpression } from '@nestjs/schedule';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
 import { AppConfig } from '../config/app-config';
-import { sqliteUtc } from './outbox-delivery.service';
+import { sqliteUtc } from '../common/dates';
 import { OutboxMessageEntity } from './outbox-message.entity';
 
 /**

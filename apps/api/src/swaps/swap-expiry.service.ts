@@ -4,7 +4,7 @@ import { type SwapStatus } from '@rotaplex/contracts';
 import { Brackets, DataSource } from 'typeorm';
 import { dateInWords } from '../common/text/date-words';
 import { localDate } from '../common/dates';
-import { sqliteUtc } from '../outbox/outbox-delivery.service';
+import { sqliteUtc } from '../common/dates';
 import { UnitsService } from '../units/units.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from './swap-request.entity';
 
