@@ -3,6 +3,8 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useCan } from '@/features/auth/hooks/useCurrentUser';
 import { OPEN_SHIFTS_PAGE_SIZE, openShiftsQuery } from '@/features/swaps/api/swaps.queries';
+import { OpenShiftManagerActions } from '@/features/open-shifts/components/OpenShiftManagerActions';
+import { OutsideOfferBadge } from '@/features/open-shifts/components/OutsideOfferBadge';
 import { OpenShiftList } from '@/features/swaps/components/OpenShiftList';
 import { EmptyState } from '@/ui/EmptyState';
 import { ErrorBanner } from '@/ui/ErrorBanner';
@@ -14,8 +16,9 @@ const shifts = (n: number) => `${n} ${n === 1 ? 'shift' : 'shifts'}`;
 
 /**
  * Cover still short on published rosters. Staff see every open shift of their units: those they may
- * take first (with Claim), the others with why not in words. Managers see them all and can e-mail the
- * staff who may take one.
+ * take first (with Claim), the others with why not in words; both see which are offered outside the
+ * roster. Managers see them all, can e-mail the staff who may take one, see what it would take (which
+ * rule for whom) and offer it to bank or agency staff outside the roster.
  */
 export function OpenShiftsPage() {
   const canClaim = useCan('requests:own');
@@ -33,7 +36,7 @@ export function OpenShiftsPage() {
         description={
           canClaim
             ? 'Shifts of your units still short of people after publishing. You can claim those you have the skill for and can take without breaking a rule; a manager approves each claim.'
-            : 'Shifts of your units still short of people after publishing. Those below the minimum are a safety shortfall: e-mail the staff who may take them, or offer them to bank or agency staff as local policy says.'
+            : 'Shifts of your units still short of people after publishing. Those below the minimum are a safety shortfall: e-mail the staff who may take them; where nobody may, see what it would take and offer the shift to bank or agency staff as local policy says.'
         }
       />
       {open.error ? <ErrorBanner error={open.error} onRetry={() => void open.refetch()} /> : null}
@@ -54,7 +57,15 @@ export function OpenShiftsPage() {
         <TableSkeleton />
       ) : open.data?.items.length ? (
         <>
-          <OpenShiftList openShifts={open.data.items} canClaim={canClaim} canNotify={canNotify} />
+          <OpenShiftList
+            openShifts={open.data.items}
+            canClaim={canClaim}
+            canNotify={canNotify}
+            renderStatus={(o) => <OutsideOfferBadge offer={o.outsideOffer} />}
+            renderActions={
+              canNotify && !canClaim ? (o) => <OpenShiftManagerActions openShift={o} /> : undefined
+            }
+          />
           <Pagination
             label="Open shifts"
             page={page}

@@ -33,6 +33,7 @@ const useStyles = makeStyles({
     backgroundColor: tokens.colorNeutralBackground1,
   },
   muted: { color: tokens.colorNeutralForeground3 },
+  actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS },
 });
 
 export interface OpenShiftListProps {
@@ -41,6 +42,10 @@ export interface OpenShiftListProps {
   canClaim: boolean;
   /** Managers who plan can e-mail the staff who may take a shift. */
   canNotify?: boolean;
+  /** Shown under the shift's need (an offer outside the roster). */
+  renderStatus?: (o: OpenShiftDto) => ReactNode;
+  /** Managers' further actions beside the e-mail. */
+  renderActions?: (o: OpenShiftDto) => ReactNode;
 }
 
 const key = (o: OpenShiftDto) => `${o.rosterPeriodId}|${o.date}|${o.shiftTypeId}|${o.skillId ?? ''}`;
@@ -50,7 +55,13 @@ const key = (o: OpenShiftDto) => `${o.rosterPeriodId}|${o.date}|${o.shiftTypeId}
  * rest, the reasons they may not; managers see which are below the minimum and can e-mail the staff
  * who may take one.
  */
-export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenShiftListProps) {
+export function OpenShiftList({
+  openShifts,
+  canClaim,
+  canNotify = false,
+  renderStatus,
+  renderActions,
+}: OpenShiftListProps) {
   const styles = useStyles();
   const queryClient = useQueryClient();
   const notify = useNotify();
@@ -98,9 +109,12 @@ export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenS
         </Button>
       )
     ) : canNotify ? (
-      <Button size="small" disabled={mail.isPending} onClick={() => mail.mutate(o)}>
-        E-mail who may take it
-      </Button>
+      <span className={styles.actions}>
+        <Button size="small" disabled={mail.isPending} onClick={() => mail.mutate(o)}>
+          E-mail who may take it
+        </Button>
+        {renderActions?.(o)}
+      </span>
     ) : null;
   const wanted = (o: OpenShiftDto) => (
     <span className={styles.need}>
@@ -139,6 +153,7 @@ export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenS
                   {o.belowMinimum} below minimum
                 </Badge>
               )}
+              {renderStatus?.(o)}
               {actionOf(o)}
             </li>
           ))}
@@ -159,6 +174,7 @@ export function OpenShiftList({ openShifts, canClaim, canNotify = false }: OpenS
             <TableCell>{dayLabel(o.date)}</TableCell>
             <TableCell>
               {o.shiftName} ({o.shiftCode}) {o.start}–{o.end}
+              {renderStatus ? <div>{renderStatus(o)}</div> : null}
             </TableCell>
             <TableCell>{o.skillCode ?? 'Any'}</TableCell>
             <TableCell>{wanted(o)}</TableCell>
