@@ -19,10 +19,10 @@ import { type AuthUser } from '../common/auth-user';
 import { likePattern, toPage } from '../common/pagination';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { ContractsService } from '../contracts/contracts.service';
-import { SkillEntity } from '../skills/skill.entity';
+import { type SkillEntity } from '../skills/skill.entity';
 import { SkillsService } from '../skills/skills.service';
 import { UnitsService } from '../units/units.service';
-import { UserEntity } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { parseCsv, toCsv } from '../common/csv';
 import {
   type CreateStaffMemberDto,
@@ -40,6 +40,7 @@ export class StaffService {
     private readonly units: UnitsService,
     private readonly skills: SkillsService,
     private readonly contracts: ContractsService,
+    private readonly users: UsersService,
   ) {}
 
   /** Staff of the units the caller plans (admins: every unit), searchable by name and e-mail. */
@@ -150,9 +151,7 @@ export class StaffService {
     const parsed = parseCsv(text, STAFF_CSV_COLUMNS, ['name']);
     const errors: CsvRowError[] = [...parsed.errors];
     const skillsByCode = new Map(
-      (await this.dataSource.getRepository(SkillEntity).findBy({ organisationId: user.organisationId })).map(
-        (s) => [s.code, s],
-      ),
+      (await this.skills.ofOrganisation(user.organisationId)).map((s) => [s.code, s]),
     );
     const contractsByName = new Map(
       (await this.contracts.usableInUnit(user.organisationId, query.unitId)).map((c) => [
@@ -320,9 +319,7 @@ export class StaffService {
 
   /** The user must belong to the unit and not be another staff member of it already. */
   private async assertUserLinkable(caller: AuthUser, unitId: string, userId: string, exceptId?: string) {
-    const target = await this.dataSource
-      .getRepository(UserEntity)
-      .findOne({ where: { id: userId, organisationId: caller.organisationId }, relations: { units: true } });
+    const target = await this.users.inOrganisationWithUnits(userId, caller.organisationId);
     if (!target || !target.units.some((u) => u.id === unitId)) {
       throw new BadRequestException(['userId must be a user of this unit']);
     }

@@ -169,6 +169,15 @@ export class UsersService {
     return ids.length ? em.findBy(UserEntity, { id: In(ids) }) : [];
   }
 
+  /** A user of the organisation with their units, or null. */
+  inOrganisationWithUnits(
+    id: string,
+    organisationId: string,
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<UserEntity | null> {
+    return em.findOne(UserEntity, { where: { id, organisationId }, relations: { units: true } });
+  }
+
   /** A user as the guards see them, read now (no cache); null when missing or deactivated. */
   async activeAuthUserIn(id: string, em: EntityManager = this.dataSource.manager): Promise<AuthUser | null> {
     const user = await em.findOne(UserEntity, { where: { id }, relations: { units: true } });
