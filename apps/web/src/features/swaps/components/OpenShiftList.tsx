@@ -87,7 +87,7 @@ export function OpenShiftList({
     onSuccess: (r) =>
       notify(
         r.notified === 0
-          ? 'Nobody on the roster may take this shift: offer it to bank or agency staff, as local policy says'
+          ? 'Nobody on the roster may take this shift: see what it would take, or offer it to bank or agency staff as local policy says'
           : `E-mailed ${r.notified} ${r.notified === 1 ? 'person' : 'people'} who may take it`,
         r.notified === 0 ? 'warning' : 'success',
       ),
