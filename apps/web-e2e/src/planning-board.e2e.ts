@@ -55,6 +55,12 @@ describe('planning board as the demo manager', () => {
     // The quality line is in words: no solver figures on the face of the board.
     expect(await page.getByTestId('quality-statement').innerText()).not.toMatch(/objective|bound|gap/i);
     expect(await page.getByText('Best objective').count()).toBe(0);
+    // The figures are behind a toggle in plain words, and come back out of sight.
+    const toggle = page.getByRole('button', { name: 'Show the calculation details' });
+    await toggle.click();
+    await page.getByText('Best objective').waitFor();
+    await page.getByRole('button', { name: 'Hide the calculation details' }).click();
+    await page.getByText('Best objective').waitFor({ state: 'detached' });
     await screenshot(page, 'planning-board-generated-grid');
     // Explanations open in a side panel, grouped by severity: below minimum first.
     await page.getByRole('button', { name: /^Explanations \(\d+\)$/ }).click();

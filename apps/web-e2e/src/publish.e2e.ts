@@ -102,6 +102,12 @@ describe('publishing a roster as the demo manager', () => {
     const dialog = page.getByRole('alertdialog', { name: 'Publish this roster?' });
     await dialog.waitFor();
     await dialog.getByText(/gets their own shifts by e-mail/).waitFor();
+    // Issue 10, item 7: the week began long ago, so the dialog says first that the notice is late
+    // (the unit's publish lead time; 6 weeks by default, Drake, J Adv Nurs 2018;74(8):1831-38).
+    const late = dialog.getByTestId('publish-late-notice');
+    expect(await late.innerText()).toMatch(
+      /Late notice[\s\S]*This period has already started: less notice than the \d+ days this unit aims to give[\s\S]*local law and agreements decide/,
+    );
     // The check lists the shifts below minimum cover, worst first; the Monday Early is one of them.
     const short = dialog.getByRole('region', { name: 'Shifts below minimum cover' });
     await short.getByRole('heading', { name: /^\d+ shifts? (is|are) below minimum cover$/ }).waitFor();
@@ -121,6 +127,8 @@ describe('publishing a roster as the demo manager', () => {
     expect(await unnamedControls(page)).toEqual([]);
     // What the window shows: the top of the check, then the acknowledgement (desktop and 390 px).
     const views = async (suffix: string) => {
+      await late.scrollIntoViewIfNeeded();
+      await screenshot(page, `publish-late-notice${suffix}`, { fullPage: false });
       await short.getByRole('heading').scrollIntoViewIfNeeded();
       await screenshot(page, `publish-check${suffix}`, { fullPage: false });
       await dialog

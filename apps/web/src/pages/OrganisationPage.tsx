@@ -5,10 +5,12 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { formErrors } from '@/api/errors';
 import { authKeys } from '@/features/auth/api/auth.queries';
 import {
+  noticeWindowQuery,
   organisationKeys,
   organisationQuery,
   updateOrganisation,
 } from '@/features/organisation/api/organisation.queries';
+import { NoticeWindowForm } from '@/features/organisation/components/NoticeWindowForm';
 import { ErrorBanner } from '@/ui/ErrorBanner';
 import { LoadingState } from '@/ui/LoadingState';
 import { useNotify } from '@/ui/notify';
@@ -27,6 +29,7 @@ const useStyles = makeStyles({
     padding: tokens.spacingHorizontalXL,
   },
   actions: { display: 'flex', justifyContent: 'flex-end' },
+  stack: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXL },
 });
 
 function OrganisationForm({ organisation }: { organisation: OrganisationDto }) {
@@ -83,15 +86,21 @@ function OrganisationForm({ organisation }: { organisation: OrganisationDto }) {
 }
 
 export function OrganisationPage() {
+  const styles = useStyles();
   const organisation = useQuery(organisationQuery());
+  const noticeWindow = useQuery(noticeWindowQuery());
   return (
-    <>
+    <div className={styles.stack}>
       <PageHeader title="Organisation" description="The organisation everyone in Rotaplex belongs to." />
       {organisation.isPending && <LoadingState label="Loading organisation" />}
       {organisation.isError && (
         <ErrorBanner error={organisation.error} onRetry={() => void organisation.refetch()} />
       )}
       {organisation.data && <OrganisationForm key={organisation.data.id} organisation={organisation.data} />}
-    </>
+      {noticeWindow.isError && (
+        <ErrorBanner error={noticeWindow.error} onRetry={() => void noticeWindow.refetch()} />
+      )}
+      {noticeWindow.data && <NoticeWindowForm settings={noticeWindow.data} />}
+    </div>
   );
 }

@@ -180,7 +180,7 @@ export function SolvePanel(props: SolvePanelProps) {
             </Body1>
           )}
           {details && (
-            <dl className={styles.figures} aria-label="Solver figures">
+            <dl className={styles.figures} aria-label="Calculation details">
               <div>
                 <dt>Best objective</dt>
                 <dd>{progress?.objective != null ? number.format(progress.objective) : 'none yet'}</dd>
@@ -235,7 +235,7 @@ export function SolvePanel(props: SolvePanelProps) {
               Explanations ({graded.length + run.result.explanations.requestsNotHonoured.length})
             </Button>
             <Button appearance="subtle" aria-expanded={details} onClick={() => setDetails(!details)}>
-              {details ? 'Hide solver figures' : 'Solver figures'}
+              {details ? 'Hide the calculation details' : 'Show the calculation details'}
             </Button>
           </div>
           <OverlayDrawer

@@ -49,6 +49,8 @@ const useStyles = makeStyles({
     margin: 0,
   },
   note: { color: tokens.colorNeutralForeground2 },
+  // Messages keep their full height in the scrolling column (a flex item would shrink).
+  bar: { flexShrink: 0 },
 });
 
 /** Shifts shown before "Show all". */
@@ -90,6 +92,7 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
     c.belowMinimum.length === 0 &&
     c.ruleFindings.length === 0 &&
     c.unhonouredLeave.length === 0 &&
+    c.lateNotice === null &&
     c.cautions.length === 0;
   const shown = c ? (all ? c.belowMinimum : c.belowMinimum.slice(0, SHOWN)) : [];
 
@@ -102,7 +105,7 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
             {check.isPending && <Spinner size="small" label="Checking the roster…" />}
             <ErrorBanner error={check.error} title="The roster could not be checked" />
             {c && c.blockers.length > 0 && (
-              <MessageBar intent="error" layout="multiline">
+              <MessageBar intent="error" layout="multiline" className={styles.bar}>
                 <MessageBarBody>
                   <MessageBarTitle>This roster cannot be published</MessageBarTitle>
                   {c.blockers.join(' ')}
@@ -116,6 +119,19 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
                 their own shifts by e-mail. After publishing, the board is read-only: changes go through
                 repair or a swap.
               </Body1>
+            )}
+            {c && c.lateNotice && (
+              <MessageBar
+                intent="warning"
+                layout="multiline"
+                className={styles.bar}
+                data-testid="publish-late-notice"
+              >
+                <MessageBarBody>
+                  <MessageBarTitle>Late notice</MessageBarTitle>
+                  {c.lateNotice}
+                </MessageBarBody>
+              </MessageBar>
             )}
             {clean && c.blockers.length === 0 && (
               <MessageBar intent="success">

@@ -1,5 +1,10 @@
 import { queryOptions } from '@tanstack/react-query';
-import { REPORTS_ROUTES, type PeriodReportDto } from '@rotaplex/contracts';
+import {
+  type LateChangesDto,
+  NOTICE_WINDOW_ROUTES,
+  REPORTS_ROUTES,
+  type PeriodReportDto,
+} from '@rotaplex/contracts';
 import { api, buildUrl } from '@/api/client';
 import { authorisedFetch, responseError, saveFile } from '@/api/files';
 import { fileNameFromDisposition } from '../utils/reportFigures';
@@ -7,7 +12,18 @@ import { fileNameFromDisposition } from '../utils/reportFigures';
 export const reportKeys = {
   all: ['reports'] as const,
   period: (periodId: string) => ['reports', 'period', periodId] as const,
+  lateChanges: (periodId: string) => ['reports', 'period', periodId, 'late-changes'] as const,
 };
+
+/** The period's changes inside the notice window and the predictability pay recorded per person. */
+export const lateChangesQuery = (periodId: string) =>
+  queryOptions({
+    queryKey: reportKeys.lateChanges(periodId),
+    queryFn: ({ signal }) =>
+      api.get<LateChangesDto>(NOTICE_WINDOW_ROUTES.lateChanges(periodId), undefined, signal),
+    enabled: periodId !== '',
+    staleTime: 5_000,
+  });
 
 export const periodReportQuery = (periodId: string) =>
   queryOptions({

@@ -2,6 +2,7 @@ import { makeStyles, MessageBar, MessageBarBody, tokens } from '@fluentui/react-
 import type { PeriodReportDto } from '@rotaplex/contracts';
 import { CoverChart } from './CoverChart';
 import { HoursChart } from './HoursChart';
+import { LateChanges } from './LateChanges';
 import { NightsWeekendsChart } from './NightsWeekendsChart';
 import { ReportTotals } from './ReportTotals';
 import { RequestsNotHonoured } from './RequestsNotHonoured';
@@ -10,7 +11,7 @@ const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL },
 });
 
-/** Every report of one period: totals, hours, nights and weekends, cover, requests. */
+/** Every report of one period: totals, hours, nights and weekends, cover, requests, late changes. */
 export function PeriodReport({ report }: { report: PeriodReportDto }) {
   const styles = useStyles();
   const worked = report.totals.shifts > 0;
@@ -40,6 +41,7 @@ export function PeriodReport({ report }: { report: PeriodReportDto }) {
         honoured={report.totals.requestsHonoured}
         items={report.requestsNotHonoured}
       />
+      {report.status !== 'draft' && <LateChanges periodId={report.periodId} />}
     </div>
   );
 }
