@@ -21,7 +21,7 @@ import { type PageQueryDto, toPage } from '../common/pagination';
 import { AppConfig } from '../config/app-config';
 import { ContractEntity } from '../contracts/contract.entity';
 import { MailService } from '../mail/mail.service';
-import { LateChangeEntity } from '../roster-periods/late-change.entity';
+import { lateChangesOf, lateNotes, lateSummary } from '../roster-periods/notice-window';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
@@ -32,7 +32,6 @@ import { toCsv } from '../staff/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
 import { belowMinimum, leadTimeCaution, settingCautions, unhonouredLeave } from './publish-check';
 import { localDate } from '../common/dates';
-import { dateInWords } from '../common/text/date-words';
 import { unmetNeeds } from '../open-shifts/open-shifts.service';
 import { ClaimCheck } from '../swaps/swap-evaluation';
 import { formatShiftTimes, type MailShift, rosterMail } from './roster-mail';
@@ -215,7 +214,7 @@ export class PublishingService {
               .map((a) => `${a.personId}|${input.dates[a.day]}`),
           ),
         });
-        const late = await em.findBy(LateChangeEntity, { rosterPeriodId: periodId, version });
+        const late = await lateChangesOf(em, periodId, version);
         const after = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
         await em.insert(RosterPublicationEntity, {
           id: randomUUID(),
@@ -403,41 +402,6 @@ function openShiftsByPerson(input: RosterInput, roster: Roster): Map<string, num
         !check.blocked(person.id, o.date, o.shiftTypeId),
     ).length;
     if (n > 0) out.set(person.id, n);
-  }
-  return out;
-}
-
-/**
- * The audit summary's words on a change's cells inside the notice window: how many, how many asked
- * for by the person, and the predictability pay recorded.
- */
-export function lateSummary(late: readonly LateChangeEntity[]): string {
-  if (late.length === 0) return '';
-  const window = late[0].noticeWindowDays;
-  const employee = late.filter((l) => l.initiatedBy === 'employee').length;
-  const paid = late.filter((l) => l.payHours !== null);
-  const hours = paid.reduce((n, l) => n + (l.payHours ?? 0), 0);
-  return (
-    `; ${late.length} ${late.length === 1 ? 'change is' : 'changes are'} inside the ${window}-day notice window` +
-    (employee > 0 ? ` (${employee} asked for by the person, commonly exempt)` : '') +
-    (paid.length > 0
-      ? `; predictability pay recorded: ${hours} h for ${paid.length} ${paid.length === 1 ? 'change' : 'changes'}`
-      : '')
-  );
-}
-
-/** Per person, the e-mail's line on their late changes. */
-export function lateNotes(late: readonly LateChangeEntity[]): Map<string, string> {
-  const out = new Map<string, string>();
-  for (const person of new Set(late.map((l) => l.staffMemberId))) {
-    const mine = late.filter((l) => l.staffMemberId === person);
-    const days = [...new Set(mine.map((l) => l.date))].sort().map(dateInWords);
-    out.set(
-      person,
-      `This is a late change: ${days.join(', ')} ${days.length === 1 ? 'is' : 'are'} less than ` +
-        `${mine[0].noticeWindowDays} days away. Where a notice-window law or agreement applies, ` +
-        'it decides what this means for you; ask your manager or payroll team.',
-    );
   }
   return out;
 }

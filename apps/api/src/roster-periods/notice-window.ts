@@ -7,6 +7,7 @@ import {
 import { randomUUID } from 'node:crypto';
 import { type EntityManager, In } from 'typeorm';
 import { daysBetween, localDate } from '../common/dates';
+import { dateInWords } from '../common/text/date-words';
 import { OrganisationEntity } from '../organisation/organisation.entity';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
@@ -168,4 +169,51 @@ export function owedPerPerson(rows: readonly LateChangeEntity[]): Predictability
     out.set(r.staffMemberId, o);
   }
   return [...out.values()].sort((a, b) => b.hours - a.hours || a.staffName.localeCompare(b.staffName));
+}
+
+/**
+ * The late changes a change of cells made (the version `PeriodWriter` answered), for the audit entry
+ * and e-mails of the change: `lateSummary` and `lateNotes`. Read in the change's transaction.
+ */
+export function lateChangesOf(
+  em: EntityManager,
+  periodId: string,
+  version: number,
+): Promise<LateChangeEntity[]> {
+  return em.findBy(LateChangeEntity, { rosterPeriodId: periodId, version });
+}
+
+/**
+ * The audit summary's words on a change's cells inside the notice window: how many, how many asked
+ * for by the person, and the predictability pay recorded.
+ */
+export function lateSummary(late: readonly LateChangeEntity[]): string {
+  if (late.length === 0) return '';
+  const window = late[0].noticeWindowDays;
+  const employee = late.filter((l) => l.initiatedBy === 'employee').length;
+  const paid = late.filter((l) => l.payHours !== null);
+  const hours = paid.reduce((n, l) => n + (l.payHours ?? 0), 0);
+  return (
+    `; ${late.length} ${late.length === 1 ? 'change is' : 'changes are'} inside the ${window}-day notice window` +
+    (employee > 0 ? ` (${employee} asked for by the person, commonly exempt)` : '') +
+    (paid.length > 0
+      ? `; predictability pay recorded: ${hours} h for ${paid.length} ${paid.length === 1 ? 'change' : 'changes'}`
+      : '')
+  );
+}
+
+/** Per person, the e-mail's line on their late changes. */
+export function lateNotes(late: readonly LateChangeEntity[]): Map<string, string> {
+  const out = new Map<string, string>();
+  for (const person of new Set(late.map((l) => l.staffMemberId))) {
+    const mine = late.filter((l) => l.staffMemberId === person);
+    const days = [...new Set(mine.map((l) => l.date))].sort().map(dateInWords);
+    out.set(
+      person,
+      `This is a late change: ${days.join(', ')} ${days.length === 1 ? 'is' : 'are'} less than ` +
+        `${mine[0].noticeWindowDays} days away. Where a notice-window law or agreement applies, ` +
+        'it decides what this means for you; ask your manager or payroll team.',
+    );
+  }
+  return out;
 }
