@@ -189,6 +189,13 @@ describe('organisation', () => {
     await screenshot(page, 'reports-late-changes-390', { fullPage: false });
     await page.setViewportSize({ width: 1360, height: 860 });
 
+    // The published board points to them.
+    await page.goto(`/planning/periods/${period.id}/board`);
+    await page
+      .getByRole('link', { name: `${late.changes.length} changes inside the 14-day notice window` })
+      .click();
+    await card.waitFor();
+
     // The settings go back to their defaults for the other journeys; the period is archived.
     await apiCall(token, 'PUT', NW.settings, {
       noticeWindowDays: 14,

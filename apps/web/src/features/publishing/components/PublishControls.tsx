@@ -23,6 +23,7 @@ import { api } from '@/api/client';
 import { errorText } from '@/api/errors';
 import { PATHS } from '@/app/paths';
 import { boardKeys } from '@/features/planning-board/api/board.queries';
+import { lateChangesQuery, reportKeys } from '@/features/reports/api/reports.queries';
 import { AppLink } from '@/ui/AppLink';
 import { ConfirmDialog } from '@/ui/ConfirmDialog';
 import { downloadExport, publishingKeys, publishPeriod, repairPeriod } from '../api/publishing.queries';
@@ -72,6 +73,7 @@ export function PublishControls({ period, solveActive = false }: PublishControls
         queryClient.invalidateQueries({ queryKey: boardKeys.grid(period.id) }),
         queryClient.invalidateQueries({ queryKey: boardKeys.runs(period.id) }),
         queryClient.invalidateQueries({ queryKey: publishingKeys.auditAll(period.id) }),
+        queryClient.invalidateQueries({ queryKey: reportKeys.lateChanges(period.id) }),
       ]),
     [queryClient, period.id],
   );
@@ -105,6 +107,10 @@ export function PublishControls({ period, solveActive = false }: PublishControls
     refetchInterval: (q) => (q.state.data && ENDED.includes(q.state.data.status) ? false : 1000),
   });
   const ended = repairRun.data && ENDED.includes(repairRun.data.status) ? repairRun.data : null;
+  // Changes after publishing inside the organisation's notice window (fair-workweek laws: 14 days).
+  const late = useQuery({ ...lateChangesQuery(period.id), enabled: period.status !== 'draft' });
+  const lateCount = late.data?.changes.length ?? 0;
+  const windowDays = late.data?.settings.noticeWindowDays ?? null;
   useEffect(() => {
     if (!ended || ended.id !== repairRunId) return;
     setRepairRunId(null);
@@ -167,6 +173,11 @@ export function PublishControls({ period, solveActive = false }: PublishControls
         {period.publishedAt ? `Published ${when.format(new Date(period.publishedAt))}. ` : ''}
         Read-only: change it through repair or a swap.
       </span>
+      {lateCount > 0 && windowDays !== null && (
+        <AppLink to={PATHS.periodReports(period.id)}>
+          {lateCount} {lateCount === 1 ? 'change' : 'changes'} inside the {windowDays}-day notice window
+        </AppLink>
+      )}
       {period.status === 'published' && (
         <Button
           icon={repairRunId ? <Spinner size="tiny" /> : <WrenchRegular />}
@@ -209,6 +220,13 @@ export function PublishControls({ period, solveActive = false }: PublishControls
           published shifts as it can. People whose shifts change are e-mailed, and every change is recorded in
           the audit trail.
         </p>
+        {windowDays !== null && windowDays > 0 && (
+          <p>
+            Changes to shifts less than {windowDays} days away are late changes (the organisation’s notice
+            window). Where a fair-workweek law or agreement applies they may carry predictability pay: local
+            law and agreements decide.
+          </p>
+        )}
         <Field label="Time limit (seconds)">
           <SpinButton
             value={limit}

@@ -75,6 +75,9 @@ export function LateChanges({ periodId }: { periodId: string }) {
   return (
     <ReportCard title="Changes inside the notice window" className={styles.root}>
       <Body1>{lateSummary(data)}</Body1>
+      <MessageBar intent="warning" layout="multiline">
+        <MessageBarBody>{data.caution}</MessageBarBody>
+      </MessageBar>
       {paid && (
         <>
           <Subtitle2 as="h3">Predictability pay recorded</Subtitle2>
@@ -122,9 +125,6 @@ export function LateChanges({ periodId }: { periodId: string }) {
           </span>
         </>
       )}
-      <MessageBar intent="warning" layout="multiline">
-        <MessageBarBody>{data.caution}</MessageBarBody>
-      </MessageBar>
     </ReportCard>
   );
 }
