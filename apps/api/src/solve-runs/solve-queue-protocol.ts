@@ -50,6 +50,12 @@ export const solveEventsChannel = (prefix: string): string => `${prefix}:solve-e
 export const solveControlChannel = (prefix: string): string => `${prefix}:solve-control`;
 /** Set when a run is cancelled, so a worker that takes the job afterwards does not solve it. */
 export const solveCancelKey = (prefix: string, runId: string): string => `${prefix}:solve-cancel:${runId}`;
+/**
+ * The instance id of the API process that owns a queued run (set when it queues the job, refreshed
+ * with its heartbeat, deleted when the run ends): the other instances read every owner in one MGET
+ * instead of fetching each job with its encoded problem.
+ */
+export const solveOwnerKey = (prefix: string, runId: string): string => `${prefix}:solve-owner:${runId}`;
 /** Alive while the API instance runs (refreshed every few seconds). */
 export const apiInstanceKey = (prefix: string, instanceId: string): string =>
   `${prefix}:api-instance:${instanceId}`;

@@ -1,6 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { type RosterProblem } from '@rotaplex/roster-model';
 import { type Job, Queue, QueueEvents, Worker } from 'bullmq';
+import { type Redis } from 'ioredis';
 import { redisConnection, RedisConnections } from '../scale-out/redis-connections';
 import {
   apiInstanceKey,
@@ -14,6 +15,7 @@ import {
   solveCancelKey,
   solveControlChannel,
   solveEventsChannel,
+  solveOwnerKey,
   SOLVER_WORKER_NAME_PREFIX,
 } from './solve-queue-protocol';
 
@@ -28,6 +30,19 @@ export type SolveJobOutcome =
 const HEARTBEAT_MS = 5_000;
 /** A job's state is also checked this often, in case an event from Redis was missed. */
 const RECHECK_MS = 5_000;
+/**
+ * A run's owner key outlives a missed beat or two (refreshed every beat while the run is owned):
+ * longer than the heartbeat, so a dead owner is told by its expired heartbeat, as before, while
+ * its runs' owner keys still name it.
+ */
+const OWNER_KEY_MS = 12 * HEARTBEAT_MS;
+
+/**
+ * Who owns a run, for the other instances' sweep: `alive` (its owner's heartbeat is there),
+ * `gone` (the owner key names an instance whose heartbeat has expired or was removed) or
+ * `unknown` (no owner key: not queued yet, ended, or queued by an instance of an earlier version).
+ */
+export type RunOwnerState = 'alive' | 'gone' | 'unknown';
 
 export interface QueueHealth {
   state: 'up' | 'down';
@@ -54,16 +69,25 @@ export class SolveQueue {
   /** Runs this instance owns and waits for. */
   private readonly owned = new Set<string>();
   private readonly timers: NodeJS.Timeout[] = [];
+  /** The connections made here: BullMQ leaves connections it was given open when it closes. */
+  private readonly connections: Redis[] = [];
   private closed = false;
 
   constructor(private readonly redis: RedisConnections) {
     const config = redis.config;
     this.prefix = config.prefix;
     const url = config.redisUrl as string;
-    const connection = redisConnection(url, `${config.prefix}-api-queue`);
-    this.queue = new Queue<SolveJobData>(SOLVE_QUEUE, { connection, prefix: config.prefix });
+    const connect = (name: string): Redis => {
+      const connection = redisConnection(url, `${config.prefix}-${name}`);
+      this.connections.push(connection);
+      return connection;
+    };
+    this.queue = new Queue<SolveJobData>(SOLVE_QUEUE, {
+      connection: connect('api-queue'),
+      prefix: config.prefix,
+    });
     this.queueEvents = new QueueEvents(SOLVE_QUEUE, {
-      connection: redisConnection(url, `${config.prefix}-api-queue-events`),
+      connection: connect('api-queue-events'),
       prefix: config.prefix,
     });
     this.queueEvents.on('completed', ({ jobId }) => void this.check(jobId));
@@ -77,7 +101,7 @@ export class SolveQueue {
       SOLVE_QUEUE,
       () => Promise.reject(new Error('the API does not run solves')),
       {
-        connection: redisConnection(url, `${config.prefix}-api-stalled`),
+        connection: connect('api-stalled'),
         prefix: config.prefix,
         autorun: false,
         lockDuration: config.solveLockMs,
@@ -131,6 +155,8 @@ export class SolveQueue {
 
   async enqueue(runId: string, problem: RosterProblem, timeLimitSeconds: number): Promise<void> {
     this.owned.add(runId);
+    // Before the job exists, so no job of this version is ever without its owner key.
+    await this.redis.client.set(solveOwnerKey(this.prefix, runId), this.instanceId, 'PX', OWNER_KEY_MS);
     await this.queue.add(
       'solve',
       {
@@ -151,7 +177,14 @@ export class SolveQueue {
 
   /** Forget a run this instance owned (it ended some other way). */
   disown(runId: string): void {
-    this.owned.delete(runId);
+    this.release(runId);
+  }
+
+  /** Stop owning a run and drop its owner key; false when it was not owned (any more). */
+  private release(runId: string): boolean {
+    if (!this.owned.delete(runId)) return false;
+    this.redis.client.del(solveOwnerKey(this.prefix, runId)).catch(() => undefined);
+    return true;
   }
 
   /**
@@ -179,7 +212,31 @@ export class SolveQueue {
     await this.control({ runId, action: 'kill' });
   }
 
-  /** Whether the API instance that owns a run's job is alive; null when the job is gone. */
+  /**
+   * The owner state of each run, in two round trips whatever the number of runs: one MGET of the
+   * runs' owner keys, one MGET of their owners' heartbeat keys.
+   */
+  async owners(runIds: readonly string[]): Promise<Map<string, RunOwnerState>> {
+    const states = new Map<string, RunOwnerState>();
+    if (!runIds.length) return states;
+    const client = this.redis.client;
+    const owners = await client.mget(runIds.map((id) => solveOwnerKey(this.prefix, id)));
+    const instances = [...new Set(owners.filter((o): o is string => o !== null))];
+    const beats = instances.length
+      ? await client.mget(instances.map((id) => apiInstanceKey(this.prefix, id)))
+      : [];
+    const alive = new Set(instances.filter((_, i) => beats[i] !== null));
+    runIds.forEach((id, i) => {
+      const owner = owners[i];
+      states.set(id, owner === null ? 'unknown' : alive.has(owner) ? 'alive' : 'gone');
+    });
+    return states;
+  }
+
+  /**
+   * Whether the API instance that owns a run's job is alive; null when the job is gone. Fetches
+   * the whole job: only for a run without an owner key (see {@link owners}).
+   */
   async ownerAlive(runId: string): Promise<{ job: Job<SolveJobData>; alive: boolean } | null> {
     const job = await this.queue.getJob(runId);
     if (!job) return null;
@@ -187,11 +244,15 @@ export class SolveQueue {
     return { job, alive };
   }
 
-  /** Remove a job whatever its state (a run whose owner is gone); a running one is stopped first. */
+  /**
+   * Remove a job whatever its state (a run whose owner is gone) and its owner key; a running one
+   * is stopped first (its worker still holds the lock, so the job stays until the worker ends it).
+   */
   async discard(runId: string): Promise<void> {
+    this.owned.delete(runId);
+    await this.redis.client.del(solveOwnerKey(this.prefix, runId)).catch(() => undefined);
     await this.kill(runId);
-    const job = await this.queue.getJob(runId);
-    await job?.remove().catch(() => undefined);
+    await this.queue.remove(runId).catch(() => undefined);
   }
 
   async health(): Promise<QueueHealth> {
@@ -216,11 +277,17 @@ export class SolveQueue {
     await this.redis.client.publish(solveControlChannel(this.prefix), JSON.stringify(message));
   }
 
+  /** The heartbeat, and the owner key of every run still owned (set again if it was lost). */
   private async beat(): Promise<void> {
     if (this.closed) return;
-    await this.redis.client
-      .set(apiInstanceKey(this.prefix, this.instanceId), String(Date.now()), 'PX', 3 * HEARTBEAT_MS)
-      .catch(() => undefined);
+    // One round trip. A key written for a run released meanwhile expires by itself; its run has
+    // ended, so no sweep reads it.
+    const batch = this.redis.client
+      .multi()
+      .set(apiInstanceKey(this.prefix, this.instanceId), String(Date.now()), 'PX', 3 * HEARTBEAT_MS);
+    for (const runId of this.owned)
+      batch.set(solveOwnerKey(this.prefix, runId), this.instanceId, 'PX', OWNER_KEY_MS);
+    await batch.exec().catch(() => undefined);
   }
 
   /** Looks at an owned job and reports its end once. */
@@ -244,7 +311,7 @@ export class SolveQueue {
           // there may be none left. Take it off the queue and fail the run now. The outcome is
           // claimed before the removal: the removal wakes another check, which would find the job
           // missing and end the run as cancelled (seen once in the scale-out run).
-          if (!this.owned.delete(runId)) return;
+          if (!this.release(runId)) return;
           const message = job.deferredFailure;
           await job
             .remove()
@@ -257,7 +324,7 @@ export class SolveQueue {
       this.logger.warn(`Checking solve job ${runId}: ${String(err)}`);
       return;
     }
-    if (!outcome || !this.owned.delete(runId)) return;
+    if (!outcome || !this.release(runId)) return;
     for (const listener of this.ended) listener(runId, outcome);
   }
 
@@ -267,5 +334,6 @@ export class SolveQueue {
     this.timers.forEach((t) => clearInterval(t));
     await this.redis.client.del(apiInstanceKey(this.prefix, this.instanceId)).catch(() => undefined);
     await Promise.allSettled([this.stalledChecker.close(), this.queueEvents.close(), this.queue.close()]);
+    await Promise.allSettled(this.connections.map((c) => c.quit()));
   }
 }

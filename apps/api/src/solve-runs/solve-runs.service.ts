@@ -589,6 +589,8 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
   /**
    * Runs whose owning API instance is gone can never be saved: stop their jobs and fail them, as
    * the start-up of a single process does. Every instance sweeps; the updates are conditional.
+   * The owners are read from their small keys in one go; a job is fetched only for a run without
+   * an owner key (queued by an earlier version, or its owner gone long enough for the key to expire).
    */
   private async sweepOrphans(): Promise<void> {
     const queue = this.queue as SolveQueue;
@@ -597,12 +599,20 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
         select: { id: true, createdAt: true },
         where: { status: In([...ACTIVE_SOLVE_RUN_STATUSES]) },
       });
-      for (const run of active) {
+      const others = active.filter((run) => !this.owned.has(run.id));
+      const owners = await queue.owners(others.map((run) => run.id));
+      for (const run of others) {
         if (this.owned.has(run.id) || this.stopping) continue;
-        const info = await queue.ownerAlive(run.id);
-        if (info?.alive) continue;
-        if (!info && Date.now() - run.createdAt.getTime() < UNQUEUED_GRACE_MS) continue;
-        if (info) await queue.discard(run.id);
+        const owner = owners.get(run.id);
+        if (owner === 'alive') continue;
+        let queued = true;
+        if (owner !== 'gone') {
+          if (Date.now() - run.createdAt.getTime() < UNQUEUED_GRACE_MS) continue;
+          const info = await queue.ownerAlive(run.id);
+          if (info?.alive) continue;
+          queued = info !== null;
+        }
+        if (queued) await queue.discard(run.id);
         await this.fail(run.id, RESTARTED_MESSAGE);
         await this.emitEnd(run.id);
         this.logger.warn(`Solve run ${run.id} failed: the API instance that started it is gone`);
