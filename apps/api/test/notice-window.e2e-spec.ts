@@ -151,6 +151,22 @@ describe('changes inside the notice window', () => {
     await putSettings(manager, VALID).expect(403);
     const staff = (await t.login('staff@example.com')).token;
     await settings(staff).expect(403);
+    // The late-change list: planners with reports of the unit only; a malformed id is a 400.
+    await t
+      .http()
+      .get(api(NW.lateChanges('not-an-id')))
+      .set(bearer(manager))
+      .expect(400);
+    await t
+      .http()
+      .get(api(NW.lateChanges('00000000-0000-4000-8000-000000000000')))
+      .set(bearer(manager))
+      .expect(404);
+    await t
+      .http()
+      .get(api(NW.lateChanges('00000000-0000-4000-8000-000000000000')))
+      .set(bearer(staff))
+      .expect(403);
     // Nothing was saved by the refused requests.
     expect((await settings(admin).expect(200)).body).toMatchObject({ recordPredictabilityPay: false });
   });
