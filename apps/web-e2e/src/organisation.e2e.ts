@@ -11,6 +11,7 @@ import {
   type UnitDto,
 } from '@rotaplex/contracts';
 import { apiCall, apiSignIn } from './support/api';
+import { seriousViolations } from './support/axe';
 import {
   eventually,
   openBrowser,
@@ -95,6 +96,7 @@ describe('organisation', () => {
     expect(await record.isChecked()).toBe(true);
     expect(await hours.inputValue()).toBe('1.5');
     await screenshot(page, 'organisation-notice-window');
+    expect(await seriousViolations(page)).toEqual([]); // axe-core, WCAG 2.1 AA
     await page.setViewportSize({ width: 390, height: 844 });
     await form.getByRole('heading').scrollIntoViewIfNeeded();
     await screenshot(page, 'organisation-notice-window-390', { fullPage: false });
@@ -175,6 +177,7 @@ describe('organisation', () => {
       /: (day off|Early|Late) → (day off|Early|Late)\s+\d+ days?'s? notice · made by the employer · 1\.5 h recorded/,
     );
     await card.getByText(/local law and agreements to decide/).waitFor();
+    expect(await seriousViolations(page)).toEqual([]); // axe-core, WCAG 2.1 AA
     const top = card.getByRole('heading', { name: 'Changes inside the notice window' });
     await top.evaluate((e) => {
       e.scrollIntoView({ block: 'start' });
