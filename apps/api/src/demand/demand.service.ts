@@ -30,10 +30,10 @@ import {
   wardPlan,
 } from '@rotaplex/roster-model';
 import { DataSource, Repository } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { isRealDate } from '../common/dates';
 import { CoverNeedsService } from '../cover-needs/cover-needs.service';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import { StaffService } from '../staff/staff.service';
@@ -161,6 +161,7 @@ export class DemandService implements OnModuleDestroy {
     private readonly dataSource: DataSource,
     private readonly shiftTypesService: ShiftTypesService,
     private readonly staff: StaffService,
+    private readonly cells: PeriodWriter,
   ) {}
 
   async onModuleDestroy(): Promise<void> {
@@ -450,12 +451,7 @@ export class DemandService implements OnModuleDestroy {
 
   /** The period's shifts, of people with the skill when one is given. */
   private async rosteredAssignments(periodId: string, skillId: string | null) {
-    const rows = await this.dataSource
-      .getRepository(AssignmentEntity)
-      .createQueryBuilder('a')
-      .select(['a.date', 'a.shiftTypeId', 'a.staffMemberId'])
-      .where('a.rosterPeriodId = :periodId AND a.shiftTypeId IS NOT NULL', { periodId })
-      .getMany();
+    const rows = (await this.cells.rowsOf(periodId)).filter((r) => r.shiftTypeId !== null);
     if (skillId === null) return rows.map((r) => ({ date: r.date, shiftTypeId: r.shiftTypeId as string }));
     const ids = new Set(await this.staff.idsWithSkill(skillId));
     return rows

@@ -1,7 +1,7 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { type RosterChangeKind, type RosterPeriodChangeDto, type StaleVersionDto } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
-import { type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
+import { DataSource, type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { UserEntity } from '../users/user.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
@@ -39,6 +39,16 @@ export interface CellChangeBy {
  */
 @Injectable()
 export class PeriodWriter {
+  constructor(private readonly dataSource: DataSource) {}
+
+  /**
+   * The period's cells as stored (a shift, or a pinned day off), read in `em`'s transaction when
+   * given: other modules read the cells through here, not from the table.
+   */
+  rowsOf(periodId: string, em: EntityManager = this.dataSource.manager): Promise<AssignmentEntity[]> {
+    return em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+  }
+
   /** Sets the given cells (a day off that is not pinned is stored as no row); answers the version. */
   async writeCells(
     em: EntityManager,

@@ -17,7 +17,6 @@ import {
   type SwapStatus,
 } from '@rotaplex/contracts';
 import { DataSource, type EntityManager } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { canAccessUnit } from '../common/unit-scope';
@@ -276,7 +275,7 @@ export class SwapDecisions {
       return refuse(message, { status: 409, message });
     }
     const changes = JSON.parse(row.changes) as StoredCellChange[];
-    const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: row.rosterPeriodId });
+    const rows = await this.writer.rowsOf(row.rosterPeriodId, em);
     // The request holds the period as it was when asked for: its own cells are the lock (the
     // period's writer records who changed what since), and the rules are checked again below on
     // the roster as it is now, whatever else changed meanwhile.

@@ -1,11 +1,11 @@
 import { BadRequestException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { type ProposeSwapDto, type SwapPreviewDto, type SwapRequestDto } from '@rotaplex/contracts';
 import { DataSource, type EntityManager } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess } from '../common/unit-scope';
 import { dateInWords } from '../common/text/date-words';
 import { type OutgoingMail } from '../mail/mail.service';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { type RosterInput } from '../roster-input/roster-input.service';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
 import { UsersService } from '../users/users.service';
@@ -27,6 +27,7 @@ export class SwapPlanning {
     private readonly reads: SwapReads,
     private readonly mailer: SwapMailer,
     private readonly users: UsersService,
+    private readonly cells: PeriodWriter,
   ) {}
 
   async preview(user: AuthUser, body: ProposeSwapDto): Promise<SwapPreviewDto> {
@@ -103,7 +104,7 @@ export class SwapPlanning {
         'colleagueStaffMemberId: this colleague has no sign-in and cannot accept',
       ]);
     }
-    const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: input.period.id });
+    const rows = await this.cells.rowsOf(input.period.id, em);
     const cell = (staffId: string, date: string) =>
       rows.find((r) => r.staffMemberId === staffId && r.date === date)?.shiftTypeId ?? null;
     const today = this.reads.today(input);

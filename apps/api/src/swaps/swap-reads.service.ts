@@ -7,10 +7,10 @@ import {
   type SwapRequestDto,
 } from '@rotaplex/contracts';
 import { DataSource, type EntityManager } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';
 import { assertUnitAccess, canAccessUnit } from '../common/unit-scope';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
@@ -35,13 +35,14 @@ export class SwapReads {
     private readonly units: UnitsService,
     private readonly shiftTypes: ShiftTypesService,
     private readonly staff: StaffService,
+    private readonly cells: PeriodWriter,
   ) {}
 
   async options(user: AuthUser, periodId: string): Promise<SwapOptionsDto> {
     const input = await this.publishedInput(periodId);
     assertUnitAccess(user, input.period.unitId);
     const me = this.staffOf(user, input);
-    const rows = await this.dataSource.manager.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const rows = await this.cells.rowsOf(periodId);
     const today = this.today(input);
     const shiftsOf = (staffId: string) =>
       rows
