@@ -10,8 +10,8 @@ import { DataSource, type EntityManager, In } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { isRealDate } from '../common/dates';
 import { dateInWords, dateRangeInWords } from '../common/text/date-words';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { addDays } from '../roster-periods/roster-periods.service';
+import { type RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import {
   type CreateDateRequestDto,
@@ -33,6 +33,7 @@ export class DateRequestsService {
     private readonly access: RequestAccess,
     private readonly dtos: RequestDtos,
     private readonly shiftTypes: ShiftTypesService,
+    private readonly periods: RosterPeriodsService,
   ) {}
 
   private get m(): EntityManager {
@@ -64,7 +65,7 @@ export class DateRequestsService {
       );
     const shiftTypeId = await this.validate(period, body.date, body.kind, body.shiftTypeId ?? null, true);
     const saved = await this.dataSource.transaction(async (em) => {
-      const fresh = await em.findOneByOrFail(RosterPeriodEntity, { id: period.id });
+      const fresh = await this.periods.byIdOrFail(period.id, em);
       assertDraft(fresh);
       const used = await em.countBy(DateRequestEntity, {
         rosterPeriodId: period.id,
@@ -101,7 +102,7 @@ export class DateRequestsService {
       body.shiftTypeId !== undefined ? body.shiftTypeId : body.kind === 'dayOff' ? null : row.shiftTypeId;
     const shiftTypeId = await this.validate(period, date, kind, shift, date !== row.date);
     const saved = await this.dataSource.transaction(async (em) => {
-      assertDraft(await em.findOneByOrFail(RosterPeriodEntity, { id: period.id }));
+      assertDraft(await this.periods.byIdOrFail(period.id, em));
       if (date !== row.date) await assertFreeDate(em, period.id, row.staffMemberId, date);
       row.date = date;
       row.kind = kind;
@@ -117,7 +118,7 @@ export class DateRequestsService {
     if (!row) throw new NotFoundException('Date request not found');
     await this.access.ownStaff(user, row.staffMemberId);
     await this.dataSource.transaction(async (em) => {
-      assertDraft(await em.findOneByOrFail(RosterPeriodEntity, { id: row.rosterPeriodId }));
+      assertDraft(await this.periods.byIdOrFail(row.rosterPeriodId, em));
       await em.delete(DateRequestEntity, { id });
     });
   }

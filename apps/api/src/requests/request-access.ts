@@ -4,7 +4,8 @@ import { DataSource, type EntityManager } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';
 import { canAccessUnit, visibleUnitIds } from '../common/unit-scope';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { type RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
 import { StaffService } from '../staff/staff.service';
 import { UnitsService } from '../units/units.service';
@@ -19,6 +20,7 @@ export class RequestAccess {
     private readonly dataSource: DataSource,
     private readonly units: UnitsService,
     private readonly staff: StaffService,
+    private readonly periods: RosterPeriodsService,
   ) {}
 
   private get m(): EntityManager {
@@ -76,7 +78,7 @@ export class RequestAccess {
   }
 
   async periodOrFail(id: string): Promise<RosterPeriodEntity> {
-    const period = await this.m.findOneBy(RosterPeriodEntity, { id });
+    const period = await this.periods.byId(id);
     if (!period) throw new NotFoundException('Roster period not found');
     return period;
   }

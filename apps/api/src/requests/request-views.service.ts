@@ -9,8 +9,8 @@ import {
 import { DataSource, type EntityManager, In } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { toPage } from '../common/pagination';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { addDays } from '../roster-periods/roster-periods.service';
+import { type RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { StaffService } from '../staff/staff.service';
 import { UnitsService } from '../units/units.service';
 import { type MyRequestsQueryDto, type RequestListQueryDto } from './dto/requests.dto';
@@ -31,6 +31,7 @@ export class RequestViews {
     private readonly dtos: RequestDtos,
     private readonly units: UnitsService,
     private readonly staff: StaffService,
+    private readonly periods: RosterPeriodsService,
   ) {}
 
   private get m(): EntityManager {
@@ -44,12 +45,7 @@ export class RequestViews {
     const unitIds = [...new Set(staff.map((s) => s.unitId))];
     const units = unitIds.length ? await this.units.ofOrganisation(user.organisationId, unitIds) : [];
     const unitById = new Map(units.map((u) => [u.id, u]));
-    const periods = unitIds.length
-      ? await this.m.find(RosterPeriodEntity, {
-          where: { unitId: In(unitIds), status: In(['draft', 'published']) },
-          order: { startDate: 'ASC' },
-        })
-      : [];
+    const periods = await this.periods.openOfUnits(unitIds);
     const page = { skip: (query.page - 1) * query.pageSize, take: query.pageSize };
     const [dateRequests, dateRequestsTotal] = ids.length
       ? await this.m.findAndCount(DateRequestEntity, {
@@ -127,7 +123,7 @@ export class RequestViews {
   async setRequestLimit(user: AuthUser, periodId: string, requestLimit: number): Promise<RequestPeriodDto> {
     await this.access.managedPeriod(user, periodId);
     const saved = await this.dataSource.transaction(async (em) => {
-      const period = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
+      const period = await this.periods.byIdOrFail(periodId, em);
       if (period.status !== 'draft') {
         throw new ConflictException(
           `The request limit can only be changed on a draft period; this one is ${period.status}`,

@@ -7,6 +7,7 @@ import { RequestAccess } from './request-access';
 import { RequestDtos } from './request-dtos';
 import { RequestViews } from './request-views.service';
 import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from './requests.entities';
+import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
 import { ShiftTypesModule } from '../shift-types/shift-types.module';
 import { StaffModule } from '../staff/staff.module';
 import { UnitsModule } from '../units/units.module';
@@ -24,6 +25,7 @@ import { RequestsController } from './requests.controller';
     StaffModule,
     UsersModule,
     ShiftTypesModule,
+    RosterPeriodsModule,
   ],
   controllers: [RequestsController],
   providers: [

@@ -62,6 +62,28 @@ export class RosterPeriodsService {
     return toRosterPeriodDto(await this.load(user, id));
   }
 
+  /** A period by id, with no access check (the caller checks), read in `em`'s transaction when given. */
+  byId(id: string, em: EntityManager = this.dataSource.manager): Promise<RosterPeriodEntity | null> {
+    return em.findOneBy(RosterPeriodEntity, { id });
+  }
+
+  /** A period by id; TypeORM's EntityNotFoundError when there is none. */
+  byIdOrFail(id: string, em: EntityManager = this.dataSource.manager): Promise<RosterPeriodEntity> {
+    return em.findOneByOrFail(RosterPeriodEntity, { id });
+  }
+
+  /** The draft and published periods of the given units, earliest first. */
+  async openOfUnits(
+    unitIds: string[],
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<RosterPeriodEntity[]> {
+    if (!unitIds.length) return [];
+    return em.find(RosterPeriodEntity, {
+      where: { unitId: In(unitIds), status: In(['draft', 'published']) },
+      order: { startDate: 'ASC' },
+    });
+  }
+
   /**
    * The period's changes made inside the notice window after publishing, newest first, with the
    * predictability pay recorded per person and the organisation's setting as it is now.
