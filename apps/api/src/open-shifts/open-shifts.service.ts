@@ -3,6 +3,7 @@ import {
   BadRequestException,
   ConflictException,
   Injectable,
+  type OnModuleInit,
   UnprocessableEntityException,
 } from '@nestjs/common';
 import {
@@ -16,7 +17,7 @@ import {
   type SwapRequestDto,
   type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
-import { DataSource, In } from 'typeorm';
+import { DataSource, type EntityManager, In } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
@@ -42,7 +43,15 @@ import {
   type FillOutsideOfferBody,
   type WhatItWouldTakeQueryDto,
 } from './dto/outside-offer.dto';
-import { currentOffers, lessFilledOutside, offerDto, offerForStaff, OutsideOffers } from './outside-offers';
+import {
+  currentOffers,
+  filledOutside,
+  lessFilledOutside,
+  type NeedKey,
+  offerDto,
+  offerForStaff,
+  OutsideOffers,
+} from './outside-offers';
 import { HOW_TO_CHANGE_PUBLISHED, whatItWouldTake } from './what-it-would-take';
 
 type Cell = Pick<AssignmentEntity, 'staffMemberId' | 'date' | 'shiftTypeId'>;
@@ -100,7 +109,7 @@ interface PeriodOpenShifts {
  * each person's rules checked on their own row) and keeps the result until the next write.
  */
 @Injectable()
-export class OpenShiftsService {
+export class OpenShiftsService implements OnModuleInit {
   private readonly cache: GenerationCache<PeriodOpenShifts>;
   private readonly outside: OutsideOffers;
 
@@ -115,6 +124,16 @@ export class OpenShiftsService {
   ) {
     this.cache = new GenerationCache(writes, { maxEntries: 32 });
     this.outside = new OutsideOffers(input, audit, unmetNeeds);
+  }
+
+  /** Approving a claim counts the people filling its shift from outside the roster (see filledOutside). */
+  onModuleInit(): void {
+    this.swaps.coverOutsideFrom(this);
+  }
+
+  /** How many people from outside the roster (bank or agency) fill the need now, read in `em`. */
+  async filledOutside(em: EntityManager, periodId: string, need: NeedKey): Promise<number> {
+    return filledOutside(await currentOffers(em, periodId), need);
   }
 
   /**

@@ -29,6 +29,12 @@ export function currentOffers(em: EntityManager, periodId: string): Promise<Outs
   return em.findBy(OutsideOfferEntity, { rosterPeriodId: periodId, status: In(['offered', 'filled']) });
 }
 
+/** How many people from outside the roster fill the need, by its current offer (0 when none is filled). */
+export function filledOutside(offers: OutsideOfferEntity[], need: NeedKey): number {
+  const offer = offers.find((o) => sameNeed(o, need));
+  return offer?.status === 'filled' ? (offer.people ?? 0) : 0;
+}
+
 /**
  * Open needs less the people filled from outside the roster: a need whose shortfall outside staff
  * cover in full is no longer open; one covered in part stays open for the rest. Each need carries its
@@ -40,7 +46,7 @@ export function lessFilledOutside<T extends NeedKey & { short: number; belowMini
 ): (T & { offer: OutsideOfferEntity | null })[] {
   return needs.flatMap((n) => {
     const offer = offers.find((o) => sameNeed(o, n)) ?? null;
-    const filled = offer?.status === 'filled' ? (offer.people ?? 0) : 0;
+    const filled = filledOutside(offers, n);
     const short = n.short - filled;
     if (short <= 0) return [];
     return [{ ...n, short, belowMinimum: Math.max(0, n.belowMinimum - filled), offer }];

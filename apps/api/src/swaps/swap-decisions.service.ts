@@ -28,6 +28,7 @@ import { StaffService } from '../staff/staff.service';
 import { UsersService } from '../users/users.service';
 import { evaluateChanges, staleCells } from './swap-evaluation';
 import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.service';
+import { type OutsideCover } from './outside-cover';
 import { SwapLinks } from './swap-links';
 import { SwapMailer } from './swap-mailer';
 import { newMessages, staffName, summary } from './swap-mails';
@@ -52,7 +53,8 @@ type Actor = AuthUser;
  * Decisions on swaps, offers and open-shift claims: the proposer's cancel, the colleague's answer,
  * the manager's approval (in the app or through a single-use e-mail link) and the change itself,
  * applied through the period's writer in one transaction only if the roster still holds the cells
- * recorded at proposal and the rules still hold. Every decision re-checks expiry itself.
+ * recorded at proposal and the rules still hold (and, for a claim, the shift is still wanted: people
+ * on the roster and people filled from outside it count). Every decision re-checks expiry itself.
  */
 @Injectable()
 export class SwapDecisions {
@@ -67,6 +69,13 @@ export class SwapDecisions {
     private readonly staff: StaffService,
     private readonly users: UsersService,
   ) {}
+
+  /** People filling open shifts from outside the roster (registered by the open-shifts module). */
+  private outsideCover: OutsideCover | null = null;
+
+  coverOutsideFrom(source: OutsideCover): void {
+    this.outsideCover = source;
+  }
 
   async cancel(user: AuthUser, id: string): Promise<SwapRequestDto> {
     const outcome = await this.dataSource.transaction(async (em): Promise<Outcome> => {
@@ -310,6 +319,21 @@ export class SwapDecisions {
       ).length;
       if (!need || have >= need.target) {
         const message = 'The open shift has been filled meanwhile: nothing was changed';
+        return refuse(message, { status: 409, message });
+      }
+      // People from outside the roster (bank or agency) may have been recorded on it since the claim.
+      // Claims exist only through the open-shifts module, which registers where those are kept.
+      if (!this.outsideCover)
+        throw new Error('No record of outside cover is registered for open-shift claims');
+      const outside = await this.outsideCover.filledOutside(em, row.rosterPeriodId, {
+        date: c.date,
+        shiftTypeId: need.shiftTypeId,
+        skillId: row.skillId,
+      });
+      if (have + outside >= need.target) {
+        const message =
+          `The open shift has been filled from outside the roster meanwhile (${outside} ` +
+          `${outside === 1 ? 'person' : 'people'} from bank or agency staff): nothing was changed`;
         return refuse(message, { status: 409, message });
       }
     }

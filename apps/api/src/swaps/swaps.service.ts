@@ -5,6 +5,8 @@ import { type AuthUser } from '../common/auth-user';
 import { type OutgoingMail } from '../mail/mail.service';
 import { type RosterInput } from '../roster-input/roster-input.service';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
+import { type OutsideCover } from './outside-cover';
+import { SwapDecisions } from './swap-decisions.service';
 import { SwapMailer } from './swap-mailer';
 import { SwapPlanning } from './swap-planning.service';
 import { SwapReads } from './swap-reads.service';
@@ -23,7 +25,16 @@ export class SwapsService {
     private readonly reads: SwapReads,
     private readonly planning: SwapPlanning,
     private readonly mailer: SwapMailer,
+    private readonly decisions: SwapDecisions,
   ) {}
+
+  /**
+   * Where people filling open shifts from outside the roster are recorded: the approval of a claim
+   * counts them in its transaction and refuses (409) a shift they fill in full.
+   */
+  coverOutsideFrom(source: OutsideCover): void {
+    this.decisions.coverOutsideFrom(source);
+  }
 
   /** The caller's staff member on the period's unit (403 when they are not on its roster). */
   staffOf(user: AuthUser, input: RosterInput): StaffMemberEntity {
