@@ -13,9 +13,8 @@ import {
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
-import { localDate } from '../src/common/dates';
+import { addDays, localDate } from '../src/common/dates';
 import { LeaveRequestEntity } from '../src/requests/requests.entities';
-import { addDays } from '../src/roster-periods/roster-periods.service';
 import { caughtMails } from './support/mailbox';
 import { generate, outboxSettled, smallUnit, waitForRun } from './publishing-fixture';
 import {

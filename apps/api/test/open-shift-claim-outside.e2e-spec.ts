@@ -12,7 +12,7 @@ import {
   type SwapRequestDto,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays } from '../src/common/dates';
 import {
   createPeriod,
   findUnit,

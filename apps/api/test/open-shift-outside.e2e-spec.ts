@@ -15,7 +15,7 @@ import {
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { ContractEntity } from '../src/contracts/contract.entity';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays } from '../src/common/dates';
 import { StaffMemberEntity } from '../src/staff/staff-member.entity';
 import {
   createPeriod,

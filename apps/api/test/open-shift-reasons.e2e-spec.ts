@@ -9,7 +9,7 @@ import {
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays } from '../src/common/dates';
 import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
 import { caughtMails } from './support/mailbox';
 import {

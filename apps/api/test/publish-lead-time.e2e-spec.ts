@@ -7,8 +7,7 @@ import {
   type RosterPeriodDto,
   type UnitDto,
 } from '@rotaplex/contracts';
-import { localDate } from '../src/common/dates';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays, localDate } from '../src/common/dates';
 import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
 import { caughtMails } from './support/mailbox';
 import { smallUnit } from './publishing-fixture';

@@ -1,6 +1,5 @@
 import { PLANNING_ROUTES as P, REQUESTS_ROUTES as Q, type UnitDto } from '@rotaplex/contracts';
-import { localDate } from '../src/common/dates';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays, localDate } from '../src/common/dates';
 import { createPeriod, findUnit } from './support/planning';
 import { expressRoutes } from './support/routes';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';

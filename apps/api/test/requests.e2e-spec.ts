@@ -20,7 +20,7 @@ import {
 } from '@rotaplex/contracts';
 import { dateRangeInWords } from '../src/common/text/date-words';
 import { DEMO_ON_LEAVE_PERSON, DEMO_SHORT_NEED_DAY } from '../src/demo/demo-requests';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays } from '../src/common/dates';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { RosterInputService } from '../src/roster-input/roster-input.service';
 import { smallUnit } from './publishing-fixture';

@@ -6,7 +6,7 @@ import {
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays } from '../src/common/dates';
 import { UserEntity } from '../src/users/user.entity';
 import {
   createPeriod,

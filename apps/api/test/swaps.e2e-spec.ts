@@ -12,7 +12,7 @@ import {
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
-import { addDays } from '../src/roster-periods/roster-periods.service';
+import { addDays } from '../src/common/dates';
 import { SwapExpiryService } from '../src/swaps/swap-expiry.service';
 import { SwapLinkTokenEntity, SwapRequestEntity } from '../src/swaps/swap-request.entity';
 import { dateInWords } from '../src/common/text/date-words';

@@ -24,6 +24,17 @@ export function sqliteUtc(date: Date): string {
   return date.toISOString().replace('T', ' ').replace('Z', '');
 }
 
+/**
+ * "YYYY-MM-DD" plus n days (n may be negative). Plain UTC arithmetic on purpose: date-fns' addDays
+ * counts in the server's own time zone, and where a zone skipped a day (Pacific/Apia on 2011-12-30)
+ * that gives the wrong date text; a calendar date has no zone.
+ */
+export function addDays(date: string, n: number): string {
+  const d = new Date(`${date}T00:00:00Z`);
+  d.setUTCDate(d.getUTCDate() + n);
+  return d.toISOString().slice(0, 10);
+}
+
 /** Days from `a` to `b` ("YYYY-MM-DD"), b - a. */
 export function daysBetween(a: string, b: string): number {
   return Math.round((Date.parse(`${b}T00:00:00Z`) - Date.parse(`${a}T00:00:00Z`)) / 86_400_000);

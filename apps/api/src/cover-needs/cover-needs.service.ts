@@ -28,9 +28,6 @@ import {
   DATE_PATTERN,
 } from './dto/cover-need.dto';
 
-/** @deprecated import isRealDate from common/dates (kept for roster-periods until it does). */
-export { isRealDate } from '../common/dates';
-
 type Need = { shiftTypeId: string; skillId: string | null; min: number; target: number };
 type PatternRow = Need & { weekday: number };
 type OverrideRow = Need & { date: string };

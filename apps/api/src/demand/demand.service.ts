@@ -31,10 +31,10 @@ import {
 } from '@rotaplex/roster-model';
 import { DataSource, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
-import { isRealDate } from '../common/dates';
+import { addDays, isRealDate } from '../common/dates';
 import { CoverNeedsService } from '../cover-needs/cover-needs.service';
 import { PeriodWriter } from '../roster-periods/period-writer';
-import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
+import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import { StaffService } from '../staff/staff.service';
 import { parseCsv } from '../common/csv';

@@ -1,11 +1,10 @@
 import { type ContractRules } from '@rotaplex/contracts';
 import { type EntityManager } from 'typeorm';
-import { localDate } from '../common/dates';
+import { addDays, localDate } from '../common/dates';
 import { ContractEntity } from '../contracts/contract.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
 import { LeaveRequestEntity } from '../requests/requests.entities';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { addDays } from '../roster-periods/roster-periods.service';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { SkillEntity } from '../skills/skill.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';

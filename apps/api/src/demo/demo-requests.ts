@@ -8,7 +8,7 @@ import {
 import { type EntityManager } from 'typeorm';
 import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from '../requests/requests.entities';
 import { type RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { addDays } from '../roster-periods/roster-periods.service';
+import { addDays } from '../common/dates';
 import { type ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
 import { type UserEntity } from '../users/user.entity';

@@ -8,10 +8,10 @@ import {
 import { type DateRequestDto, type Page } from '@rotaplex/contracts';
 import { DataSource, type EntityManager, In } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
-import { isRealDate } from '../common/dates';
+import { addDays, isRealDate } from '../common/dates';
 import { dateInWords, dateRangeInWords } from '../common/text/date-words';
 import { type RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { addDays, RosterPeriodsService } from '../roster-periods/roster-periods.service';
+import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { ShiftTypesService } from '../shift-types/shift-types.service';
 import {
   type CreateDateRequestDto,

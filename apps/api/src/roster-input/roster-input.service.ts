@@ -14,7 +14,7 @@ import { ContractEntity } from '../contracts/contract.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
 import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from '../requests/requests.entities';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
-import { addDays } from '../roster-periods/roster-periods.service';
+import { addDays } from '../common/dates';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { SkillEntity } from '../skills/skill.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';

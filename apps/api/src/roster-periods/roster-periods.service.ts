@@ -9,7 +9,7 @@ import {
 import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
-import { isRealDate } from '../cover-needs/cover-needs.service';
+import { addDays, isRealDate } from '../common/dates';
 import { OrganisationEntity } from '../organisation/organisation.entity';
 import { toNoticeWindowDto } from '../organisation/organisation.service';
 import { UnitEntity } from '../units/unit.entity';
@@ -179,13 +179,6 @@ export class RosterPeriodsService {
 
 function assertRealDate(date: string): void {
   if (!isRealDate(date)) throw new BadRequestException(['startDate must be a real calendar date']);
-}
-
-/** "YYYY-MM-DD" plus n days. */
-export function addDays(date: string, n: number): string {
-  const d = new Date(`${date}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() + n);
-  return d.toISOString().slice(0, 10);
 }
 
 /** Refuses (409) a period that shares a day with another non-archived period of the unit. */
