@@ -28,7 +28,7 @@ import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { type SolveRunMode, SolveRunsService } from '../solve-runs/solve-runs.service';
-import { toCsv } from '../staff/csv';
+import { toCsv } from '../common/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
 import { belowMinimum, leadTimeCaution, settingCautions, unhonouredLeave } from './publish-check';
 import { localDate } from '../common/dates';

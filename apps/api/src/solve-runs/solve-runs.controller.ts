@@ -14,6 +14,7 @@ import {
   type SolveRunEventName,
   type SolveRunStartedDto,
   type SolveRunSummaryDto,
+  isSolveRunEnded,
 } from '@rotaplex/contracts';
 import { type Request, type Response } from 'express';
 import { type AuthUser } from '../common/auth-user';
@@ -28,7 +29,6 @@ import {
 } from './dto/solve-run.dto';
 import { SolveRunsService } from './solve-runs.service';
 
-const ENDED = ['finished', 'failed', 'cancelled'];
 /** A comment line this often keeps proxies from closing a quiet event stream. */
 const KEEP_ALIVE_MS = 15_000;
 
@@ -132,6 +132,6 @@ export class SolveRunsController {
     req.on('close', close);
     timers.push(setInterval(() => open && res.write(': keep-alive\n\n'), KEEP_ALIVE_MS));
     send('status', run);
-    if (ENDED.includes(run.status)) send('end', run);
+    if (isSolveRunEnded(run.status)) send('end', run);
   }
 }

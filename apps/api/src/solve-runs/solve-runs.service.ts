@@ -11,6 +11,7 @@ import {
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   ACTIVE_SOLVE_RUN_STATUSES,
+  isSolveRunEnded,
   type Page,
   type QueueHealthDto,
   type SolveProgressDto,
@@ -56,7 +57,6 @@ const UNQUEUED_GRACE_MS = 60_000;
 /** A solver worker died twice during the same solve (BullMQ's stalled-job limit). */
 export const WORKER_LOST_MESSAGE =
   'A solver worker stopped during the solve (its process or machine ended) and the retry on another worker stopped too, so the run was stopped. Start a new run.';
-const ENDED_STATUSES = ['finished', 'failed', 'cancelled'];
 
 /**
  * A run that does something other than generating a draft (e.g. repairing a published roster):
@@ -290,7 +290,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
   async stopAtOnce(id: string): Promise<void> {
     if (this.queue) {
       const run = await this.runs.findOneBy({ id });
-      if (!run || ENDED_STATUSES.includes(run.status)) return;
+      if (!run || isSolveRunEnded(run.status)) return;
       await this.queue.kill(id);
       await this.waitForEnd(id, (run.timeLimitSeconds + 120) * 1000);
       return;
@@ -638,7 +638,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       const poll = setInterval(() => {
         this.runs
           .findOneBy({ id })
-          .then((r) => (!r || ENDED_STATUSES.includes(r.status)) && stop())
+          .then((r) => (!r || isSolveRunEnded(r.status)) && stop())
           .catch(() => undefined);
       }, 1000);
       const timeout = setTimeout(stop, timeoutMs);

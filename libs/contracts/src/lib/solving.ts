@@ -10,6 +10,15 @@ export const SOLVE_RUN_STATUSES = ['queued', 'running', 'finished', 'failed', 'c
 export type SolveRunStatus = (typeof SOLVE_RUN_STATUSES)[number];
 /** Statuses of a run that has not ended yet; a period has at most one such run. */
 export const ACTIVE_SOLVE_RUN_STATUSES = ['queued', 'running'] as const satisfies readonly SolveRunStatus[];
+/** Statuses of a run that has ended: its result (or failure) is final. */
+export const SOLVE_RUN_ENDED_STATUSES = [
+  'finished',
+  'failed',
+  'cancelled',
+] as const satisfies readonly SolveRunStatus[];
+export function isSolveRunEnded(status: string): boolean {
+  return (SOLVE_RUN_ENDED_STATUSES as readonly string[]).includes(status);
+}
 
 export const SOLVE_TIME_LIMIT_MIN_SECONDS = 1;
 export const SOLVE_TIME_LIMIT_MAX_SECONDS = 600;

@@ -13,6 +13,7 @@ import {
 import { ArrowDownloadRegular, HistoryRegular, SendRegular, WrenchRegular } from '@fluentui/react-icons';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
+  isSolveRunEnded,
   REPAIR_TIME_LIMIT_MAX_SECONDS,
   REPAIR_TIME_LIMIT_MIN_SECONDS,
   type RosterPeriodDto,
@@ -40,7 +41,6 @@ const useStyles = makeStyles({
   note: { color: tokens.colorNeutralForeground2 },
 });
 
-const ENDED = ['finished', 'failed', 'cancelled'];
 const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 export interface PublishControlsProps {
@@ -104,9 +104,9 @@ export function PublishControls({ period, solveActive = false }: PublishControls
     queryFn: ({ signal }) =>
       api.get<SolveRunDto>(SOLVING_ROUTES.solveRun(repairRunId ?? ''), undefined, signal),
     enabled: repairRunId !== null,
-    refetchInterval: (q) => (q.state.data && ENDED.includes(q.state.data.status) ? false : 1000),
+    refetchInterval: (q) => (q.state.data && isSolveRunEnded(q.state.data.status) ? false : 1000),
   });
-  const ended = repairRun.data && ENDED.includes(repairRun.data.status) ? repairRun.data : null;
+  const ended = repairRun.data && isSolveRunEnded(repairRun.data.status) ? repairRun.data : null;
   // Changes after publishing inside the organisation's notice window (fair-workweek laws: 14 days).
   const late = useQuery({ ...lateChangesQuery(period.id), enabled: period.status !== 'draft' });
   const lateCount = late.data?.changes.length ?? 0;
