@@ -12,3 +12,4 @@ export * from './lib/my-roster';
 export * from './lib/guard-rails';
 export * from './lib/demand';
 export * from './lib/open-shifts';
+export * from './lib/safe-staffing';

@@ -18,8 +18,9 @@ import { seedDemoStaffInput } from './demo-requests';
  * member for every demo staff user, weekly cover patterns, one date override and a four-week draft
  * roster period per unit with staff input (demo-requests.ts). All numbers are invented for the demo.
  */
-export const DEMO_SKILLS = [
-  { code: 'RN', name: 'Registered nurse' },
+export const DEMO_SKILLS: readonly { code: string; name: string; registered?: boolean }[] = [
+  // Registered: its shortfalls are checked for the safe-staffing red flags (NICE SG1 2014).
+  { code: 'RN', name: 'Registered nurse', registered: true },
   { code: 'HCA', name: 'Healthcare assistant' },
   { code: 'EN', name: 'English' },
   { code: 'GA', name: 'Irish' },
@@ -30,7 +31,7 @@ export const DEMO_SKILLS = [
   { code: 'PT', name: 'Portuguese' },
   { code: 'IT', name: 'Italian' },
   { code: 'AR', name: 'Arabic' },
-] as const;
+];
 
 const LANGUAGE_SKILL: Record<string, string> = {
   English: 'EN',

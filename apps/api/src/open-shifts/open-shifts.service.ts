@@ -14,6 +14,7 @@ import {
   type Page,
   ROSTER_PERIOD_MAX_DAYS,
   type OutsideOfferDto,
+  shiftRedFlags,
   type SwapRequestDto,
   type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
@@ -64,6 +65,7 @@ export function unmetNeeds(input: RosterInput, rows: Cell[], fromDate: string) {
     skillId: string | null;
     short: number;
     belowMinimum: number;
+    min: number;
   }[] = [];
   for (const need of input.problem.coverNeeds) {
     const date = input.dates[need.day];
@@ -81,6 +83,7 @@ export function unmetNeeds(input: RosterInput, rows: Cell[], fromDate: string) {
         skillId: need.skillId,
         short: need.target - have,
         belowMinimum: Math.max(0, need.min - have),
+        min: need.min,
       });
     }
   }
@@ -213,8 +216,31 @@ export class OpenShiftsService implements OnModuleInit {
     }));
     const skills = await this.skillCodes(input);
     const offers = await currentOffers(m, periodId);
+    const registered = new Map(input.skills.filter((k) => k.registered).map((k) => [k.id, k]));
     const open = lessFilledOutside(unmetNeeds(input, rows, today), offers).map((need) => {
       const shift = input.shiftTypes.find((s) => s.id === need.shiftTypeId)!;
+      const skill = need.skillId ? registered.get(need.skillId) : undefined;
+      // People counted now: the minimum less what is still short of it (after people from outside).
+      const [redFlag = null] = skill
+        ? shiftRedFlags(
+            {
+              date: need.date,
+              shiftTypeId: shift.id,
+              shiftCode: shift.code,
+              shiftName: shift.name,
+              paidMinutes: shift.paidMinutes,
+            },
+            [
+              {
+                skillId: skill.id,
+                skillCode: skill.code,
+                skillName: skill.name,
+                need: need.min,
+                onShift: need.min - need.belowMinimum,
+              },
+            ],
+          )
+        : [];
       return {
         rosterPeriodId: periodId,
         unitId: input.period.unitId,
@@ -233,6 +259,7 @@ export class OpenShiftsService implements OnModuleInit {
             c.change?.date === need.date && c.change.after === need.shiftTypeId && c.skillId === need.skillId,
         ).length,
         outsideOffer: need.offer ? offerDto(need.offer) : null,
+        redFlag,
       };
     });
     return {

@@ -2,6 +2,9 @@ import {
   type BelowMinimumShiftDto,
   contractCautions,
   type ContractRules,
+  type RedFlagDto,
+  shiftRedFlags,
+  sortRedFlags,
   shiftTypeCautions,
   type UnhonouredLeaveDto,
 } from '@rotaplex/contracts';
@@ -66,6 +69,41 @@ export function belowMinimum(input: RosterInput, roster: Roster, explain: boolea
     }
   }
   return out.map(({ day: _day, ...rest }) => rest);
+}
+
+/**
+ * Red flags of safe staffing (NICE SG1 2014, quoted in PRODUCT.md; the rule and our reading of it
+ * are in contracts' safe-staffing.ts) on the roster's shifts that need a registered skill: counted
+ * as belowMinimum counts (a person counts towards every need whose skill they have), by date.
+ */
+export function redFlags(input: RosterInput, roster: Roster): RedFlagDto[] {
+  const registered = new Map(input.skills.filter((k) => k.registered).map((k) => [k.id, k]));
+  if (registered.size === 0) return [];
+  const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
+  const skillsOf = new Map(input.problem.people.map((p) => [p.id, new Set(p.skills)]));
+  const out: RedFlagDto[] = [];
+  for (const need of input.problem.coverNeeds) {
+    const skill = need.skillId === null ? undefined : registered.get(need.skillId);
+    const st = shiftById.get(need.shiftTypeId);
+    if (!skill || !st || need.min <= 0) continue;
+    let onShift = 0;
+    for (const [personId, days] of Object.entries(roster)) {
+      if (days[need.day] === need.shiftTypeId && skillsOf.get(personId)?.has(skill.id)) onShift++;
+    }
+    out.push(
+      ...shiftRedFlags(
+        {
+          date: input.dates[need.day],
+          shiftTypeId: st.id,
+          shiftCode: st.code,
+          shiftName: st.name,
+          paidMinutes: st.paidMinutes,
+        },
+        [{ skillId: skill.id, skillCode: skill.code, skillName: skill.name, need: need.min, onShift }],
+      ),
+    );
+  }
+  return sortRedFlags(out);
 }
 
 /** Shifts on days of approved leave, by date then name. */

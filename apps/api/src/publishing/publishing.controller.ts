@@ -1,5 +1,6 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Query, Res } from '@nestjs/common';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { RedFlagResponse } from '../common/red-flag.dto';
 import {
   ApiAcceptedResponse,
   ApiConflictResponse,
@@ -109,6 +110,11 @@ export class PublishCheckResponse implements PublishCheckDto {
   @ApiProperty() version!: number;
   @ApiProperty() shifts!: number;
   @ApiProperty() people!: number;
+  @ApiProperty({
+    type: [RedFlagResponse],
+    description: 'Red flags of safe staffing (NICE SG1 2014) on shifts needing a registered skill',
+  })
+  redFlags!: RedFlagResponse[];
   @ApiProperty({ type: [BelowMinimumShiftResponse] }) belowMinimum!: BelowMinimumShiftResponse[];
   @ApiProperty({ type: [FindingResponse] }) ruleFindings!: FindingResponse[];
   @ApiProperty({ type: [UnhonouredLeaveResponse] }) unhonouredLeave!: UnhonouredLeaveResponse[];

@@ -30,7 +30,7 @@ import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { type SolveRunMode, SolveRunsService } from '../solve-runs/solve-runs.service';
 import { toCsv } from '../common/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
-import { belowMinimum, leadTimeCaution, settingCautions, unhonouredLeave } from './publish-check';
+import { belowMinimum, leadTimeCaution, redFlags, settingCautions, unhonouredLeave } from './publish-check';
 import { localDate } from '../common/dates';
 import { unmetNeeds } from '../open-shifts/open-shifts.service';
 import { ClaimCheck } from '../swaps/swap-evaluation';
@@ -70,6 +70,7 @@ export class PublishingService {
       ]),
     );
     const short = belowMinimum(input, roster, true);
+    const flags = redFlags(input, roster);
     const blockers: string[] = [];
     if (input.period.status !== 'draft')
       blockers.push(`Only a draft can be published; this period is ${input.period.status}.`);
@@ -79,6 +80,7 @@ export class PublishingService {
       version: input.period.version,
       shifts: cells.length,
       people: new Set(cells.map((c) => c.staffMemberId)).size,
+      redFlags: flags,
       belowMinimum: short,
       ruleFindings: checkDto(input, roster).violations,
       unhonouredLeave: unhonouredLeave(input, roster),
@@ -89,7 +91,7 @@ export class PublishingService {
       ),
       cautions: settingCautions(input, roster, contracts),
       blockers,
-      needsAcknowledgement: short.length > 0,
+      needsAcknowledgement: short.length > 0 || flags.length > 0,
     };
   }
 
@@ -124,10 +126,19 @@ export class PublishingService {
       const cells = publishedCells(input, rows);
       if (cells.length === 0) throw new UnprocessableEntityException(EMPTY_ROSTER);
       const short = belowMinimum(input, rosterOf(input, rows), false);
+      // Every red flag is also a shift below minimum (its need is the minimum), so short[0] exists.
+      const flags = redFlags(input, rosterOf(input, rows));
       const reason = request.reason?.trim() ?? '';
-      if (short.length > 0 && (request.acknowledgeBelowMinimum !== true || reason === '')) {
+      if (
+        (short.length > 0 || flags.length > 0) &&
+        (request.acknowledgeBelowMinimum !== true || reason === '')
+      ) {
         throw new UnprocessableEntityException(
-          `${short.length} ${short.length === 1 ? 'shift is' : 'shifts are'} below minimum cover ` +
+          (flags.length > 0
+            ? `${flags.length} ${flags.length === 1 ? 'red flag' : 'red flags'} of safe staffing ` +
+              `(NICE SG1; first: ${flags[0].text}). `
+            : '') +
+            `${short.length} ${short.length === 1 ? 'shift is' : 'shifts are'} below minimum cover ` +
             `(worst: ${short[0].shiftName} on ${short[0].date}, ${short[0].onShift} of ${short[0].min}` +
             `${short[0].skillCode ? ` ${short[0].skillCode}` : ''}). To publish anyway, acknowledge it ` +
             '(acknowledgeBelowMinimum) and give the reason (reason); it is kept in the audit trail.',
@@ -156,8 +167,10 @@ export class PublishingService {
         kind: 'publish',
         summary:
           `Published the roster: ${cells.length} shift(s) for ${people} person(s)` +
-          (short.length > 0
-            ? `, with ${short.length} shift(s) below minimum cover acknowledged. Reason: ${reason}`
+          (short.length > 0 || flags.length > 0
+            ? `, with ${short.length} shift(s) below minimum cover` +
+              (flags.length > 0 ? ` and ${flags.length} red flag(s) of safe staffing (NICE SG1)` : '') +
+              ` acknowledged. Reason: ${reason}`
             : ''),
         before: null,
         after: cells,

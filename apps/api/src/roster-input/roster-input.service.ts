@@ -31,6 +31,8 @@ export interface RosterInput {
   /** Active staff members in roster order (person ids are staff member ids). */
   staff: StaffMemberEntity[];
   shiftTypes: ShiftTypeEntity[];
+  /** The skills the staff hold or the cover needs require (with their names and registered flag). */
+  skills: SkillEntity[];
 }
 
 export type { RequestsAndAbsences } from './requests-mapping';
@@ -87,9 +89,8 @@ export class RosterInputService {
         ...coverNeeds.flatMap((n) => (n.skillId === null ? [] : [n.skillId])),
       ]),
     ];
-    const skillNames = Object.fromEntries(
-      (skillIds.length ? await m.findBy(SkillEntity, { id: In(skillIds) }) : []).map((k) => [k.id, k.code]),
-    );
+    const skills = skillIds.length ? await m.findBy(SkillEntity, { id: In(skillIds) }) : [];
+    const skillNames = Object.fromEntries(skills.map((k) => [k.id, k.code]));
 
     const personIds = new Set(staff.map((s) => s.id));
     const pins: Pin[] = (await m.findBy(AssignmentEntity, { rosterPeriodId: period.id, pinned: true }))
@@ -118,7 +119,7 @@ export class RosterInputService {
       weights,
       skillNames,
     };
-    return { period, unit, problem, dates, staff, shiftTypes };
+    return { period, unit, problem, dates, staff, shiftTypes, skills };
   }
 
   /**

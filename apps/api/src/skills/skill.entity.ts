@@ -20,4 +20,8 @@ export class SkillEntity {
 
   @Column({ type: 'varchar', length: 200 })
   name!: string;
+
+  /** A registered (licensed) professional skill: its shortfalls are checked for safe-staffing red flags. */
+  @Column({ type: 'boolean', default: false })
+  registered!: boolean;
 }

@@ -39,6 +39,7 @@ export class SkillsService {
       skill.code = body.code;
     }
     if (body.name !== undefined) skill.name = body.name;
+    if (body.registered !== undefined) skill.registered = body.registered;
     return toSkillDto(await this.skills.save(skill));
   }
 
@@ -96,5 +97,5 @@ export class SkillsService {
 }
 
 export function toSkillDto(s: SkillEntity): SkillDto {
-  return { id: s.id, code: s.code, name: s.name };
+  return { id: s.id, code: s.code, name: s.name, registered: s.registered };
 }

@@ -17,11 +17,17 @@ export interface SkillDto {
   /** Short code, upper case letters, digits, '-' or '_' (e.g. "RN", "FR"). Unique in the organisation. */
   code: string;
   name: string;
+  /**
+   * A registered (licensed) professional skill, such as registered nurse: its shortfalls are checked
+   * for the red flags of safe staffing (see safe-staffing.ts). Default false.
+   */
+  registered: boolean;
 }
 
 export interface CreateSkillRequest {
   code: string;
   name: string;
+  registered?: boolean;
 }
 export type UpdateSkillRequest = Partial<CreateSkillRequest>;
 

@@ -3,6 +3,7 @@
  * repairing a roster period, and the audit trail of changes to published rosters. Plain types
  * shared by the API and the web app.
  */
+import type { RedFlagDto } from './safe-staffing';
 import type { RosterViolationDto } from './solving';
 
 // ---------------------------------------------------------------- outbox
@@ -55,7 +56,10 @@ export interface AuditEntryDto {
 export interface PublishRequest {
   /** The period's version as last read (optimistic lock). */
   version: number;
-  /** Required (true) when any shift is below its minimum cover; then `reason` is required too. */
+  /**
+   * Required (true) when any shift is below its minimum cover (red flags of safe staffing among
+   * them); then `reason` is required too.
+   */
   acknowledgeBelowMinimum?: boolean;
   /** Why the roster is published below minimum cover; kept in the audit entry of the publish. */
   reason?: string;
@@ -102,6 +106,11 @@ export interface PublishCheckDto {
   /** Worked shifts on the roster (0: nothing to publish). */
   shifts: number;
   people: number;
+  /**
+   * Red flags of safe staffing on shifts needing a registered skill (NICE SG1 2014; see
+   * safe-staffing.ts), by date: shown first. Each is also below minimum cover.
+   */
+  redFlags: RedFlagDto[];
   belowMinimum: BelowMinimumShiftDto[];
   ruleFindings: RosterViolationDto[];
   unhonouredLeave: UnhonouredLeaveDto[];

@@ -1,4 +1,5 @@
 import type { OutsideOfferDto } from './open-shifts';
+import type { RedFlagDto } from './safe-staffing';
 
 /**
  * Swaps, give-aways and open-shift claims on a published roster, and the e-mailed decision links.
@@ -131,6 +132,11 @@ export interface OpenShiftDto {
   belowMinimum: number;
   /** Pending claims on this shift. */
   pendingClaims: number;
+  /**
+   * A red flag of safe staffing (NICE SG1 2014; see safe-staffing.ts) when the skill is registered and
+   * the shortfall, after people filled from outside the roster, is one; null or absent otherwise.
+   */
+  redFlag?: RedFlagDto | null;
   /**
    * Staff asking with `withBlocked=true` only: whether the caller may take this shift, and if not why,
    * in words (skill, already working, rest, hours, runs of days, weekends, leave). Absent otherwise.

@@ -13,6 +13,7 @@ import { UnitPublishLead1765713600000 } from './1765713600000-unit-publish-lead'
 import { Demand1765800000000 } from './1765800000000-demand';
 import { NoticeWindow1765972800000 } from './1765972800000-notice-window';
 import { OpenShiftOutsideOffers1765886400000 } from './1765886400000-open-shift-outside-offers';
+import { RegisteredSkills1766059200000 } from './1766059200000-registered-skills';
 
 /** Migrations in the order they run. Add new ones at the end; never edit one that has shipped. */
 export const MIGRATIONS = [
@@ -31,4 +32,5 @@ export const MIGRATIONS = [
   Demand1765800000000,
   OpenShiftOutsideOffers1765886400000,
   NoticeWindow1765972800000,
+  RegisteredSkills1766059200000,
 ];

@@ -10,6 +10,7 @@ import { Transform } from 'class-transformer';
 import { IsBoolean, IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
 import { IsIsoDate } from '../../common/decorators/is-iso-date.decorator';
 import { PageQueryDto } from '../../common/pagination';
+import { RedFlagResponse } from '../../common/red-flag.dto';
 import { OutsideOfferResponse } from './outside-offer.dto';
 
 /** page (from 1), pageSize (1 to MAX_PAGE_SIZE, default 20) and an optional period. */
@@ -100,6 +101,12 @@ class OpenShiftResponse implements OpenShiftDto {
     description: 'The current offer to bank or agency staff outside the roster (staff: its state only)',
   })
   outsideOffer?: OutsideOfferResponse | null;
+  @ApiPropertyOptional({
+    type: RedFlagResponse,
+    nullable: true,
+    description: 'A red flag of safe staffing (NICE SG1 2014) when the skill is registered',
+  })
+  redFlag?: RedFlagResponse | null;
 }
 
 export class OpenShiftPageResponse implements Page<OpenShiftDto> {

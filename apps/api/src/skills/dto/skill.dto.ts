@@ -6,7 +6,7 @@ import {
   type UpdateSkillRequest,
 } from '@rotaplex/contracts';
 import { Transform } from 'class-transformer';
-import { IsNotEmpty, IsString, Matches, MaxLength } from 'class-validator';
+import { IsBoolean, IsNotEmpty, IsOptional, IsString, Matches, MaxLength } from 'class-validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 const upperTrim = ({ value }: { value: unknown }) =>
@@ -25,6 +25,17 @@ export class CreateSkillDto implements CreateSkillRequest {
   @IsNotEmpty()
   @MaxLength(200)
   name!: string;
+
+  @ApiProperty({
+    required: false,
+    default: false,
+    description:
+      'A registered (licensed) professional skill, such as registered nurse: shortfalls of it are checked ' +
+      'for the red flags of safe staffing (NICE SG1 2014) on the board, in the publish check and on the home page',
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'registered must be true or false' })
+  registered?: boolean;
 }
 
 export class UpdateSkillDto extends PartialType(CreateSkillDto) implements UpdateSkillRequest {}
@@ -33,4 +44,5 @@ export class SkillResponse implements SkillDto {
   @ApiProperty({ format: 'uuid' }) id!: string;
   @ApiProperty() code!: string;
   @ApiProperty() name!: string;
+  @ApiProperty() registered!: boolean;
 }

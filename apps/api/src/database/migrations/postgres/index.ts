@@ -3,6 +3,7 @@ import { UnitPublishLead1765713600000 } from './1765713600000-unit-publish-lead'
 import { Demand1765800000000 } from './1765800000000-demand';
 import { OpenShiftOutsideOffers1765886400000 } from './1765886400000-open-shift-outside-offers';
 import { NoticeWindow1765972800000 } from './1765972800000-notice-window';
+import { RegisteredSkills1766059200000 } from './1766059200000-registered-skills';
 
 /**
  * PostgreSQL's migrations, in the order they run, written by TypeORM's schema diff against a real
@@ -17,6 +18,7 @@ export const POSTGRES_MIGRATIONS = [
   Demand1765800000000,
   OpenShiftOutsideOffers1765886400000,
   NoticeWindow1765972800000,
+  RegisteredSkills1766059200000,
 ];
 
 /** The SQLite migration that {@link PostgresBaseline1765540800000} catches up with. */
