@@ -63,6 +63,7 @@ export function SkillsPage() {
               <TableRow>
                 <TableHeaderCell>Code</TableHeaderCell>
                 <TableHeaderCell>Name</TableHeaderCell>
+                <TableHeaderCell>Registered</TableHeaderCell>
                 <TableHeaderCell className={styles.actionsCol}>
                   <span className="visually-hidden">Actions</span>
                 </TableHeaderCell>
@@ -73,6 +74,7 @@ export function SkillsPage() {
                 <TableRow key={s.id}>
                   <TableCell>{s.code}</TableCell>
                   <TableCell>{s.name}</TableCell>
+                  <TableCell>{s.registered ? 'Yes: checked for red flags' : 'No'}</TableCell>
                   <TableCell>
                     <RowActions
                       name={`${s.code} ${s.name}`}

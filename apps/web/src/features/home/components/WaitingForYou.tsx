@@ -12,6 +12,8 @@ import {
   type Page,
   PLANNING_ROUTES,
   PUBLISH_LEAD_DAYS_DEFAULT,
+  RED_FLAG_CAUTION,
+  RED_FLAG_SOURCE,
   type RosterPeriodDto,
 } from '@rotaplex/contracts';
 import { useQuery } from '@tanstack/react-query';
@@ -130,6 +132,21 @@ export function WaitingForYou() {
   const loading = queries.some((q) => q.isPending);
 
   const items: ReactNode[] = [];
+  // Red flags of safe staffing (NICE SG1) on published rosters come first: they can hurt someone.
+  const redFlags = (open.data?.items ?? []).flatMap((o) => (o.redFlag ? [o.redFlag] : []));
+  if (redFlags.length > 0) {
+    items.push(
+      <WaitingItem
+        key="red-flags"
+        to={PATHS.openShifts}
+        icon={<WarningRegular />}
+        urgent
+        badge="Red flag"
+        title={`${plural(redFlags.length, 'red flag', 'red flags')} of safe staffing on published rosters`}
+        detail={`Red flag (${RED_FLAG_SOURCE}): ${redFlags[0].text}${redFlags.length > 1 ? `; and ${redFlags.length - 1} more` : ''}. ${RED_FLAG_CAUTION}`}
+      />,
+    );
+  }
   const swapCount = swaps.data?.total ?? 0;
   if (swapCount > 0) {
     items.push(

@@ -3,6 +3,9 @@ import { Body1, Button, makeStyles, Subtitle2, tokens } from '@fluentui/react-co
 import {
   DATE_REQUEST_KIND_LABELS,
   type DateRequestKind,
+  RED_FLAG_CAUTION,
+  RED_FLAG_SOURCE,
+  type RedFlagDto,
   type ShiftTypeDto,
   type SkillDto,
   type SolveExplanationsDto,
@@ -24,6 +27,8 @@ export interface ExplanationsPanelProps {
   explanations: SolveExplanationsDto;
   /** The unmet needs graded against the board's cover, worst first. */
   graded: GradedNeed[];
+  /** Red flags of safe staffing on the board as it stands (NICE SG1), by date: listed first. */
+  redFlags: RedFlagDto[];
   shiftTypes: Map<string, ShiftTypeDto>;
   skills: Map<string, SkillDto>;
   staffNames: Map<string, string>;
@@ -58,6 +63,7 @@ const GROUPS: { severity: NeedSeverity[]; title: string; empty: string }[] = [
 export function ExplanationsPanel({
   explanations,
   graded,
+  redFlags,
   shiftTypes,
   skills,
   staffNames,
@@ -68,13 +74,33 @@ export function ExplanationsPanel({
   const cut = <T,>(items: T[]) => (all ? items : items.slice(0, SHOWN));
   const groups = GROUPS.map((g) => ({ ...g, items: graded.filter((n) => g.severity.includes(n.severity)) }));
   const requestsNotHonoured = cut(explanations.requestsNotHonoured);
+  const flags = cut(redFlags);
   const hidden =
+    redFlags.length -
+    flags.length +
     groups.reduce((sum, g) => sum + g.items.length - cut(g.items).length, 0) +
     (explanations.requestsNotHonoured.length - requestsNotHonoured.length);
   const kindText = (kind: string) =>
     DATE_REQUEST_KIND_LABELS[kind as DateRequestKind]?.toLowerCase() ?? 'request';
   return (
     <section className={styles.root} aria-label="Explanations">
+      {redFlags.length > 0 && (
+        <div>
+          <Subtitle2 as="h3" block className={styles.severe}>
+            Red flags of safe staffing ({redFlags.length})
+          </Subtitle2>
+          <ul className={styles.list} aria-label="Red flags">
+            {flags.map((f) => (
+              <li key={`${f.date}-${f.shiftTypeId}-${f.skillId}`}>
+                <span className={styles.severe}>Red flag ({RED_FLAG_SOURCE}):</span> {f.text}
+              </li>
+            ))}
+          </ul>
+          <Body1 as="p" block>
+            {RED_FLAG_CAUTION}
+          </Body1>
+        </div>
+      )}
       {conflicts && (
         <div>
           <Subtitle2 as="h3" block>

@@ -37,7 +37,7 @@ import {
 import { useSolveRun } from '../hooks/useSolveRun';
 import { coverLines, hoursAgainstContract } from '../utils/boardSummary';
 import { requestMarks } from '../utils/requestMarks';
-import { gradeUnmetNeeds, qualityLine } from '../utils/boardQuality';
+import { boardRedFlags, gradeUnmetNeeds, qualityLine } from '../utils/boardQuality';
 import { BoardGrid } from './BoardGrid';
 import { CellDialog } from './CellDialog';
 import { SolvePanel } from './SolvePanel';
@@ -153,6 +153,10 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
       result && grid.data ? gradeUnmetNeeds(result.explanations.unmetNeeds, cover, grid.data.dates) : [],
     [result, cover, grid.data],
   );
+  const redFlags = useMemo(
+    () => (grid.data ? boardRedFlags(cover, grid.data.dates) : []),
+    [cover, grid.data],
+  );
   const qualityText = useMemo(
     () => (result ? qualityLine({ result, hours, marks }) : null),
     [result, hours, marks],
@@ -174,6 +178,7 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
           staffNames={maps.names}
           draft={draft}
           graded={graded}
+          redFlags={redFlags}
           qualityText={qualityText}
         />
         <PublishControls period={period} solveActive={running} />

@@ -18,6 +18,9 @@ import {
 } from '@fluentui/react-components';
 import { DismissRegular, PlayRegular, StopRegular, TextBulletListLtrRegular } from '@fluentui/react-icons';
 import {
+  RED_FLAG_CAUTION,
+  RED_FLAG_SOURCE,
+  type RedFlagDto,
   SOLVE_TIME_LIMIT_MAX_SECONDS,
   SOLVE_TIME_LIMIT_MIN_SECONDS,
   type ShiftTypeDto,
@@ -65,13 +68,15 @@ export interface SolvePanelProps {
   draft: DraftContents;
   /** The last run's unmet needs graded against the board's cover, worst first. */
   graded: GradedNeed[];
+  /** Red flags of safe staffing on the board as it stands (NICE SG1), by date. */
+  redFlags: RedFlagDto[];
   /** The roster's quality in words (shortfalls, requests, hours, how much better is possible). */
   qualityText: string | null;
 }
 
 /** Generate with a time limit, the live progress of the run, Stop, and the result once it ends. */
 export function SolvePanel(props: SolvePanelProps) {
-  const { solve, readOnly, shiftTypes, skills, staffNames, draft, graded, qualityText } = props;
+  const { solve, readOnly, shiftTypes, skills, staffNames, draft, graded, redFlags, qualityText } = props;
   const styles = useStyles();
   const [details, setDetails] = useState(false);
   const [explaining, setExplaining] = useState(false);
@@ -211,6 +216,21 @@ export function SolvePanel(props: SolvePanelProps) {
           </MessageBarBody>
         </MessageBar>
       )}
+      {redFlags.length > 0 && !active && (
+        // A red flag of safe staffing is named where the roster is made, whether a solve or edits left it.
+        <MessageBar intent="error" layout="multiline" data-testid="red-flags">
+          <MessageBarBody>
+            <MessageBarTitle>
+              {redFlags.length === 1
+                ? 'Red flag of safe staffing'
+                : `${redFlags.length} red flags of safe staffing`}
+            </MessageBarTitle>
+            Red flag ({RED_FLAG_SOURCE}): {redFlags[0].text}
+            {redFlags.length > 1 ? `; and ${redFlags.length - 1} more (see Explanations).` : '.'}{' '}
+            {RED_FLAG_CAUTION}
+          </MessageBarBody>
+        </MessageBar>
+      )}
       {run?.result && !active && (
         <>
           {run.result.staffingStatement ? (
@@ -232,7 +252,8 @@ export function SolvePanel(props: SolvePanelProps) {
           </MessageBar>
           <div className={styles.quality}>
             <Button icon={<TextBulletListLtrRegular />} onClick={() => setExplaining(true)}>
-              Explanations ({graded.length + run.result.explanations.requestsNotHonoured.length})
+              Explanations (
+              {redFlags.length + graded.length + run.result.explanations.requestsNotHonoured.length})
             </Button>
             <Button appearance="subtle" aria-expanded={details} onClick={() => setDetails(!details)}>
               {details ? 'Hide the calculation details' : 'Show the calculation details'}
@@ -263,6 +284,7 @@ export function SolvePanel(props: SolvePanelProps) {
               <ExplanationsPanel
                 explanations={run.result.explanations}
                 graded={graded}
+                redFlags={redFlags}
                 shiftTypes={shiftTypes}
                 skills={skills}
                 staffNames={staffNames}

@@ -1,5 +1,5 @@
 import type { ShiftTypeDto, SkillDto, UnmetNeedExplanationDto } from '@rotaplex/contracts';
-import { gapPercent, gradeUnmetNeeds, qualityLine } from './boardQuality';
+import { boardRedFlags, gapPercent, gradeUnmetNeeds, qualityLine } from './boardQuality';
 import type { CoverLine, HoursLine } from './boardSummary';
 
 const night: ShiftTypeDto = {
@@ -122,5 +122,24 @@ describe('the quality line in words', () => {
     expect(gapPercent(0.12324)).toBe('12.3%');
     expect(gapPercent(0.1235)).toBe('12.4%');
     expect(gapPercent(0.5)).toBe('50%');
+  });
+});
+
+describe('red flags on the board (NICE SG1 2014 via PRODUCT.md: "fewer than 2 registered nurses on a shift")', () => {
+  it('flags the nights with fewer than 2 of a registered skill the board counts, by date', () => {
+    const registered = cover.map((l) => (l.skill ? { ...l, skill: { ...rn, registered: true } } : l));
+    const flags = boardRedFlags(registered, dates);
+    // 2 of 2 on the 4th is safe; 0 and 1 of 2 on the 5th and 6th: fewer than 2, 11.5 h and 23 h short
+    // (more than 8 h), 100% and 50% of the need (more than 25%).
+    expect(flags.map((f) => [f.date, f.onShift, f.shortHours, f.rules.length])).toEqual([
+      ['2027-01-05', 0, 23, 3],
+      ['2027-01-06', 1, 11.5, 3],
+    ]);
+    expect(flags[1].text).toMatch(/^Wed 6 Jan, Night: 1 of the 2 Registered nurse \(RN\) the shift needs/);
+  });
+
+  it('finds none when the skill is not marked registered', () => {
+    const unregistered = cover.map((l) => (l.skill ? { ...l, skill: { ...rn, registered: false } } : l));
+    expect(boardRedFlags(unregistered, dates)).toEqual([]);
   });
 });

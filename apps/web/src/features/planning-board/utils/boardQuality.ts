@@ -1,4 +1,10 @@
-import type { SolveRunResultDto, UnmetNeedExplanationDto } from '@rotaplex/contracts';
+import {
+  type RedFlagDto,
+  shiftRedFlags,
+  type SolveRunResultDto,
+  sortRedFlags,
+  type UnmetNeedExplanationDto,
+} from '@rotaplex/contracts';
 import type { CoverLine, HoursLine } from './boardSummary';
 import type { CellMarks } from './requestMarks';
 
@@ -45,6 +51,43 @@ export function gradeUnmetNeeds(
   return graded.sort(
     (a, b) => ORDER[a.severity] - ORDER[b.severity] || a.need.date.localeCompare(b.need.date),
   );
+}
+
+/**
+ * Red flags of safe staffing on the board as it stands (NICE SG1 2014; the rule and our reading of it
+ * are in contracts' safe-staffing.ts, shared with the publish check): every line of a registered skill,
+ * each date with a minimum, the people on the shift with the skill against that minimum. By date.
+ */
+export function boardRedFlags(cover: readonly CoverLine[], dates: readonly string[]): RedFlagDto[] {
+  const out: RedFlagDto[] = [];
+  for (const line of cover) {
+    const skill = line.skill;
+    if (!skill?.registered) continue;
+    line.days.forEach((day, i) => {
+      if (!day.need || day.need.min <= 0 || dates[i] === undefined) return;
+      out.push(
+        ...shiftRedFlags(
+          {
+            date: dates[i],
+            shiftTypeId: line.shiftType.id,
+            shiftCode: line.shiftType.code,
+            shiftName: line.shiftType.name,
+            paidMinutes: line.shiftType.paidMinutes,
+          },
+          [
+            {
+              skillId: skill.id,
+              skillCode: skill.code,
+              skillName: skill.name,
+              need: day.need.min,
+              onShift: day.count,
+            },
+          ],
+        ),
+      );
+    });
+  }
+  return sortRedFlags(out);
 }
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;

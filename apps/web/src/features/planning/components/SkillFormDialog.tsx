@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
+  Checkbox,
   Dialog,
   DialogBody,
   DialogContent,
@@ -28,7 +29,7 @@ const useStyles = makeStyles({
   },
 });
 
-const FIELDS = ['code', 'name'] as const;
+const FIELDS = ['code', 'name', 'registered'] as const;
 
 export interface SkillFormDialogProps {
   skill?: SkillDto;
@@ -41,11 +42,12 @@ export function SkillFormDialog({ skill, onClose }: SkillFormDialogProps) {
   const queryClient = useQueryClient();
   const [code, setCode] = useState(skill?.code ?? '');
   const [name, setName] = useState(skill?.name ?? '');
+  const [registered, setRegistered] = useState(skill?.registered ?? false);
   const [local, setLocal] = useState<Partial<Record<(typeof FIELDS)[number], string>>>({});
 
   const mutation = useMutation({
     mutationFn: () => {
-      const body = { code: code.trim().toUpperCase(), name: name.trim() };
+      const body = { code: code.trim().toUpperCase(), name: name.trim(), registered };
       return skill ? updateSkill(skill.id, body) : createSkill(body);
     },
     onSuccess: async (saved) => {
@@ -96,6 +98,20 @@ export function SkillFormDialog({ skill, onClose }: SkillFormDialogProps) {
                 validationState={error('name') ? 'error' : 'none'}
               >
                 <Input value={name} autoComplete="off" onChange={(_, d) => setName(d.value)} />
+              </Field>
+              <Field
+                hint={
+                  'Shifts that need this skill are checked for the red flags of safe staffing (NICE SG1): ' +
+                  'fewer than 2 on a shift that needs 2 or more, or a shortfall of more than 8 hours or 25%.'
+                }
+                validationMessage={error('registered')}
+                validationState={error('registered') ? 'error' : 'none'}
+              >
+                <Checkbox
+                  checked={registered}
+                  onChange={(_, d) => setRegistered(d.checked === true)}
+                  label="Registered (licensed) professional skill, such as registered nurse"
+                />
               </Field>
             </DialogContent>
             <FormDialogActions

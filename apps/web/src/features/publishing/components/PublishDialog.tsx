@@ -26,6 +26,8 @@ import {
   GUARD_RAIL_DEFERRAL,
   PUBLISH_REASON_MAX_LENGTH,
   type PublishCheckDto,
+  RED_FLAG_CAUTION,
+  RED_FLAG_SOURCE,
   type RosterPeriodDto,
 } from '@rotaplex/contracts';
 import { formatDay } from '@/features/planning-board/utils/days';
@@ -87,8 +89,10 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
   const blocked = !c || c.blockers.length > 0;
   const needsAck = c?.needsAcknowledgement ?? false;
   const ready = !blocked && (!needsAck || (acknowledged && reason.trim() !== ''));
+  const flags = c?.redFlags ?? [];
   const clean =
     c &&
+    flags.length === 0 &&
     c.belowMinimum.length === 0 &&
     c.ruleFindings.length === 0 &&
     c.unhonouredLeave.length === 0 &&
@@ -119,6 +123,32 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
                 their own shifts by e-mail. After publishing, the board is read-only: changes go through
                 repair or a swap.
               </Body1>
+            )}
+            {flags.length > 0 && (
+              // Red flags of safe staffing come first: the most serious shortfalls, named as the trade names them.
+              <MessageBar
+                intent="error"
+                layout="multiline"
+                className={styles.bar}
+                data-testid="publish-red-flags"
+              >
+                <MessageBarBody>
+                  <MessageBarTitle>
+                    {flags.length === 1 ? '1 red flag' : `${flags.length} red flags`} of safe staffing
+                  </MessageBarTitle>
+                  <ul className={styles.list} aria-label="Red flags">
+                    {(all ? flags : flags.slice(0, SHOWN)).map((f) => (
+                      <li key={`${f.date}-${f.shiftTypeId}-${f.skillId}`}>
+                        Red flag ({RED_FLAG_SOURCE}): {f.text}
+                      </li>
+                    ))}
+                    {!all && flags.length > SHOWN && (
+                      <li>and {flags.length - SHOWN} more (Show all below).</li>
+                    )}
+                  </ul>
+                  <p className={styles.reasons}>{RED_FLAG_CAUTION}</p>
+                </MessageBarBody>
+              </MessageBar>
             )}
             {c && c.lateNotice && (
               <MessageBar
@@ -163,7 +193,7 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
                     </li>
                   ))}
                 </ul>
-                {c.belowMinimum.length > SHOWN && (
+                {(c.belowMinimum.length > SHOWN || flags.length > SHOWN) && (
                   <div>
                     <Button size="small" onClick={() => setAll(!all)}>
                       {all ? 'Show fewer' : `Show all ${c.belowMinimum.length}`}
@@ -220,7 +250,11 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
                 <Checkbox
                   checked={acknowledged}
                   onChange={(_, d) => setAcknowledged(d.checked === true)}
-                  label="I have read the shifts below minimum cover and publish the roster as it is"
+                  label={
+                    flags.length > 0
+                      ? 'I have read the shifts below minimum cover, red flags among them, and publish the roster as it is'
+                      : 'I have read the shifts below minimum cover and publish the roster as it is'
+                  }
                   disabled={pending}
                 />
                 <Field
