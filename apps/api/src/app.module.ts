@@ -30,7 +30,7 @@ import { RosterPeriodsModule } from './roster-periods/roster-periods.module';
 import { SolveRunsModule } from './solve-runs/solve-runs.module';
 import { AssignmentsModule } from './assignments/assignments.module';
 import { ReportsModule } from './reports/reports.module';
-import { OutboxModule } from './outbox/outbox.module';
+import { OutboxModule } from './mail/outbox/outbox.module';
 import { AuditModule } from './audit/audit.module';
 import { PublishingModule } from './publishing/publishing.module';
 import { MyRosterModule } from './my-roster/my-roster.module';

@@ -10,7 +10,7 @@ import {
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { addDays } from '../src/common/dates';
-import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
+import { OutboxDeliveryService } from '../src/mail/outbox/outbox-delivery.service';
 import { caughtMails } from './support/mailbox';
 import {
   createPeriod,

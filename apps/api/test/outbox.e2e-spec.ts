@@ -5,9 +5,9 @@ import { testsOnPostgres } from '../src/database/postgres-cluster';
 import { MailBodyCipher, outboxBodyContext } from '../src/mail/mail-body-cipher';
 import { MailCatcherService } from '../src/mail/mail-catcher.service';
 import { MailService } from '../src/mail/mail.service';
-import { OutboxDeliveryService, SENDING_LEASE_MS } from '../src/outbox/outbox-delivery.service';
-import { OutboxMessageEntity } from '../src/outbox/outbox-message.entity';
-import { OutboxRetentionService } from '../src/outbox/outbox-retention.service';
+import { OutboxDeliveryService, SENDING_LEASE_MS } from '../src/mail/outbox/outbox-delivery.service';
+import { OutboxMessageEntity } from '../src/mail/outbox/outbox-message.entity';
+import { OutboxRetentionService } from '../src/mail/outbox/outbox-retention.service';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 
 /** Polls until `check` returns a value other than undefined (the outbox delivers in the background). */

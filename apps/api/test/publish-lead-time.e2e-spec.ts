@@ -8,7 +8,7 @@ import {
   type UnitDto,
 } from '@rotaplex/contracts';
 import { addDays, localDate } from '../src/common/dates';
-import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
+import { OutboxDeliveryService } from '../src/mail/outbox/outbox-delivery.service';
 import { caughtMails } from './support/mailbox';
 import { smallUnit } from './publishing-fixture';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';

@@ -11,7 +11,7 @@ import { sha256 } from '../src/common/crypto';
 import { loadConfig, resolveJwtSecret } from '../src/config/app-config';
 import { databaseFiles } from '../src/database/data-files';
 import { FIRST_ADMIN_LINK_FILE } from '../src/demo/first-run.service';
-import { OutboxDeliveryService } from '../src/outbox/outbox-delivery.service';
+import { OutboxDeliveryService } from '../src/mail/outbox/outbox-delivery.service';
 import { caughtMails, linkToken, nextMailTo } from './support/mailbox';
 import {
   createPeriod,

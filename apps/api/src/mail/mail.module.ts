@@ -1,7 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { OutboxDeliveryService } from '../outbox/outbox-delivery.service';
-import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
+import { OutboxDeliveryService } from './outbox/outbox-delivery.service';
+import { OutboxMessageEntity } from './outbox/outbox-message.entity';
 import { MailBodyCipher } from './mail-body-cipher';
 import { MailCatcherService } from './mail-catcher.service';
 import { MailMessageEntity } from './mail-message.entity';

@@ -2,8 +2,8 @@ import { BadRequestException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager } from 'typeorm';
-import { OutboxMessageEntity } from '../outbox/outbox-message.entity';
-import { OutboxDeliveryService } from '../outbox/outbox-delivery.service';
+import { OutboxMessageEntity } from './outbox/outbox-message.entity';
+import { OutboxDeliveryService } from './outbox/outbox-delivery.service';
 import { MailBodyCipher, outboxBodyContext } from './mail-body-cipher';
 
 export interface OutgoingMail {

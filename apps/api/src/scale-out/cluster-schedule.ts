@@ -3,7 +3,7 @@ import { ModuleRef } from '@nestjs/core';
 import { SchedulerRegistry } from '@nestjs/schedule';
 import { Queue, Worker } from 'bullmq';
 import { type Redis } from 'ioredis';
-import { OutboxRetentionService } from '../outbox/outbox-retention.service';
+import { OutboxRetentionService } from '../mail/outbox/outbox-retention.service';
 import { MAINTENANCE_QUEUE } from '../solve-runs/solve-queue-protocol';
 import { SwapExpiryService } from '../swaps/swap-expiry.service';
 import { redisConnection, RedisConnections } from './redis-connections';

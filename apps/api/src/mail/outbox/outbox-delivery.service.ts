@@ -2,10 +2,10 @@ import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy }
 import { InjectRepository } from '@nestjs/typeorm';
 import { createTransport, type Transporter } from 'nodemailer';
 import { type EntityManager, Like, Not, type QueryRunner, Repository } from 'typeorm';
-import { sqliteUtc } from '../common/dates';
-import { AppConfig, type OutboxSettings } from '../config/app-config';
-import { MailBodyCipher, outboxBodyContext, SEALED_PREFIX } from '../mail/mail-body-cipher';
-import { MailCatcherService } from '../mail/mail-catcher.service';
+import { sqliteUtc } from '../../common/dates';
+import { AppConfig, type OutboxSettings } from '../../config/app-config';
+import { MailBodyCipher, outboxBodyContext, SEALED_PREFIX } from '../mail-body-cipher';
+import { MailCatcherService } from '../mail-catcher.service';
 import { OutboxMessageEntity } from './outbox-message.entity';
 import { backoffDelayMs } from './outbox-settings';
 

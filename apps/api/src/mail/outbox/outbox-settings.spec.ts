@@ -1,4 +1,4 @@
-import { ConfigValidationError, loadConfig } from '../config/app-config';
+import { ConfigValidationError, loadConfig } from '../../config/app-config';
 import { backoffDelayMs } from './outbox-settings';
 
 describe('outbox settings and backoff', () => {

@@ -8,14 +8,14 @@ import {
   Post,
   Query,
 } from '@nestjs/common';
-import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { ParseIdPipe } from '../../common/pipes/parse-id.pipe';
 import { ApiOkResponse, ApiProperty, ApiPropertyOptional, ApiTags } from '@nestjs/swagger';
 import { InjectRepository } from '@nestjs/typeorm';
 import { OUTBOX_STATUSES, type OutboxMessageDto, type OutboxStatus, type Page } from '@rotaplex/contracts';
 import { IsIn, IsOptional } from 'class-validator';
 import { Repository } from 'typeorm';
-import { RequirePermissions } from '../common/decorators/access.decorator';
-import { likePattern, PageQueryDto, toPage } from '../common/pagination';
+import { RequirePermissions } from '../../common/decorators/access.decorator';
+import { likePattern, PageQueryDto, toPage } from '../../common/pagination';
 import { OutboxDeliveryService } from './outbox-delivery.service';
 import { OutboxMessageEntity } from './outbox-message.entity';
 

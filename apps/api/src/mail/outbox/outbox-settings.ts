@@ -1,4 +1,4 @@
-import type { OutboxSettings } from '../config/app-config';
+import type { OutboxSettings } from '../../config/app-config';
 
 /**
  * Wait after the n-th failed attempt (n = 1, 2, ...): base, 2 x base, 4 x base, ... capped at the

@@ -2,8 +2,8 @@ import { Injectable, Logger } from '@nestjs/common';
 import { Cron, CronExpression } from '@nestjs/schedule';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
-import { AppConfig } from '../config/app-config';
-import { sqliteUtc } from '../common/dates';
+import { AppConfig } from '../../config/app-config';
+import { sqliteUtc } from '../../common/dates';
 import { OutboxMessageEntity } from './outbox-message.entity';
 
 /**
