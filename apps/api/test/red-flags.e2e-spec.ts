@@ -131,7 +131,7 @@ describe('red flags of safe staffing in the publish check and the publish guard'
       rules: ['fewerThanTwo', 'shortfallHours', 'shortfallShare'],
     });
     expect(flag.text).toBe(
-      'Mon 5 May, Night: 1 of the 2 Registered nurse (MRN) the shift needs (fewer than 2 on the shift; ' +
+      'Mon 5 May, Night, Registered nurse (MRN): 1 on the shift of 2 needed (fewer than 2 on the shift; ' +
         '11.5 h short, more than 8 h; 50% of the need short, more than 25%)',
     );
     expect(c.belowMinimum).toHaveLength(1);
@@ -141,7 +141,7 @@ describe('red flags of safe staffing in the publish check and the publish guard'
   it('refuses to publish with a red flag unless acknowledged with a reason, and keeps the reason', async () => {
     const refused = await publish({ version: period.version }).expect(422);
     expect(refused.body.message).toMatch(
-      /^1 red flag of safe staffing \(NICE SG1; first: Mon 5 May, Night: 1 of the 2/,
+      /^1 red flag of safe staffing \(NICE SG1; first: Mon 5 May, Night, Registered nurse \(MRN\): 1 on the shift of 2/,
     );
     expect(refused.body.message).toMatch(/acknowledgeBelowMinimum/);
     await publish({ version: period.version, acknowledgeBelowMinimum: true }).expect(400);

@@ -1,7 +1,10 @@
 import {
   type CoverOverrideDto,
+  type Page as PageOf,
   PLANNING_ROUTES as P,
   type RosterPeriodDto,
+  type SkillDto,
+  type StaffMemberDto,
   type UnitDto,
 } from '@rotaplex/contracts';
 import { apiCall, managerPeriod, shiftIdsByCode } from './support/api';
@@ -23,6 +26,10 @@ import {
 // Issue 10, item 2: the publish dialog shows the publish check first. An empty week cannot be
 // published; the Monday Early of this week needs 40 people (a date override, more than the ward has),
 // so no roster meets it and publishing needs an acknowledgement with a written reason.
+// Issue 10, item 1: red flags of safe staffing (NICE SG1 2014 as quoted in PRODUCT.md: "a
+// registered-nurse shortfall of more than 8 hours"). The Monday night of this week needs one registered
+// nurse more than the ward has (a date override), so whatever the solver does at least 1 is short, and
+// 1 x the night's 9 paid hours is more than 8 h: the board and the publish dialog name the red flag.
 describe('publishing a roster as the demo manager', () => {
   const START = '2024-09-02'; // a Monday
   const SUBJECT = 'Your roster for Ward 7 Acute Medicine, Mon 2 Sep 2024 to Sun 8 Sep 2024';
@@ -31,6 +38,7 @@ describe('publishing a roster as the demo manager', () => {
   let period: RosterPeriodDto;
   let ward: UnitDto;
   let override: CoverOverrideDto | undefined;
+  let nightOverride: CoverOverrideDto | undefined;
   let browser: Session;
 
   beforeAll(async () => {
@@ -43,14 +51,31 @@ describe('publishing a roster as the demo manager', () => {
       min: 40,
       target: 40,
     });
+    // The demo marks its "Registered nurse" skill registered, so its shortfalls are checked for red flags.
+    const rn = (await apiCall<SkillDto[]>(token, 'GET', P.skills)).find((s) => s.code === 'RN')!;
+    expect(rn.registered).toBe(true);
+    const staff = await apiCall<PageOf<StaffMemberDto>>(
+      token,
+      'GET',
+      `${P.staff}?unitId=${ward.id}&pageSize=100`,
+    );
+    const nurses = staff.items.filter((s) => s.skills.includes('RN')).length;
+    nightOverride = await apiCall<CoverOverrideDto>(token, 'POST', P.coverOverrides(ward.id), {
+      date: START,
+      shiftTypeId: shift.N,
+      skillId: rn.id,
+      min: nurses + 1,
+      target: nurses + 1,
+    });
     browser = await openBrowser();
     await signIn(browser.page, 'manager@example.com');
   });
   afterAll(async () => {
     await browser?.close();
     if (period) await apiCall(token, 'POST', P.rosterPeriodArchive(period.id)).catch(() => undefined);
-    if (override)
-      await apiCall(token, 'DELETE', P.coverOverride(ward.id, override.id)).catch(() => undefined);
+    for (const o of [override, nightOverride]) {
+      if (o) await apiCall(token, 'DELETE', P.coverOverride(ward.id, o.id)).catch(() => undefined);
+    }
   });
 
   it('does not publish the empty week, and says why', async () => {
@@ -75,6 +100,44 @@ describe('publishing a roster as the demo manager', () => {
     await pressGenerate(page);
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });
     expect(await page.getByRole('button', { name: 'Publish' }).isEnabled()).toBe(true);
+    // The board names the red flag of the Monday night, with the guideline's scope and the usual advice.
+    const flags = page.getByTestId('red-flags');
+    expect(await flags.innerText()).toMatch(
+      /red flags? of safe staffing[\s\S]*Red flag \(NICE safe-staffing guideline SG1\): /i,
+    );
+    expect(await flags.innerText()).toMatch(/adult inpatient wards in England; local policy/);
+    expect(await flags.innerText()).toMatch(/ask for bank or agency staff and escalate/);
+    await screenshot(page, 'red-flag-board', { fullPage: false });
+    // The explanations list every red flag first, the Monday night among them.
+    await page.getByRole('button', { name: /^Explanations \(\d+\)$/ }).click();
+    const list = page.getByRole('list', { name: 'Red flags' });
+    await list
+      .getByRole('listitem')
+      .filter({
+        hasText:
+          /^Red flag \(NICE safe-staffing guideline SG1\): Mon 2 Sept?, Night, Registered nurse \(RN\): \d+ on the shift of \d+ needed \(.*more than 8 h/,
+      })
+      .waitFor();
+    // The drawer slides in: let its animations end before the pictures.
+    const settled = () =>
+      page.evaluate(() =>
+        Promise.all(
+          document
+            .getAnimations()
+            .filter((a) => a.effect?.getTiming().iterations !== Infinity)
+            .map((a) => a.finished.catch(() => undefined)),
+        ),
+      );
+    await settled();
+    await screenshot(page, 'red-flag-explanations', { fullPage: false });
+    await page.setViewportSize({ width: 390, height: 844 });
+    await settled();
+    await screenshot(page, 'red-flag-explanations-390', { fullPage: false });
+    await page.getByRole('button', { name: 'Close the explanations' }).click();
+    await list.waitFor({ state: 'detached' });
+    await flags.scrollIntoViewIfNeeded();
+    await screenshot(page, 'red-flag-board-390', { fullPage: false });
+    await page.setViewportSize({ width: 1360, height: 860 });
   }, 150_000);
 
   it('pins a generated cell; the board reads the period again, so the publish below sends its new version', async () => {
@@ -102,6 +165,12 @@ describe('publishing a roster as the demo manager', () => {
     const dialog = page.getByRole('alertdialog', { name: 'Publish this roster?' });
     await dialog.waitFor();
     await dialog.getByText(/gets their own shifts by e-mail/).waitFor();
+    // Red flags of safe staffing first (NICE SG1 2014 via PRODUCT.md), with the caution and the advice.
+    const redFlags = dialog.getByTestId('publish-red-flags');
+    expect(await redFlags.innerText()).toMatch(
+      /^\d+ red flags? of safe staffing \(NICE safe-staffing guideline SG1\)[\s\S]*Mon 2 Sept?, Night, Registered nurse \(RN\): \d+ on the shift of \d+ needed/,
+    );
+    expect(await redFlags.innerText()).toMatch(/adult inpatient wards in England; local policy/);
     // Issue 10, item 7: the week began long ago, so the dialog says first that the notice is late
     // (the unit's publish lead time; 6 weeks by default, Drake, J Adv Nurs 2018;74(8):1831-38).
     const late = dialog.getByTestId('publish-late-notice');
@@ -127,6 +196,8 @@ describe('publishing a roster as the demo manager', () => {
     expect(await unnamedControls(page)).toEqual([]);
     // What the window shows: the top of the check, then the acknowledgement (desktop and 390 px).
     const views = async (suffix: string) => {
+      await redFlags.evaluate((el) => el.scrollIntoView({ block: 'start' }));
+      await screenshot(page, `red-flag-publish${suffix}`, { fullPage: false });
       await late.scrollIntoViewIfNeeded();
       await screenshot(page, `publish-late-notice${suffix}`, { fullPage: false });
       await short.getByRole('heading').scrollIntoViewIfNeeded();

@@ -63,7 +63,7 @@ describe('safe-staffing red flags (NICE SG1 2014 via PRODUCT.md)', () => {
     expect(flag.shortHours).toBe(11.5);
     expect(flag.shortShare).toBe(0.5);
     expect(flag.text).toBe(
-      'Sat 9 Jan, Night: 1 of the 2 Registered nurse (RN) the shift needs (fewer than 2 on the shift; ' +
+      'Sat 9 Jan, Night, Registered nurse (RN): 1 on the shift of 2 needed (fewer than 2 on the shift; ' +
         '11.5 h short, more than 8 h; 50% of the need short, more than 25%)',
     );
   });

@@ -78,7 +78,7 @@ export interface RedFlagDto {
   /** People short over the need (0-1). */
   shortShare: number;
   rules: RedFlagRule[];
-  /** The red flag in words, e.g. "Sat 9 Jan, Night: 1 Registered nurse on a shift that needs 2 …". */
+  /** The red flag in words, e.g. "Sat 9 Jan, Night, Registered nurse (RN): 1 on the shift of 2 needed (…)". */
   text: string;
 }
 
@@ -138,8 +138,8 @@ export function shiftRedFlags(shift: RedFlagShift, covers: readonly RegisteredSk
       shortShare,
       rules,
       text:
-        `${day}, ${shift.shiftName}: ${c.onShift} of the ${c.need} ${c.skillName} (${c.skillCode}) ` +
-        `the shift needs (${words.join('; ')})`,
+        `${day}, ${shift.shiftName}, ${c.skillName} (${c.skillCode}): ${c.onShift} on the shift of ` +
+        `${c.need} needed (${words.join('; ')})`,
     });
   }
   return out;

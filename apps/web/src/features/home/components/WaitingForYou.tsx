@@ -132,8 +132,9 @@ export function WaitingForYou() {
   const loading = queries.some((q) => q.isPending);
 
   const items: ReactNode[] = [];
-  // Red flags of safe staffing (NICE SG1) on published rosters come first: they can hurt someone.
-  const redFlags = (open.data?.items ?? []).flatMap((o) => (o.redFlag ? [o.redFlag] : []));
+  // Red flags of safe staffing (NICE SG1) on published rosters come first for those who plan: they can
+  // hurt someone, and the planner is the one who books bank or agency staff and escalates.
+  const redFlags = canPlan ? (open.data?.items ?? []).flatMap((o) => (o.redFlag ? [o.redFlag] : [])) : [];
   if (redFlags.length > 0) {
     items.push(
       <WaitingItem

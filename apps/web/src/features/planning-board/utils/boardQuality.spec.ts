@@ -135,7 +135,7 @@ describe('red flags on the board (NICE SG1 2014 via PRODUCT.md: "fewer than 2 re
       ['2027-01-05', 0, 23, 3],
       ['2027-01-06', 1, 11.5, 3],
     ]);
-    expect(flags[1].text).toMatch(/^Wed 6 Jan, Night: 1 of the 2 Registered nurse \(RN\) the shift needs/);
+    expect(flags[1].text).toMatch(/^Wed 6 Jan, Night, Registered nurse \(RN\): 1 on the shift of 2 needed/);
   });
 
   it('finds none when the skill is not marked registered', () => {

@@ -134,13 +134,12 @@ export function PublishDialog({ period, pending, error, onPublish, onCancel }: P
               >
                 <MessageBarBody>
                   <MessageBarTitle>
-                    {flags.length === 1 ? '1 red flag' : `${flags.length} red flags`} of safe staffing
+                    {flags.length === 1 ? '1 red flag' : `${flags.length} red flags`} of safe staffing (
+                    {RED_FLAG_SOURCE})
                   </MessageBarTitle>
                   <ul className={styles.list} aria-label="Red flags">
                     {(all ? flags : flags.slice(0, SHOWN)).map((f) => (
-                      <li key={`${f.date}-${f.shiftTypeId}-${f.skillId}`}>
-                        Red flag ({RED_FLAG_SOURCE}): {f.text}
-                      </li>
+                      <li key={`${f.date}-${f.shiftTypeId}-${f.skillId}`}>{f.text}</li>
                     ))}
                     {!all && flags.length > SHOWN && (
                       <li>and {flags.length - SHOWN} more (Show all below).</li>
