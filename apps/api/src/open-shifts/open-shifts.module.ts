@@ -2,13 +2,20 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
+import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
 import { SwapsModule } from '../swaps/swaps.module';
 import { OpenShiftsController } from './open-shifts.controller';
 import { OpenShiftsService } from './open-shifts.service';
 import { OutsideOfferEntity } from './outside-offer.entity';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([OutsideOfferEntity]), SwapsModule, RosterInputModule, MailModule],
+  imports: [
+    TypeOrmModule.forFeature([OutsideOfferEntity]),
+    SwapsModule,
+    RosterInputModule,
+    RosterPeriodsModule,
+    MailModule,
+  ],
   controllers: [OpenShiftsController],
   providers: [OpenShiftsService],
 })

@@ -19,11 +19,12 @@ import {
   type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
 import { DataSource, type EntityManager, In } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { addDays, localDate } from '../common/dates';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { SkillEntity } from '../skills/skill.entity';
@@ -121,11 +122,12 @@ export class OpenShiftsService implements OnModuleInit {
     private readonly swaps: SwapsService,
     private readonly mail: MailService,
     private readonly config: AppConfig,
+    private readonly cells: PeriodWriter,
     audit: AuditService,
     writes: WriteGeneration,
   ) {
     this.cache = new GenerationCache(writes, { maxEntries: 32 });
-    this.outside = new OutsideOffers(input, audit, unmetNeeds);
+    this.outside = new OutsideOffers(input, audit, cells, unmetNeeds);
   }
 
   /** Approving a claim counts the people filling its shift from outside the roster (see filledOutside). */
@@ -204,7 +206,7 @@ export class OpenShiftsService implements OnModuleInit {
   private async compute(periodId: string, today: string): Promise<PeriodOpenShifts> {
     const m = this.dataSource.manager;
     const input = await this.input.load(periodId);
-    const rows = await m.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const rows = await this.cells.rowsOf(periodId, m);
     const pending = await m.findBy(SwapRequestEntity, {
       rosterPeriodId: periodId,
       kind: 'claim',
@@ -429,7 +431,7 @@ export class OpenShiftsService implements OnModuleInit {
         );
       }
       const me = this.swaps.staffOf(user, input);
-      const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: input.period.id });
+      const rows = await this.cells.rowsOf(input.period.id, em);
       const today = localDate(new Date(), input.unit.timeZone);
       const offers = await currentOffers(em, input.period.id);
       const need = lessFilledOutside(unmetNeeds(input, rows, today), offers).find(

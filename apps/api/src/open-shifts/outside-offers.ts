@@ -2,12 +2,13 @@ import { BadRequestException, ConflictException, NotFoundException } from '@nest
 import { type OutsideOfferDto } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { type EntityManager, In } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../assignments/assignment.entity';
 import { type AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';
 import { dateInWords } from '../common/text/date-words';
 import { assertUnitAccess } from '../common/unit-scope';
+import { type PeriodWriter } from '../roster-periods/period-writer';
 import { type RosterInput, type RosterInputService } from '../roster-input/roster-input.service';
 import { SkillEntity } from '../skills/skill.entity';
 import { UserEntity } from '../users/user.entity';
@@ -90,6 +91,7 @@ export class OutsideOffers {
   constructor(
     private readonly input: RosterInputService,
     private readonly audit: AuditService,
+    private readonly cells: PeriodWriter,
     private readonly unmetNeeds: UnmetNeeds,
   ) {}
 
@@ -213,7 +215,7 @@ export class OutsideOffers {
 
   /** The need as open now (from today in the unit's zone, less outside fills), or 409. */
   private async openNeed(em: EntityManager, input: RosterInput, key: NeedKey) {
-    const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: input.period.id });
+    const rows = await this.cells.rowsOf(input.period.id, em);
     const today = localDate(new Date(), input.unit.timeZone);
     const offers = await currentOffers(em, input.period.id);
     const need = lessFilledOutside(this.unmetNeeds(input, rows, today), offers).find((n) => sameNeed(n, key));
