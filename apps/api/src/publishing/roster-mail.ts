@@ -1,6 +1,7 @@
 import { TZDate } from '@date-fns/tz';
 import { shiftInterval } from '@rotaplex/roster-model';
 import { format } from 'date-fns';
+import { addDays } from '../common/dates';
 import { dateRangeInWords } from '../common/text/date-words';
 import { escapeHtml, type MailContent } from '../mail/templates';
 
@@ -51,9 +52,7 @@ export function formatShiftTimes(
 
 /** The e-mail telling one person their own shifts of a period (no one else's data). */
 export function rosterMail(p: RosterMailInput): MailContent {
-  const last = new Date(`${p.startDate}T00:00:00Z`);
-  last.setUTCDate(last.getUTCDate() + p.days - 1);
-  const range = dateRangeInWords(p.startDate, last.toISOString().slice(0, 10));
+  const range = dateRangeInWords(p.startDate, addDays(p.startDate, p.days - 1));
   const subject =
     p.kind === 'published'
       ? `Your roster for ${p.unitName}, ${range}`

@@ -15,6 +15,7 @@ import { PAYROLL_CSV_COLUMNS } from '@rotaplex/contracts';
 import { ProblemIndex, type Roster, type RosterProblem } from '@rotaplex/roster-model';
 import { stringify } from 'csv-stringify/sync';
 import { neutraliseCell } from '../common/csv';
+import { addDays } from '../common/dates';
 import { cents } from './period-figures';
 
 export interface PayrollSource {
@@ -22,13 +23,6 @@ export interface PayrollSource {
   roster: Roster;
   dates: string[];
   shiftCodes: Record<string, string>;
-}
-
-/** "YYYY-MM-DD" plus n days. */
-function nextDate(date: string, n: number): string {
-  const d = new Date(`${date}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() + n);
-  return d.toISOString().slice(0, 10);
 }
 
 /** The data rows (no header), people in the problem's order, shifts by date. */
@@ -43,7 +37,7 @@ export function payrollRows(source: PayrollSource): (string | number)[][] {
       if (s < 0) return;
       const shift = problem.shiftTypes[s];
       // A shift whose end is not after its start ends the next day (the roster model's convention).
-      const endDate = shift.end <= shift.start ? nextDate(dates[d], 1) : dates[d];
+      const endDate = shift.end <= shift.start ? addDays(dates[d], 1) : dates[d];
       const paid = index.paid[s];
       const rate = person.hourlyCost;
       rows.push([
