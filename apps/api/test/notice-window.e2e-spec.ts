@@ -14,6 +14,7 @@ import {
 } from '@rotaplex/contracts';
 import { AssignmentEntity } from '../src/assignments/assignment.entity';
 import { addDays, localDate } from '../src/common/dates';
+import { dateInWords } from '../src/common/text/date-words';
 import { LeaveRequestEntity } from '../src/requests/requests.entities';
 import { caughtMails } from './support/mailbox';
 import { generate, outboxSettled, smallUnit, waitForRun } from './publishing-fixture';
@@ -328,5 +329,34 @@ describe('changes inside the notice window', () => {
     expect(byPerson('b')).toMatchObject({ kind: 'swap', initiatedBy: 'employee', payHours: null });
     expect(byPerson('b')?.reason).toMatch(/Asked for by the person/);
     expect(late.owed).toEqual([]);
+
+    // The approval's audit entry counts both late changes as asked for by the person, with no pay.
+    const trail = (
+      await t
+        .http()
+        .get(api(PUB.audit(period.id)))
+        .set(bearer(manager))
+        .query({ order: 'desc' })
+        .expect(200)
+    ).body as Page<AuditEntryDto>;
+    expect(trail.items[0]).toMatchObject({ kind: 'swap' });
+    expect(trail.items[0].summary).toMatch(
+      /^Shift given away: .*; 2 changes are inside the 14-day notice window \(2 asked for by the person, commonly exempt\)$/,
+    );
+    expect(trail.items[0].summary).not.toMatch(/predictability pay recorded/);
+    // Each person's mail and the approving manager's note say it is a late change the staff asked for.
+    await outboxSettled(t);
+    const mails = await caughtMails(t);
+    const newest = (to: string, subject: RegExp) =>
+      mails.filter((m) => m.to.includes(to) && subject.test(m.subject)).at(-1)?.text ?? '';
+    const day = dateInWords(date);
+    for (const p of ['a', 'b'] as const) {
+      const text = newest(WARD_PEOPLE[p], /^Your roster has changed$/);
+      expect(text).toContain(`This is a late change: ${day} is less than 14 days away.`);
+      expect(text).toContain('You asked for or agreed to this change');
+    }
+    expect(newest('manager@example.com', /^You approved a roster change$/)).toContain(
+      `This is a late change: ${day} is less than 14 days away. The staff asked for it`,
+    );
   });
 });

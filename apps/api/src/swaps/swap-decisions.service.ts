@@ -22,6 +22,7 @@ import { type AuthUser } from '../common/auth-user';
 import { canAccessUnit } from '../common/unit-scope';
 import { dateInWords } from '../common/text/date-words';
 import { type OutgoingMail } from '../mail/mail.service';
+import { lateChangesOf, lateSummary } from '../roster-periods/notice-window';
 import { PeriodWriter } from '../roster-periods/period-writer';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { StaffService } from '../staff/staff.service';
@@ -31,7 +32,7 @@ import { EXPIRED_OUTCOME, expiredMessage, isOverdue } from './swap-expiry.servic
 import { type OutsideCover } from './outside-cover';
 import { SwapLinks } from './swap-links';
 import { SwapMailer } from './swap-mailer';
-import { newMessages, staffName, summary } from './swap-mails';
+import { lateLines, lateManagerLine, newMessages, staffName, summary } from './swap-mails';
 import { SwapReads } from './swap-reads.service';
 import { type StoredCellChange, SwapRequestEntity } from './swap-request.entity';
 
@@ -351,24 +352,39 @@ export class SwapDecisions {
         c.after !== null &&
         (rows.find((r) => r.staffMemberId === c.staffMemberId && r.date === c.date)?.pinned ?? false),
     }));
-    await this.writer.writeCells(em, row.rosterPeriodId, cells, {
+    const version = await this.writer.writeCells(em, row.rosterPeriodId, cells, {
       kind: row.kind === 'claim' ? 'open-shift-claim' : 'swap',
       actorUserId: actor.id,
     });
+    // The cells the writer recorded as changed inside the notice window (none when nothing changed:
+    // the version stays and its late changes are an earlier change's).
+    const late = version === input.period.version ? [] : await lateChangesOf(em, row.rosterPeriodId, version);
     await this.setStatus(em, row, 'approved', `Approved by ${actor.displayName}`, actor.id);
     await this.auditTrail.record(em, {
       rosterPeriodId: row.rosterPeriodId,
       actorUserId: actor.id,
       kind: row.kind === 'claim' ? 'open-shift-claim' : 'swap',
-      summary: `${row.kind === 'claim' ? 'Open shift claim' : row.kind === 'swap' ? 'Swap' : 'Shift given away'}: ${what}`,
+      summary:
+        `${row.kind === 'claim' ? 'Open shift claim' : row.kind === 'swap' ? 'Swap' : 'Shift given away'}: ${what}` +
+        lateSummary(late),
       before: changes.map((c) => ({ staffMemberId: c.staffMemberId, date: c.date, shiftTypeId: c.before })),
       after: changes.map((c) => ({ staffMemberId: c.staffMemberId, date: c.date, shiftTypeId: c.after })),
     });
-    const mails = await this.mailer.mailPeople(em, input, involved, 'Your roster has changed', [
-      `Approved by ${actor.displayName}: ${what}.`,
-      'Your roster and calendar now show the change.',
-    ]);
-    mails.push(this.mailer.managerNote(input, actor, 'You approved a roster change', [`Approved: ${what}.`]));
+    const mails = await this.mailer.mailPeople(
+      em,
+      input,
+      involved,
+      'Your roster has changed',
+      [`Approved by ${actor.displayName}: ${what}.`, 'Your roster and calendar now show the change.'],
+      lateLines(late),
+    );
+    const lateLine = lateManagerLine(late);
+    mails.push(
+      this.mailer.managerNote(input, actor, 'You approved a roster change', [
+        `Approved: ${what}.`,
+        ...(lateLine ? [lateLine] : []),
+      ]),
+    );
     return { mails };
   }
 

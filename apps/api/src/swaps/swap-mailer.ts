@@ -101,13 +101,18 @@ export class SwapMailer {
     });
   }
 
-  /** A mail to each of the staff members (their sign-in address, else their staff address). */
+  /**
+   * A mail to each of the staff members (their sign-in address, else their staff address).
+   * `own` adds lines for one person only (by staff member id), after the common ones: e.g. that the
+   * change to their shifts is a late one.
+   */
   async mailPeople(
     em: EntityManager,
     input: RosterInput,
     staffIds: string[],
     subject: string,
     lines: string[],
+    own: ReadonlyMap<string, readonly string[]> = new Map(),
   ): Promise<OutgoingMail[]> {
     const mails: OutgoingMail[] = [];
     for (const s of await this.staff.byIds(staffIds, em)) {
@@ -115,7 +120,14 @@ export class SwapMailer {
       const to = user?.email ?? s.email;
       if (!to) continue;
       mails.push(
-        swapMail({ to, name: s.name, subject, lines, timeZone: input.unit.timeZone, place: 'Swaps' }),
+        swapMail({
+          to,
+          name: s.name,
+          subject,
+          lines: [...lines, ...(own.get(s.id) ?? [])],
+          timeZone: input.unit.timeZone,
+          place: 'Swaps',
+        }),
       );
     }
     return mails;

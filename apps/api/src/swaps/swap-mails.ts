@@ -5,6 +5,8 @@ import { type StaffMemberEntity } from '../staff/staff-member.entity';
 import { type StoredCellChange, type SwapRequestEntity } from './swap-request.entity';
 import { dateInWords } from '../common/text/date-words';
 import { escapeHtml } from '../mail/templates';
+import { type LateChangeEntity } from '../roster-periods/late-change.entity';
+import { lateNotes } from '../roster-periods/notice-window';
 
 /** Where the person finds the request in the menu: staff under "Swaps", managers under "Swap approvals". */
 export type SwapMailPlace = 'Swaps' | 'Swap approvals';
@@ -97,4 +99,34 @@ export function describe(
       `and they would work your shift ${shiftWords(shiftOf(input, take.before), take.date)}.`,
     'Rotaplex checked both rosters after the swap: it breaks no rule.',
   ];
+}
+
+// ---------------------------------------------------------------- late changes
+
+/**
+ * Said to each person whose shift an approved swap, give-away or claim changed inside the notice
+ * window: they asked for it or agreed to it, which the usual exceptions of notice-window laws cover
+ * (Seattle SMC 14.22, from memory; docs/notice-window.md).
+ */
+export const ASKED_FOR_LATE =
+  'You asked for or agreed to this change, so it is commonly exempt from predictability pay.';
+
+/**
+ * Per person (staff member id), the lines of the approval mail on their shifts changed inside the
+ * notice window: the notice window's note (`lateNotes`) and that they asked for the change.
+ */
+export function lateLines(late: readonly LateChangeEntity[]): Map<string, string[]> {
+  return new Map([...lateNotes(late)].map(([id, note]) => [id, [note, ASKED_FOR_LATE]]));
+}
+
+/** The approving manager's line on the change's shifts inside the notice window (null: none). */
+export function lateManagerLine(late: readonly LateChangeEntity[]): string | null {
+  if (late.length === 0) return null;
+  const days = [...new Set(late.map((l) => l.date))].sort().map(dateInWords);
+  return (
+    `This is a late change: ${days.join(', ')} ${days.length === 1 ? 'is' : 'are'} less than ` +
+    `${late[0].noticeWindowDays} days away. The staff asked for it, so it is commonly exempt from ` +
+    'predictability pay; where a notice-window law or agreement applies, it decides. It is listed in ' +
+    "the period's reports under changes inside the notice window."
+  );
 }
