@@ -11,7 +11,7 @@ import { StaffService } from '../staff/staff.service';
 import { UsersService } from '../users/users.service';
 import { CalendarFeedEntity, CalendarFeedEventEntity } from './calendar-feed.entity';
 import { type FeedEvent, type FeedEventContent, writeCalendar } from './ical-feed';
-import { type PublishedShift, publishedShifts } from './published-shifts';
+import { type PublishedShift, PublishedShifts } from './published-shifts';
 
 /** Feed tokens are 32 bytes of HMAC-SHA256 in base64url: 43 characters. */
 const TOKEN_FORMAT = /^[A-Za-z0-9_-]{43}$/;
@@ -61,6 +61,7 @@ export class CalendarFeedsService {
     config: AppConfig,
     private readonly staff: StaffService,
     private readonly users: UsersService,
+    private readonly published: PublishedShifts,
   ) {
     if (!config.jwtSecret) throw new Error('The server secret is not resolved');
     // A key of its own, derived from the server secret (a new JWT_SECRET also changes every feed URL).
@@ -141,7 +142,7 @@ export class CalendarFeedsService {
     em: EntityManager,
   ): Promise<{ events: FeedEvent[]; changed: CalendarFeedEventEntity[] }> {
     const records = await this.staff.ofUser(userId, em);
-    const shifts = await publishedShifts(em, { staffMemberIds: records.map((r) => r.id) });
+    const shifts = await this.published.of({ staffMemberIds: records.map((r) => r.id) }, em);
     const current = new Map(shifts.map((s) => [feedUid(s.staffMemberId, s.date), feedContent(s)]));
     const repo = em.getRepository(CalendarFeedEventEntity);
     const known = new Map((await repo.find({ where: { userId } })).map((e) => [e.uid, e]));

@@ -5,7 +5,7 @@ import { DataSource } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { StaffService } from '../staff/staff.service';
 import { UnitsService } from '../units/units.service';
-import { publishedShifts } from './published-shifts';
+import { PublishedShifts } from './published-shifts';
 
 const DAY_MS = 86_400_000;
 
@@ -27,6 +27,7 @@ export class MyRosterService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly staff: StaffService,
     private readonly units: UnitsService,
+    private readonly published: PublishedShifts,
   ) {}
 
   async shifts(user: AuthUser, query: MyRosterQuery): Promise<MyRosterDto> {
@@ -42,8 +43,8 @@ export class MyRosterService {
     const unitIds = [...new Set(records.filter((r) => r.active).map((r) => r.unitId))];
     const units = await this.units.byIds(unitIds, em);
     const [own, team] = await Promise.all([
-      publishedShifts(em, { staffMemberIds: [...mine], from: query.from, to: query.to }),
-      publishedShifts(em, { unitIds, from: query.from, to: query.to }),
+      this.published.of({ staffMemberIds: [...mine], from: query.from, to: query.to }, em),
+      this.published.of({ unitIds, from: query.from, to: query.to }, em),
     ]);
     const seen = new Set<string>();
     const shifts = [...own, ...team]

@@ -12,7 +12,7 @@ import {
 import { type Roster } from '@rotaplex/roster-model';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager, In } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../assignments/assignment.entity';
 import { checkDto, rosterOf, saveSolvedRoster } from '../assignments/assignments.service';
 import { AuditEntryEntity } from '../audit/audit-entry.entity';
 import { AuditService } from '../audit/audit.service';
@@ -59,7 +59,7 @@ export class PublishingService {
     await this.periods.get(user, periodId); // 404 / 403 by unit
     const em = this.dataSource.manager;
     const input = await this.input.load(periodId);
-    const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const rows = await this.writer.rowsOf(periodId, em);
     const roster = rosterOf(input, rows);
     const cells = publishedCells(input, rows);
     const contractIds = [...new Set(input.staff.flatMap((s) => (s.contractId ? [s.contractId] : [])))];
@@ -122,7 +122,7 @@ export class PublishingService {
         );
       }
       const input = await this.input.load(periodId, {}, em);
-      const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+      const rows = await this.writer.rowsOf(periodId, em);
       const cells = publishedCells(input, rows);
       if (cells.length === 0) throw new UnprocessableEntityException(EMPTY_ROSTER);
       const short = belowMinimum(input, rosterOf(input, rows), false);
@@ -197,7 +197,7 @@ export class PublishingService {
     const mode: SolveRunMode = {
       periodStatuses: ['published'],
       prepare: async (input) => {
-        const rows = await this.dataSource.manager.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+        const rows = await this.writer.rowsOf(periodId);
         reference = rosterOf(input, rows);
         input.problem.published = reference;
       },
@@ -208,7 +208,7 @@ export class PublishingService {
             `the period was ${period ? period.status : 'deleted'} during the repair; nothing was changed`,
           );
         }
-        const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+        const rows = await this.writer.rowsOf(periodId, em);
         const before = rosterOf(input, rows);
         if (!reference || !sameRoster(before, reference)) {
           throw new Error(
@@ -228,7 +228,7 @@ export class PublishingService {
           ),
         });
         const late = await lateChangesOf(em, periodId, version);
-        const after = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+        const after = await this.writer.rowsOf(periodId, em);
         await em.insert(RosterPublicationEntity, {
           id: randomUUID(),
           rosterPeriodId: periodId,
@@ -277,7 +277,7 @@ export class PublishingService {
   async exportCsv(user: AuthUser, periodId: string): Promise<{ filename: string; csv: string }> {
     await this.periods.get(user, periodId);
     const input = await this.input.load(periodId);
-    const rows = await this.dataSource.manager.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const rows = await this.writer.rowsOf(periodId);
     const trail = await this.dataSource.manager.find(AuditEntryEntity, {
       where: { rosterPeriodId: periodId },
       order: { at: 'ASC', id: 'ASC' },

@@ -2,9 +2,9 @@ import { Injectable } from '@nestjs/common';
 import { type PeriodReportDto } from '@rotaplex/contracts';
 import { type Roster } from '@rotaplex/roster-model';
 import { DataSource } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { rosterOf } from '../assignments/assignments.service';
 import { type AuthUser } from '../common/auth-user';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { payrollCsv, payrollFileName } from './payroll-csv';
@@ -17,6 +17,7 @@ export class ReportsService {
     private readonly dataSource: DataSource,
     private readonly periods: RosterPeriodsService,
     private readonly input: RosterInputService,
+    private readonly writer: PeriodWriter,
   ) {}
 
   async report(user: AuthUser, periodId: string): Promise<PeriodReportDto> {
@@ -46,7 +47,7 @@ export class ReportsService {
     await this.periods.get(user, periodId); // 404 unknown, 403 another unit
     return this.dataSource.transaction(async (em) => {
       const input = await this.input.load(periodId, {}, em);
-      const rows = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+      const rows = await this.writer.rowsOf(periodId, em);
       return { input, roster: rosterOf(input, rows) };
     });
   }

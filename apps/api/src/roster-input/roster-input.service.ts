@@ -9,10 +9,10 @@ import {
   type ShiftType,
 } from '@rotaplex/roster-model';
 import { DataSource, type EntityManager, In, LessThanOrEqual, MoreThanOrEqual } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { ContractEntity } from '../contracts/contract.entity';
 import { CoverOverrideEntity, CoverPatternRowEntity } from '../cover-needs/cover-need.entity';
 import { AvailabilityCellEntity, DateRequestEntity, LeaveRequestEntity } from '../requests/requests.entities';
+import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { addDays } from '../common/dates';
 import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
@@ -37,10 +37,23 @@ export interface RosterInput {
 
 export type { RequestsAndAbsences } from './requests-mapping';
 
-/** Builds the roster model's input from the database (people, contracts, needs, pins) for one period. */
+/**
+ * Builds the roster model's input from the database (people, contracts, needs, pins) for one period.
+ *
+ * A deliberate read model: it reads the planning tables of eight modules (periods, units, shift
+ * types, staff and their skills, contracts, cover needs, requests, skills) directly, in the
+ * caller's transaction, so the solver, publish check, reports and swaps see one consistent
+ * snapshot in about a dozen queries. Routing each read through its module's service would run the
+ * same queries behind seven more module imports for no gain; it writes nothing. The period's cells, which change under the period writer's version,
+ * come through the writer (`pinnedOf`). A new planning table the solver needs is read here; any
+ * other module reads through the owning service (DEVELOPERS.md, "Adding a feature module").
+ */
 @Injectable()
 export class RosterInputService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly writer: PeriodWriter,
+  ) {}
 
   async load(periodId: string, weights: SolveWeights = {}, em?: EntityManager): Promise<RosterInput> {
     const m = em ?? this.dataSource.manager;
@@ -93,7 +106,7 @@ export class RosterInputService {
     const skillNames = Object.fromEntries(skills.map((k) => [k.id, k.code]));
 
     const personIds = new Set(staff.map((s) => s.id));
-    const pins: Pin[] = (await m.findBy(AssignmentEntity, { rosterPeriodId: period.id, pinned: true }))
+    const pins: Pin[] = (await this.writer.pinnedOf(period.id, m))
       .filter((a) => personIds.has(a.staffMemberId) && dayOf.has(a.date))
       .map((a) => ({ personId: a.staffMemberId, day: dayOf.get(a.date)!, shiftTypeId: a.shiftTypeId }));
 

@@ -1,5 +1,10 @@
 import { ConflictException, Injectable } from '@nestjs/common';
-import { type RosterChangeKind, type RosterPeriodChangeDto, type StaleVersionDto } from '@rotaplex/contracts';
+import {
+  type RosterChangeKind,
+  type RosterPeriodChangeDto,
+  type RosterPeriodStatus,
+  type StaleVersionDto,
+} from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
 import { AssignmentEntity } from '../assignments/assignment.entity';
@@ -47,6 +52,44 @@ export class PeriodWriter {
    */
   rowsOf(periodId: string, em: EntityManager = this.dataSource.manager): Promise<AssignmentEntity[]> {
     return em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+  }
+
+  /** The period's pinned cells (a shift or a day off a new solve keeps), in `em`'s transaction when given. */
+  pinnedOf(periodId: string, em: EntityManager = this.dataSource.manager): Promise<AssignmentEntity[]> {
+    return em.findBy(AssignmentEntity, { rosterPeriodId: periodId, pinned: true });
+  }
+
+  /**
+   * Worked cells (a shift, not a day off) of the periods in `statuses`, of some staff members or of
+   * everyone in some units, optionally on days in [from, to], each with its period's unit: one query
+   * over the cells and their periods, for reads across periods (my roster, calendar feeds).
+   */
+  async shiftCellsOf(
+    filter: {
+      statuses: readonly RosterPeriodStatus[];
+      staffMemberIds?: readonly string[];
+      unitIds?: readonly string[];
+      from?: string;
+      to?: string;
+    },
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<{ staffMemberId: string; date: string; shiftTypeId: string; unitId: string }[]> {
+    if (filter.staffMemberIds?.length === 0 || filter.unitIds?.length === 0) return [];
+    const qb = em
+      .createQueryBuilder(AssignmentEntity, 'a')
+      .innerJoin(RosterPeriodEntity, 'p', 'p.id = a.rosterPeriodId')
+      .select('a.staffMemberId', 'staffMemberId')
+      .addSelect('a.date', 'date')
+      .addSelect('a.shiftTypeId', 'shiftTypeId')
+      .addSelect('p.unitId', 'unitId')
+      .where('p.status IN (:...statuses)', { statuses: filter.statuses })
+      .andWhere('a.shiftTypeId IS NOT NULL');
+    if (filter.staffMemberIds)
+      qb.andWhere('a.staffMemberId IN (:...staff)', { staff: filter.staffMemberIds });
+    if (filter.unitIds) qb.andWhere('p.unitId IN (:...units)', { units: filter.unitIds });
+    if (filter.from) qb.andWhere('a.date >= :from', { from: filter.from });
+    if (filter.to) qb.andWhere('a.date <= :to', { to: filter.to });
+    return qb.getRawMany();
   }
 
   /** Sets the given cells (a day off that is not pinned is stored as no row); answers the version. */
