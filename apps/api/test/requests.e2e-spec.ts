@@ -327,6 +327,16 @@ describe('availability, date requests and leave', () => {
         .delete(api(Q.dateRequest(before[0].id)))
         .set(bearer(robin))
         .expect(409);
+      // Nor does its request limit change (RosterPeriodsService.setRequestLimit), and it stays as it was.
+      const limit = await put(Q.periodRequestLimit(wardPeriod.id), manager, { requestLimit: 9 });
+      expect(limit.status).toBe(409);
+      expect(messages(limit)).toMatch(
+        /request limit can only be changed on a draft period; this one is published/,
+      );
+      const stored = await t.dataSource
+        .getRepository(RosterPeriodEntity)
+        .findOneByOrFail({ id: wardPeriod.id });
+      expect(stored.requestLimit).toBe(3);
     } finally {
       await t.dataSource.getRepository(RosterPeriodEntity).update({ id: wardPeriod.id }, { status: 'draft' });
     }

@@ -25,11 +25,12 @@ import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { addDays, localDate } from '../common/dates';
 import { GenerationCache, WriteGeneration } from '../database/write-generation';
 import { PeriodWriter } from '../roster-periods/period-writer';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
+import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
-import { SkillEntity } from '../skills/skill.entity';
+import { SkillsService } from '../skills/skills.service';
 import { type StaffMemberEntity } from '../staff/staff-member.entity';
-import { UnitEntity } from '../units/unit.entity';
+import { UnitsService } from '../units/units.service';
+import { UsersService } from '../users/users.service';
 import { ClaimCheck, evaluateChanges } from '../swaps/swap-evaluation';
 import { SwapRequestEntity, type StoredCellChange } from '../swaps/swap-request.entity';
 import { SwapsService } from '../swaps/swaps.service';
@@ -123,11 +124,15 @@ export class OpenShiftsService implements OnModuleInit {
     private readonly mail: MailService,
     private readonly config: AppConfig,
     private readonly cells: PeriodWriter,
+    private readonly periods: RosterPeriodsService,
+    private readonly units: UnitsService,
+    private readonly skills: SkillsService,
     audit: AuditService,
+    users: UsersService,
     writes: WriteGeneration,
   ) {
     this.cache = new GenerationCache(writes, { maxEntries: 32 });
-    this.outside = new OutsideOffers(input, audit, cells, unmetNeeds);
+    this.outside = new OutsideOffers(input, audit, cells, unmetNeeds, users, skills);
   }
 
   /** Approving a claim counts the people filling its shift from outside the roster (see filledOutside). */
@@ -145,28 +150,21 @@ export class OpenShiftsService implements OnModuleInit {
    * then unit, shift code and skill.
    */
   async list(user: AuthUser, query: OpenShiftQuery): Promise<Page<OpenShiftDto>> {
-    const m = this.dataSource.manager;
     // Periods whose last day is not yet over anywhere (each unit's own today is applied below).
     const yesterday = addDays(localDate(new Date(), 'UTC'), -1);
-    const qb = m
-      .createQueryBuilder(RosterPeriodEntity, 'p')
-      .innerJoin(UnitEntity, 'unit', 'unit.id = p.unitId')
-      .where('unit.organisationId = :org AND p.status = :published', {
-        org: user.organisationId,
-        published: 'published',
-      })
-      // No period is longer than ROSTER_PERIOD_MAX_DAYS; the exact last day is checked below (date
-      // arithmetic differs between SQLite and PostgreSQL, text comparison of ISO dates does not).
-      .andWhere('p.startDate >= :earliest', { earliest: addDays(yesterday, 1 - ROSTER_PERIOD_MAX_DAYS) });
     const visible = visibleUnitIds(user);
-    if (visible !== null) {
-      if (!visible.length) return { items: [], total: 0, page: query.page, pageSize: query.pageSize };
-      qb.andWhere('p.unitId IN (:...visible)', { visible });
+    if (visible !== null && !visible.length) {
+      return { items: [], total: 0, page: query.page, pageSize: query.pageSize };
     }
-    if (query.rosterPeriodId) qb.andWhere('p.id = :periodId', { periodId: query.rosterPeriodId });
-    const periods = (await qb.orderBy('p.startDate', 'ASC').addOrderBy('p.id', 'ASC').getMany()).filter(
-      (p) => addDays(p.startDate, p.days - 1) >= yesterday,
-    );
+    const periods = (
+      await this.periods.publishedOfOrganisation(user.organisationId, {
+        // No period is longer than ROSTER_PERIOD_MAX_DAYS; the exact last day is checked below (date
+        // arithmetic differs between SQLite and PostgreSQL, text comparison of ISO dates does not).
+        earliest: addDays(yesterday, 1 - ROSTER_PERIOD_MAX_DAYS),
+        unitIds: visible,
+        periodId: query.rosterPeriodId,
+      })
+    ).filter((p) => addDays(p.startDate, p.days - 1) >= yesterday);
     const zones = await this.timeZones(periods.map((p) => p.unitId));
     const all: OpenShiftDto[] = [];
     for (const period of periods) {
@@ -417,7 +415,7 @@ export class OpenShiftsService implements OnModuleInit {
 
   private async timeZones(unitIds: string[]): Promise<Map<string, string>> {
     const ids = [...new Set(unitIds)];
-    const units = ids.length ? await this.dataSource.manager.findBy(UnitEntity, { id: In(ids) }) : [];
+    const units = await this.units.byIds(ids);
     return new Map(units.map((u) => [u.id, u.timeZone]));
   }
 
@@ -493,7 +491,7 @@ export class OpenShiftsService implements OnModuleInit {
 
   private async skillCodes(input: RosterInput): Promise<Map<string, string>> {
     const ids = [...new Set(input.problem.coverNeeds.flatMap((n) => (n.skillId ? [n.skillId] : [])))];
-    const rows = ids.length ? await this.dataSource.manager.findBy(SkillEntity, { id: In(ids) }) : [];
+    const rows = await this.skills.byIds(ids);
     return new Map(rows.map((s) => [s.id, s.code]));
   }
 }

@@ -10,8 +10,8 @@ import { dateInWords } from '../common/text/date-words';
 import { assertUnitAccess } from '../common/unit-scope';
 import { type PeriodWriter } from '../roster-periods/period-writer';
 import { type RosterInput, type RosterInputService } from '../roster-input/roster-input.service';
-import { SkillEntity } from '../skills/skill.entity';
-import { UserEntity } from '../users/user.entity';
+import { type SkillsService } from '../skills/skills.service';
+import { type UsersService } from '../users/users.service';
 import { type CreateOutsideOfferBody, type FillOutsideOfferBody } from './dto/outside-offer.dto';
 import { OutsideOfferEntity } from './outside-offer.entity';
 
@@ -93,6 +93,8 @@ export class OutsideOffers {
     private readonly audit: AuditService,
     private readonly cells: PeriodWriter,
     private readonly unmetNeeds: UnmetNeeds,
+    private readonly users: UsersService,
+    private readonly skills: SkillsService,
   ) {}
 
   async create(em: EntityManager, user: AuthUser, body: CreateOutsideOfferBody): Promise<OutsideOfferDto> {
@@ -103,7 +105,7 @@ export class OutsideOffers {
         `This shift is already ${need.offer.status === 'filled' ? 'filled' : 'offered'} outside the roster (to ${need.offer.offeredTo}); withdraw that offer first`,
       );
     }
-    const actor = await em.findOneByOrFail(UserEntity, { id: user.id });
+    const actor = await this.users.byIdOrFail(user.id, em);
     const now = new Date();
     const row = em.create(OutsideOfferEntity, {
       id: randomUUID(),
@@ -227,7 +229,7 @@ export class OutsideOffers {
 
   private async shiftWords(em: EntityManager, input: RosterInput, key: NeedKey): Promise<string> {
     const shift = input.shiftTypes.find((s) => s.id === key.shiftTypeId);
-    const skill = key.skillId ? await em.findOneBy(SkillEntity, { id: key.skillId }) : null;
+    const skill = key.skillId ? ((await this.skills.byIds([key.skillId], em))[0] ?? null) : null;
     return (
       `${shift ? `${shift.name} (${shift.code})` : 'a shift'} on ${dateInWords(key.date)}` +
       (skill ? ` needing ${skill.code}` : '')

@@ -1,4 +1,4 @@
-import { ConflictException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import {
   type MyRequestsDto,
   type Page,
@@ -123,17 +123,7 @@ export class RequestViews {
 
   async setRequestLimit(user: AuthUser, periodId: string, requestLimit: number): Promise<RequestPeriodDto> {
     await this.access.managedPeriod(user, periodId);
-    const saved = await this.dataSource.transaction(async (em) => {
-      const period = await this.periods.byIdOrFail(periodId, em);
-      if (period.status !== 'draft') {
-        throw new ConflictException(
-          `The request limit can only be changed on a draft period; this one is ${period.status}`,
-        );
-      }
-      period.requestLimit = requestLimit;
-      return em.save(period);
-    });
-    return toPeriodDto(saved);
+    return toPeriodDto(await this.periods.setRequestLimit(periodId, requestLimit));
   }
 
   /** The managers' table: date requests and leave of their units, filtered, sorted and paged. */

@@ -72,6 +72,46 @@ export class RosterPeriodsService {
     return em.findOneByOrFail(RosterPeriodEntity, { id });
   }
 
+  /**
+   * The organisation's published periods that start on or after `earliest`, of the given units
+   * (`unitIds` null: every unit), or only the period `periodId` when given; by start date, then id.
+   */
+  publishedOfOrganisation(
+    organisationId: string,
+    filter: { earliest: string; unitIds: readonly string[] | null; periodId?: string },
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<RosterPeriodEntity[]> {
+    if (filter.unitIds?.length === 0) return Promise.resolve([]);
+    const qb = em
+      .createQueryBuilder(RosterPeriodEntity, 'p')
+      .innerJoin(UnitEntity, 'unit', 'unit.id = p.unitId')
+      .where('unit.organisationId = :org AND p.status = :published', {
+        org: organisationId,
+        published: 'published',
+      })
+      .andWhere('p.startDate >= :earliest', { earliest: filter.earliest });
+    if (filter.unitIds) qb.andWhere('p.unitId IN (:...visible)', { visible: filter.unitIds });
+    if (filter.periodId) qb.andWhere('p.id = :periodId', { periodId: filter.periodId });
+    return qb.orderBy('p.startDate', 'ASC').addOrderBy('p.id', 'ASC').getMany();
+  }
+
+  /**
+   * Sets how many date requests each person may make in the period (no access check: the caller
+   * checks), in `em`'s transaction when given, else in one of its own; 409 unless the period is a
+   * draft. Answers the saved period.
+   */
+  async setRequestLimit(id: string, requestLimit: number, em?: EntityManager): Promise<RosterPeriodEntity> {
+    if (!em) return this.dataSource.transaction((tx) => this.setRequestLimit(id, requestLimit, tx));
+    const period = await em.findOneByOrFail(RosterPeriodEntity, { id });
+    if (period.status !== 'draft') {
+      throw new ConflictException(
+        `The request limit can only be changed on a draft period; this one is ${period.status}`,
+      );
+    }
+    period.requestLimit = requestLimit;
+    return em.save(period);
+  }
+
   /** The draft and published periods of the given units, earliest first. */
   async openOfUnits(
     unitIds: string[],

@@ -71,6 +71,11 @@ export class SkillsService {
     return em.findBy(SkillEntity, { organisationId });
   }
 
+  /** Skills by id, any organisation (for other services; unknown ids left out). */
+  async byIds(ids: string[], em: EntityManager = this.dataSource.manager): Promise<SkillEntity[]> {
+    return ids.length ? em.findBy(SkillEntity, { id: In(ids) }) : [];
+  }
+
   /** Skills of the organisation by code (upper case); 400 naming `field` for unknown codes. */
   async findByCodes(organisationId: string, codes: string[], field = 'skills'): Promise<SkillEntity[]> {
     const unique = [...new Set(codes.map((c) => c.trim().toUpperCase()))];
