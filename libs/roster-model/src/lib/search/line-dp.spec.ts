@@ -2,7 +2,8 @@
  * The best-line dynamic programme (line-dp.ts) against a second method and against the checker:
  * - on random problems that use every rule and goal, with random cover terms, its line costs exactly
  *   what the optimal line of the one-person MIP costs (the product's model of rules/ and goals/,
- *   solved to optimality by HiGHS), and it finds no line exactly when HiGHS proves there is none;
+ *   solved to optimality by HiGHS), its `lowest` (column generation's pricing value) is never above
+ *   that, and it finds no line exactly when HiGHS proves there is none;
  * - its lines break no rule of the independent checker (each rule's own checkPerson);
  * - on published benchmark instance 8 (Curtois & Qu, SOURCES.md §5a), whose contracts (minimum
  *   hours, runs of 2-5 days, at least 2 days off together, at most 2 weekends) leave an empty roster
@@ -46,7 +47,7 @@ describe('LineDp: the best line of one person', () => {
         fc.integer({ min: 1, max: 1_000_000 }),
         async (problem, seed) => {
           const index = new ProblemIndex(problem);
-          const dp = new LineDp(index, { maxPerState: 1_000_000, maxLabels: 10_000_000 });
+          const dp = new LineDp(index, { exact: true });
           const mip = new LineMip(index, session);
           const random = seeded(seed);
           for (let p = 0; p < index.P; p++) {
@@ -68,6 +69,8 @@ describe('LineDp: the best line of one person', () => {
               lineValue(dp.cost, p, exact.line!, extra),
               6,
             );
+            // The pricing value of column generation is never above the optimum (bound/line-bound.ts).
+            expect(dp.lowest).toBeLessThanOrEqual(lineValue(dp.cost, p, exact.line!, extra) + 1e-6);
           }
         },
       ),

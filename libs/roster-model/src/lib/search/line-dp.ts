@@ -47,6 +47,8 @@ export interface LineDpOptions {
    * lines as 200,000; on the half-year instance 20 the same as 10,000 at a quarter of the time).
    */
   maxLabels?: number;
+  /** Neither cap: every label not dominated is kept, so `lowest` is exact (overrides both caps). */
+  exact?: boolean;
 }
 
 export class LineDp {
@@ -56,6 +58,12 @@ export class LineDp {
   private readonly maxPerState: number;
   private readonly maxLabels: number;
   private truncated = false;
+  /**
+   * After `solve`: the lowest cost of any line the programme reached (rest conflicts beyond the next
+   * day not checked), Infinity when none. With both caps off (`exact`) no line is cheaper: the
+   * pricing value of column generation (bound/line-bound.ts).
+   */
+  lowest = Infinity;
   /** Calls and their total milliseconds (for benchmarks). */
   calls = 0;
   ms = 0;
@@ -66,28 +74,29 @@ export class LineDp {
   ) {
     this.cost = new LineCost(index);
     this.lineBuffer = new Int16Array(index.P * index.D);
-    this.maxPerState = options.maxPerState ?? 8;
-    this.maxLabels = options.maxLabels ?? 2_000;
+    this.maxPerState = options.exact ? Infinity : (options.maxPerState ?? 8);
+    this.maxLabels = options.exact ? Infinity : (options.maxLabels ?? 2_000);
   }
 
   /**
-   * Person p's best rule-keeping line with `extra[d * S + s]` added per worked shift, or null when
-   * the programme finds none. Pinned days keep their pin; other days may be off or hold any shift
+   * Person p's best rule-keeping line with `extra[d * S + s]` added per worked shift and `perWeekend`
+   * per weekend worked (column generation's fairness prices), or null when the programme finds none. Pinned days keep their pin; other days may be off or hold any shift
    * type the person is free for (ProblemIndex.isFree), as in the local search.
    */
-  solve(p: number, extra: Float64Array): Int16Array | null {
+  solve(p: number, extra: Float64Array, perWeekend = 0): Int16Array | null {
     const t0 = performance.now();
     this.truncated = false;
-    let line = this.run(p, extra, false);
+    this.lowest = Infinity;
+    let line = this.run(p, extra, perWeekend, false);
     // The cheapest labels of a capped day may all have fallen behind the minimum hours: again,
     // keeping those furthest ahead (tight contracts over half a year, benchmark instance 21).
-    if (!line && this.truncated) line = this.run(p, extra, true);
+    if (!line && this.truncated) line = this.run(p, extra, perWeekend, true);
     this.calls++;
     this.ms += performance.now() - t0;
     return line;
   }
 
-  private run(p: number, extra: Float64Array, bySlack: boolean): Int16Array | null {
+  private run(p: number, extra: Float64Array, perWeekend: number, bySlack: boolean): Int16Array | null {
     const { index, cost: lc } = this;
     const { D, S } = index;
     const maxCons = lc.maxCons[p];
@@ -250,8 +259,10 @@ export class LineDp {
           const counted = sameWeekend && from.weekendCounted === 1;
           let weekends = from.weekends;
           let weekendCounted = counted ? 1 : 0;
+          let weekendCost = 0;
           if (v >= 0 && k >= 0 && !counted) {
             weekends++;
+            weekendCost = perWeekend;
             if (maxWeekends >= 0 && weekends > maxWeekends) continue;
             weekendCounted = 1;
           }
@@ -278,7 +289,7 @@ export class LineDp {
           }
           const label: Label = {
             slack,
-            cost: from.cost + cellCost[d * W + v + 1],
+            cost: from.cost + cellCost[d * W + v + 1] + weekendCost,
             paid,
             weekends,
             counts,
@@ -320,6 +331,7 @@ export class LineDp {
       finals.push({ label: l, total });
     }
     finals.sort((a, b) => a.total - b.total);
+    if (!bySlack || finals.length > 0) this.lowest = finals.length > 0 ? finals[0].total : Infinity;
     const buffer = this.lineBuffer;
     const base = p * D;
     for (const { label } of finals.slice(0, 16)) {
