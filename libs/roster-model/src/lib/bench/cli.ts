@@ -3,7 +3,7 @@
  *   npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]
  *                    [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]
  *                    [--cores 1|2] [--beside-textbook]
- *                    [--line-share X]
+ *                    [--line-share X] [--line-bound-share X]
  * Instances are numbers 1-24 (InstanceN.txt in $ROTAPLEX_BENCHMARKS_DIR, default
  * ../shared/benchmarks/curtois-qu beside the repository), ranges such as 1-12, or paths to files
  * in the same format. Each instance is solved in turn by the product's solve path; a table is
@@ -36,6 +36,7 @@ interface CliOptions {
   /** Solve the plain model beside the product and add its column (one core each). */
   besideTextbook?: boolean;
   lineShare?: number;
+  lineBoundShare?: number;
 }
 
 const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
@@ -44,6 +45,7 @@ const USAGE =
   'Usage: npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]\n' +
   '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise] [--cores 1|2]\n' +
   '       [--beside-textbook] [--line-share X (share of the search for best-line moves, 0 off)]\n' +
+  '       [--line-bound-share X (share of the time after the search for the column-generation bound, 0 off)]\n' +
   '  instances: numbers 1-24, ranges like 1-12, or paths to instance files';
 
 export function parseArgs(argv: string[]): CliOptions {
@@ -74,6 +76,8 @@ export function parseArgs(argv: string[]): CliOptions {
     else if (arg === '--no-warm-start') options.warmStart = false;
     else if (arg === '--beside-textbook') options.besideTextbook = true;
     else if (arg === '--line-share') options.lineShare = Math.min(1, Math.max(0, Number(value(i++, arg))));
+    else if (arg === '--line-bound-share')
+      options.lineBoundShare = Math.min(1, Math.max(0, Number(value(i++, arg))));
     else if (arg === '--cores') {
       const v = value(i++, arg);
       if (v !== '1' && v !== '2') throw new Error(`--cores is 1 or 2, got "${v}".`);
@@ -137,6 +141,7 @@ export async function main(argv: string[]): Promise<number> {
         cores: options.cores,
         besideTextbook: options.besideTextbook,
         lineShare: options.lineShare,
+        lineBoundShare: options.lineBoundShare,
         onProgress: progressPrinter(ref),
       });
     } catch (err) {

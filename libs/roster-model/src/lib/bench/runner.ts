@@ -44,6 +44,8 @@ export interface BenchRunOptions {
   cores?: number;
   /** Share of the local search for best-line moves (SolveRosterOptions.lineShare; 0 off). */
   lineShare?: number;
+  /** Share of the time after the search for the column-generation bound (SolveRosterOptions.lineBoundShare; 0 off). */
+  lineBoundShare?: number;
 }
 
 interface SolvedRoster {
@@ -106,6 +108,7 @@ async function solveProduct(loaded: LoadedInstance, options: BenchRunOptions): P
     explain: false,
     strategy: options.strategy,
     lineShare: options.lineShare,
+    lineBoundShare: options.lineBoundShare,
   };
   const cores = Math.max(1, Math.floor(options.cores ?? 1));
   const result =
