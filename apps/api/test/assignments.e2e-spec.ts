@@ -9,7 +9,7 @@ import {
   SOLVING_ROUTES as R,
   type SolveRunDto,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { createPeriod, findUnit, readGrid, shiftTypesByCode } from './support/planning';
 import { api, bearer, startTestApp, type TestApp } from './support/test-app';
 

@@ -8,7 +8,7 @@ import {
   type StaffMemberDto,
 } from '@rotaplex/contracts';
 import ICAL from 'ical.js';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import {
   createPeriod,
   findUnit,

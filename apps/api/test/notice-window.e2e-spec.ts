@@ -12,7 +12,7 @@ import {
   type SwapRequestDto,
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { addDays, localDate } from '../src/common/dates';
 import { dateInWords } from '../src/common/text/date-words';
 import { LeaveRequestEntity } from '../src/requests/requests.entities';

@@ -11,7 +11,7 @@ import {
   SWAP_ROUTES as S,
   type SwapRequestDto,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { addDays } from '../src/common/dates';
 import {
   createPeriod,

@@ -13,7 +13,7 @@ import {
   SWAP_ROUTES as S,
   type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { ContractEntity } from '../src/contracts/contract.entity';
 import { addDays } from '../src/common/dates';
 import { StaffMemberEntity } from '../src/staff/staff-member.entity';

@@ -8,7 +8,7 @@ import {
   type SkillDto,
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { addDays } from '../src/common/dates';
 import { OutboxDeliveryService } from '../src/mail/outbox/outbox-delivery.service';
 import { caughtMails } from './support/mailbox';

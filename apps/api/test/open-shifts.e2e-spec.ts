@@ -10,7 +10,7 @@ import {
   SWAP_ROUTES as S,
   type SwapRequestDto,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/common/dates';
 import { SwapRequestEntity } from '../src/swaps/swap-request.entity';

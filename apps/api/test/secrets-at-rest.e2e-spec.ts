@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { createApp } from '../src/app';
 import { sha256 } from '../src/common/crypto';
 import { loadConfig, resolveJwtSecret } from '../src/config/app-config';

@@ -5,7 +5,7 @@ import {
   type SwapRequestDto,
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { addDays } from '../src/common/dates';
 import { UserEntity } from '../src/users/user.entity';
 import {

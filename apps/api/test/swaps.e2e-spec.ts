@@ -10,7 +10,7 @@ import {
   SWAP_DECISION_WEB_PATH,
   SWAP_ROUTES as S,
 } from '@rotaplex/contracts';
-import { AssignmentEntity } from '../src/assignments/assignment.entity';
+import { AssignmentEntity } from '../src/roster-periods/assignment.entity';
 import { RosterPeriodEntity } from '../src/roster-periods/roster-period.entity';
 import { addDays } from '../src/common/dates';
 import { SwapExpiryService } from '../src/swaps/swap-expiry.service';

@@ -20,7 +20,7 @@ import { GenerationCache, WriteGeneration } from '../database/write-generation';
 import { type CellChangeBy, PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
-import { AssignmentEntity } from './assignment.entity';
+import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { type AssignmentCellDto, type PinCellDto } from './dto/assignment.dto';
 
 /** The roster of a period: read as a grid with the checker's findings, edit a cell, pin and unpin. */
@@ -65,7 +65,7 @@ export class AssignmentsService {
       if (body.shiftTypeId !== null && !input.shiftTypes.some((s) => s.id === body.shiftTypeId)) {
         throw new BadRequestException(["shiftTypeId must be a shift type of the period's unit, or null"]);
       }
-      const all = await em.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+      const all = await this.writer.rowsOf(periodId, em);
       const existing =
         all.find((r) => r.staffMemberId === body.staffMemberId && r.date === body.date) ?? null;
       const before = rosterOf(input, all);
@@ -128,11 +128,9 @@ export class AssignmentsService {
       const input = await this.input.load(periodId, {}, em);
       assertDraft(input);
       assertCell(input, body.staffMemberId, body.date);
-      const existing = await em.findOneBy(AssignmentEntity, {
-        rosterPeriodId: periodId,
-        staffMemberId: body.staffMemberId,
-        date: body.date,
-      });
+      const existing = (await this.writer.rowsOf(periodId, em)).find(
+        (r) => r.staffMemberId === body.staffMemberId && r.date === body.date,
+      );
       // Pinning an empty cell pins the day off; unpinning a pinned day off leaves no row.
       const cell = {
         staffMemberId: body.staffMemberId,
@@ -151,7 +149,7 @@ export class AssignmentsService {
   /** The grid and the checker's result for the period's current roster (no access check: callers do it). */
   async gridOf(periodId: string): Promise<AssignmentGridDto> {
     const input = await this.input.load(periodId);
-    const rows = await this.dataSource.manager.findBy(AssignmentEntity, { rosterPeriodId: periodId });
+    const rows = await this.writer.rowsOf(periodId);
     const cells = new Map<string, AssignmentEntity>();
     for (const r of rows) cells.set(`${r.staffMemberId}|${r.date}`, r);
     const roster = rosterOf(input, rows);

@@ -19,7 +19,7 @@ import {
   type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
 import { DataSource, type EntityManager, In } from 'typeorm';
-import { type AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { addDays, localDate } from '../common/dates';

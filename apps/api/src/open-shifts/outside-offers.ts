@@ -2,7 +2,7 @@ import { BadRequestException, ConflictException, NotFoundException } from '@nest
 import { type OutsideOfferDto } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { type EntityManager, In } from 'typeorm';
-import { type AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { type AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { localDate } from '../common/dates';

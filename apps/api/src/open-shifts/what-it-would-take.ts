@@ -7,7 +7,7 @@ import {
   type RuleBreakDto,
 } from '@rotaplex/contracts';
 import { type CheckResult } from '@rotaplex/roster-model';
-import { type AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { dateInWords } from '../common/text/date-words';
 import { type RosterInput } from '../roster-input/roster-input.service';
 import { evaluateChanges } from '../swaps/swap-evaluation';

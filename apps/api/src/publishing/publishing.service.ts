@@ -12,7 +12,7 @@ import {
 import { type Roster } from '@rotaplex/roster-model';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager, In } from 'typeorm';
-import { type AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { checkDto, rosterOf, saveSolvedRoster } from '../assignments/assignments.service';
 import { AuditEntryEntity } from '../audit/audit-entry.entity';
 import { AuditService } from '../audit/audit.service';

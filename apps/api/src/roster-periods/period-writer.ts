@@ -7,8 +7,8 @@ import {
 } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
-import { AssignmentEntity } from '../assignments/assignment.entity';
 import { UserEntity } from '../users/user.entity';
+import { AssignmentEntity } from './assignment.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
 import { recordLateChanges, type ShiftChange } from './notice-window';
 import { RosterPeriodEntity } from './roster-period.entity';

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { UnitsModule } from '../units/units.module';
+import { AssignmentEntity } from './assignment.entity';
 import { LateChangeEntity } from './late-change.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
 import { RosterPeriodEntity } from './roster-period.entity';
@@ -10,7 +11,12 @@ import { PeriodWriter } from './period-writer';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([RosterPeriodEntity, RosterPeriodChangeEntity, LateChangeEntity]),
+    TypeOrmModule.forFeature([
+      RosterPeriodEntity,
+      RosterPeriodChangeEntity,
+      LateChangeEntity,
+      AssignmentEntity,
+    ]),
     UnitsModule,
   ],
   controllers: [RosterPeriodsController],
