@@ -35,8 +35,8 @@ import { AuditModule } from './audit/audit.module';
 import { PublishingModule } from './publishing/publishing.module';
 import { MyRosterModule } from './my-roster/my-roster.module';
 import { ClusterWriteGenerationModule } from './scale-out/cluster-write-generation';
-import { ScaleOutModule } from './scale-out/redis-connections';
-import { ScaleOutConfig } from './scale-out/scale-out-config';
+import { ScaleOutModule } from './redis/redis-connections';
+import { ScaleOutConfig } from './redis/scale-out-config';
 import { ScaleOutServicesModule } from './scale-out/scale-out-services.module';
 
 /** One process: solves in this process's worker pool, everything else in memory. */

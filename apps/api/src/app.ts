@@ -13,7 +13,7 @@ import { AppModule } from './app.module';
 import { useBodyLimits } from './common/http/body-limits';
 import { AppValidationPipe } from './common/pipes/app-validation.pipe';
 import { AppConfig } from './config/app-config';
-import { loadScaleOutConfig, type ScaleOutConfig } from './scale-out/scale-out-config';
+import { loadScaleOutConfig, type ScaleOutConfig } from './redis/scale-out-config';
 
 export interface CreateAppOptions {
   /** Nest logger levels; tests pass false. */

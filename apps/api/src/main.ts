@@ -3,7 +3,7 @@ import { Logger } from '@nestjs/common';
 import { createServer } from 'node:net';
 import { createApp } from './app';
 import { type AppConfig, ConfigValidationError, loadConfig, resolveJwtSecret } from './config/app-config';
-import { loadScaleOutConfig, type ScaleOutConfig } from './scale-out/scale-out-config';
+import { loadScaleOutConfig, type ScaleOutConfig } from './redis/scale-out-config';
 
 async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {

@@ -14,7 +14,7 @@ import { SOLVING_ROUTES as R, type SolveRunDto } from '@rotaplex/contracts';
 import { Queue } from 'bullmq';
 import { Redis } from 'ioredis';
 import { randomUUID } from 'node:crypto';
-import { RedisConnections } from '../src/scale-out/redis-connections';
+import { RedisConnections } from '../src/redis/redis-connections';
 import { SolveQueue } from '../src/solve-runs/solve-queue';
 import {
   apiInstanceKey,

@@ -12,8 +12,8 @@ import { Queue } from 'bullmq';
 import { type RedisServer, startRedis } from '../../test/scale-out/cluster';
 import { MAINTENANCE_QUEUE } from '../solve-runs/solve-queue-protocol';
 import { ClusterSchedule } from './cluster-schedule';
-import { RedisConnections } from './redis-connections';
-import { loadScaleOutConfig } from './scale-out-config';
+import { RedisConnections } from '../redis/redis-connections';
+import { loadScaleOutConfig } from '../redis/scale-out-config';
 
 const SYSTEM_ZONE = Intl.DateTimeFormat().resolvedOptions().timeZone;
 

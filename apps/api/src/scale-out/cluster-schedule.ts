@@ -6,7 +6,7 @@ import { type Redis } from 'ioredis';
 import { OutboxRetentionService } from '../mail/outbox/outbox-retention.service';
 import { MAINTENANCE_QUEUE } from '../solve-runs/solve-queue-protocol';
 import { SwapExpiryService } from '../swaps/swap-expiry.service';
-import { redisConnection, RedisConnections } from './redis-connections';
+import { redisConnection, RedisConnections } from '../redis/redis-connections';
 
 /**
  * The scheduled jobs: the names of their @Cron timers and what each one runs. Their patterns are

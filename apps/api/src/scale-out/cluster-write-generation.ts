@@ -1,7 +1,7 @@
 import { Global, Injectable, Logger, Module, type OnApplicationBootstrap } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { WriteGeneration } from '../database/write-generation';
-import { RedisConnections } from './redis-connections';
+import { RedisConnections } from '../redis/redis-connections';
 
 const CHANNEL = 'write-generation';
 

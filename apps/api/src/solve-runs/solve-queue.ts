@@ -2,7 +2,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { type RosterProblem } from '@rotaplex/roster-model';
 import { type Job, Queue, QueueEvents, Worker } from 'bullmq';
 import { type Redis } from 'ioredis';
-import { redisConnection, RedisConnections } from '../scale-out/redis-connections';
+import { redisConnection, RedisConnections } from '../redis/redis-connections';
 import {
   apiInstanceKey,
   decodeValue,

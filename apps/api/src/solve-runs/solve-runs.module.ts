@@ -2,7 +2,7 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { RosterInputModule } from '../roster-input/roster-input.module';
 import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
-import { RedisConnections } from '../scale-out/redis-connections';
+import { RedisConnections } from '../redis/redis-connections';
 import { SolveQueue } from './solve-queue';
 import { SolveRunEntity } from './solve-run.entity';
 import { SolveRunsController } from './solve-runs.controller';

@@ -10,8 +10,8 @@ import { SolverPool, type RosterProblem } from '@rotaplex/roster-model';
 import { type Job, Worker } from 'bullmq';
 import { hostname } from 'node:os';
 import { ConfigValidationError } from '../config/app-config';
-import { redisConnection } from '../scale-out/redis-connections';
-import { loadScaleOutConfig, type ScaleOutConfig } from '../scale-out/scale-out-config';
+import { redisConnection } from '../redis/redis-connections';
+import { loadScaleOutConfig, type ScaleOutConfig } from '../redis/scale-out-config';
 import {
   decodeValue,
   encodeValue,

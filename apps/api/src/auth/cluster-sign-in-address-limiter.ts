@@ -1,7 +1,7 @@
 import { Logger } from '@nestjs/common';
 import { type AppConfig } from '../config/app-config';
-import { SignInAddressLimiter } from '../auth/sign-in-address-limiter';
-import { type RedisConnections } from './redis-connections';
+import { SignInAddressLimiter } from './sign-in-address-limiter';
+import { type RedisConnections } from '../redis/redis-connections';
 
 const CHANNEL = 'sign-in-failures';
 
