@@ -54,6 +54,8 @@ export interface LineBoundResult {
   ms: number;
   pricingMs: number;
   masterMs: number;
+  /** Most labels the exact pricing kept on one day (search/line-dp.ts EXACT_MAX_LABELS). */
+  peakLabels: number;
 }
 
 /** Reduced costs above this count as zero (the master's duals carry HiGHS's tolerances). */
@@ -123,6 +125,7 @@ export function lineBound(
     ms: 0,
     pricingMs: 0,
     masterMs: 0,
+    peakLabels: 0,
   };
   const score: LineScore = { hard: 0, soft: 0, nights: 0, weekends: 0 };
   const grid = new Int16Array(P * D);
@@ -289,7 +292,7 @@ export function lineBound(
             extra[ds] = e;
           }
           const line = dp.solve(p, extra, perWeekend);
-          if (!useExact || !Number.isFinite(dp.lowest)) complete = false;
+          if (!useExact || !dp.lowestIsExact || !Number.isFinite(dp.lowest)) complete = false;
           else lagrangian += dp.lowest;
           if (line) {
             const c = column(p, line);
@@ -323,6 +326,7 @@ export function lineBound(
       }
     },
   );
+  result.peakLabels = exact.peakLabels;
   result.ms = elapsed();
   return result;
 }

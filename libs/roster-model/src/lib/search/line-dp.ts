@@ -47,9 +47,19 @@ export interface LineDpOptions {
    * lines as 200,000; on the half-year instance 20 the same as 10,000 at a quarter of the time).
    */
   maxLabels?: number;
-  /** Neither cap: every label not dominated is kept, so `lowest` is exact (overrides both caps). */
+  /**
+   * No cap per state and EXACT_MAX_LABELS a day: every label not dominated is kept, so `lowest` is
+   * exact unless that safety limit was hit (`lowestIsExact` says which; overrides both caps).
+   */
   exact?: boolean;
 }
+
+/**
+ * Labels a day in exact mode before the programme gives up exactness (a safety limit on memory and
+ * time). Most labels on one day measured in column generation (5 December 2026): benchmark instance
+ * 8 (four limited shift types) 36,011, instance 10 9,542, instance 12 2,046, the demo ward 3,420.
+ */
+export const EXACT_MAX_LABELS = 100_000;
 
 export class LineDp {
   readonly cost: LineCost;
@@ -58,12 +68,17 @@ export class LineDp {
   private readonly maxPerState: number;
   private readonly maxLabels: number;
   private truncated = false;
+  private readonly exact: boolean;
   /**
    * After `solve`: the lowest cost of any line the programme reached (rest conflicts beyond the next
    * day not checked), Infinity when none. With both caps off (`exact`) no line is cheaper: the
    * pricing value of column generation (bound/line-bound.ts).
    */
   lowest = Infinity;
+  /** `lowest` is the exact minimum (exact mode, and no day went over EXACT_MAX_LABELS). */
+  lowestIsExact = false;
+  /** Most labels kept on one day since construction (for benchmarks). */
+  peakLabels = 0;
   /** Calls and their total milliseconds (for benchmarks). */
   calls = 0;
   ms = 0;
@@ -75,7 +90,8 @@ export class LineDp {
     this.cost = new LineCost(index);
     this.lineBuffer = new Int16Array(index.P * index.D);
     this.maxPerState = options.exact ? Infinity : (options.maxPerState ?? 8);
-    this.maxLabels = options.exact ? Infinity : (options.maxLabels ?? 2_000);
+    this.exact = options.exact ?? false;
+    this.maxLabels = options.exact ? EXACT_MAX_LABELS : (options.maxLabels ?? 2_000);
   }
 
   /**
@@ -91,6 +107,7 @@ export class LineDp {
     // The cheapest labels of a capped day may all have fallen behind the minimum hours: again,
     // keeping those furthest ahead (tight contracts over half a year, benchmark instance 21).
     if (!line && this.truncated) line = this.run(p, extra, perWeekend, true);
+    this.lowestIsExact = this.exact && !this.truncated;
     this.calls++;
     this.ms += performance.now() - t0;
     return line;
@@ -313,6 +330,7 @@ export class LineDp {
       }
       labels = [];
       for (const bucket of layer.values()) for (const l of bucket) labels.push(l);
+      if (labels.length > this.peakLabels) this.peakLabels = labels.length;
       if (labels.length > this.maxLabels) {
         // Cheapest first; when that left no line, those furthest ahead of the minimum hours first.
         if (bySlack) labels.sort((a, b) => b.slack - a.slack || a.cost - b.cost);
