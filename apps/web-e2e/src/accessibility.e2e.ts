@@ -1,10 +1,5 @@
-import {
-  MAX_PAGE_SIZE,
-  type Page as ListPage,
-  PLANNING_ROUTES,
-  type RosterPeriodDto,
-} from '@rotaplex/contracts';
-import { apiCall, apiSignIn, findWard } from './support/api';
+import { type RosterPeriodDto } from '@rotaplex/contracts';
+import { apiSignIn, demoPeriod as findDemoPeriod, findWard } from './support/api';
 import { seriousViolations } from './support/axe';
 import { openBrowser, screenshot, signIn, signOut, type Session } from './support/browser';
 
@@ -20,17 +15,8 @@ describe('accessibility of the main pages (axe-core, WCAG 2.1 AA)', () => {
   beforeAll(async () => {
     const token = await apiSignIn('manager@example.com');
     const ward = await findWard(token);
-    const { items } = await apiCall<ListPage<RosterPeriodDto>>(
-      token,
-      'GET',
-      `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}&pageSize=${MAX_PAGE_SIZE}`,
-    );
-    // The demo period: the ward's earliest that has not started (the publish journey makes a week
-    // in 2024, and the order of the journeys is Jest's).
-    const today = new Date().toISOString().slice(0, 10);
-    demoPeriod = [...items]
-      .filter((p) => p.startDate >= today)
-      .sort((a, b) => a.startDate.localeCompare(b.startDate))[0];
+    // The demo period: the first made for the ward (other journeys add periods before or after it).
+    demoPeriod = await findDemoPeriod(token, ward.id);
     browser = await openBrowser();
   });
   afterAll(async () => {

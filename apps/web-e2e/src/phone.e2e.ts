@@ -1,12 +1,18 @@
 import {
-  MAX_PAGE_SIZE,
-  type Page as ListPage,
   PLANNING_ROUTES,
   PUBLISHING_ROUTES,
   SOLVING_ROUTES,
   type RosterPeriodDto,
 } from '@rotaplex/contracts';
-import { apiCall, apiSignIn, createPeriod, findWard, shiftIdsByCode, staffIdLookup } from './support/api';
+import {
+  apiCall,
+  apiSignIn,
+  createPeriod,
+  demoPeriod,
+  findWard,
+  shiftIdsByCode,
+  staffIdLookup,
+} from './support/api';
 import { openBrowser, screenshot, signIn, signOut, unnamedControls, type Session } from './support/browser';
 
 /**
@@ -25,18 +31,9 @@ describe('staff pages on a phone', () => {
   beforeAll(async () => {
     const token = await apiSignIn('manager@example.com');
     const ward = await findWard(token);
-    const { items: periods } = await apiCall<ListPage<RosterPeriodDto>>(
-      token,
-      'GET',
-      `${PLANNING_ROUTES.rosterPeriods}?unitId=${ward.id}&pageSize=${MAX_PAGE_SIZE}`,
-    );
-    // The demo period is the ward's earliest that has not started yet (other journeys may have made
-    // weeks in the past, which the order of the journeys decides); the week after it is free and
-    // within 100 days of today.
-    const today = new Date().toISOString().slice(0, 10);
-    const demo = [...periods]
-      .filter((p) => p.startDate >= today)
-      .sort((a, b) => a.startDate.localeCompare(b.startDate))[0];
+    // The week right after the demo period (the first period made for the ward: other journeys add
+    // periods of their own, before or after it, in Jest's order): free, and within 100 days of today.
+    const demo = await demoPeriod(token, ward.id);
     start = addDays(demo.startDate, demo.days);
     const period = await createPeriod(token, ward.id, start);
     const shift = await shiftIdsByCode(token, ward.id);

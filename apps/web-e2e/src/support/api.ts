@@ -1,5 +1,6 @@
 import {
   API_PREFIX,
+  MAX_PAGE_SIZE,
   PLANNING_ROUTES,
   type Page as PageOf,
   type RosterPeriodDto,
@@ -85,4 +86,26 @@ export async function managerPeriod(
   const token = await apiSignIn('manager@example.com');
   const ward = await findWard(token);
   return { token, ward, period: await createPeriod(token, ward.id, startDate, days) };
+}
+
+/**
+ * The demo's own roster period of the unit: the first period made for it, by the demo seed before
+ * any journey ran. Journeys add periods of their own before, after or between others in any order
+ * (Jest picks it), so the demo period is found by when it was made, never by its dates.
+ */
+export async function demoPeriod(token: string, unitId: string): Promise<RosterPeriodDto> {
+  const all: RosterPeriodDto[] = [];
+  for (let page = 1; ; page++) {
+    const { items, total } = await apiCall<PageOf<RosterPeriodDto>>(
+      token,
+      'GET',
+      `${PLANNING_ROUTES.rosterPeriods}?unitId=${unitId}&page=${page}&pageSize=${MAX_PAGE_SIZE}`,
+    );
+    all.push(...items);
+    if (items.length === 0 || all.length >= total) break;
+  }
+  const [first] = all.sort((a, b) => a.createdAt.localeCompare(b.createdAt));
+  // The seed's period is four weeks long (apps/api/src/demo/demo-planning.ts).
+  if (!first || first.days !== 28) throw new Error('The unit has no four-week demo period');
+  return first;
 }
