@@ -3,7 +3,7 @@ import { REFRESH_COOKIE, type TokenResponse } from '@rotaplex/contracts';
 import { createHmac } from 'node:crypto';
 import { IsNull, Not } from 'typeorm';
 import { JWT_AUDIENCE, JWT_ISSUER } from '../src/auth/jwt.strategy';
-import { RefreshTokenEntity } from '../src/auth/refresh-token.entity';
+import { RefreshTokenEntity } from '../src/users/credentials/refresh-token.entity';
 import { UserEntity } from '../src/users/user.entity';
 import { DEMO_ORGANISATION, DEMO_PASSWORD } from '../src/demo/demo-data';
 import {

@@ -17,7 +17,7 @@ import { AuthService } from './auth.service';
 import { JWT_AUDIENCE, JWT_ISSUER, JwtStrategy } from './jwt.strategy';
 import { MeController } from './me.controller';
 import { SignInAddressLimiter } from './sign-in-address-limiter';
-import { TokensModule } from './tokens.module';
+import { TokensModule } from '../users/credentials/tokens.module';
 
 @Module({
   imports: [

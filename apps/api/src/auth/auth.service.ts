@@ -10,9 +10,9 @@ import { passwordResetMail } from '../mail/templates';
 import { OrganisationService } from '../organisation/organisation.service';
 import { toUserDto } from '../users/users.service';
 import { UserEntity } from '../users/user.entity';
-import { OneTimeTokensService } from './one-time-tokens.service';
-import { PasswordService } from './password.service';
-import { RefreshTokensService } from './refresh-tokens.service';
+import { OneTimeTokensService } from '../users/credentials/one-time-tokens.service';
+import { PasswordService } from '../users/credentials/password.service';
+import { RefreshTokensService } from '../users/credentials/refresh-tokens.service';
 
 /** What the controller needs to answer a sign-in or refresh: the body and the new refresh cookie. */
 export interface SessionTokens {

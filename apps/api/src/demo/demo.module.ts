@@ -1,5 +1,5 @@
 import { Module } from '@nestjs/common';
-import { TokensModule } from '../auth/tokens.module';
+import { TokensModule } from '../users/credentials/tokens.module';
 import { MailModule } from '../mail/mail.module';
 import { FirstRunService } from './first-run.service';
 

@@ -1,6 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { TokensModule } from '../auth/tokens.module';
+import { TokensModule } from './credentials/tokens.module';
 import { MailModule } from '../mail/mail.module';
 import { UnitsModule } from '../units/units.module';
 import { UserEntity } from './user.entity';

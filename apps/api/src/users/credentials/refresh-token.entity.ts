@@ -7,7 +7,7 @@ import {
   ManyToOne,
   PrimaryGeneratedColumn,
 } from 'typeorm';
-import { UserEntity } from '../users/user.entity';
+import { UserEntity } from '../user.entity';
 
 /**
  * One refresh token of a rotation family. Only the SHA-256 hash of the token is stored. Using a

@@ -6,7 +6,7 @@ import { PasswordService } from './password.service';
 import { RefreshTokenEntity } from './refresh-token.entity';
 import { RefreshTokensService } from './refresh-tokens.service';
 
-/** Passwords and tokens, shared by the auth and users features. */
+/** A user's credentials (password hashing, refresh and one-time tokens): used by users, auth and demo. */
 @Module({
   imports: [TypeOrmModule.forFeature([RefreshTokenEntity, OneTimeTokenEntity])],
   providers: [PasswordService, RefreshTokensService, OneTimeTokensService],

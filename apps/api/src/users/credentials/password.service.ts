@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import * as argon2 from 'argon2';
-import { AppConfig } from '../config/app-config';
+import { AppConfig } from '../../config/app-config';
 
 /**
  * Password hashing with argon2id (salt and parameters are part of the encoded hash). Production

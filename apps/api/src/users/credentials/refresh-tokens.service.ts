@@ -2,8 +2,8 @@ import { Injectable, Logger, UnauthorizedException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, Not, Repository } from 'typeorm';
-import { randomToken, sha256 } from '../common/crypto';
-import { AppConfig } from '../config/app-config';
+import { randomToken, sha256 } from '../../common/crypto';
+import { AppConfig } from '../../config/app-config';
 import { RefreshTokenEntity } from './refresh-token.entity';
 
 export interface IssuedRefreshToken {

@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { IsNull, type EntityManager } from 'typeorm';
-import { randomToken, sha256 } from '../common/crypto';
-import { AppConfig } from '../config/app-config';
+import { randomToken, sha256 } from '../../common/crypto';
+import { AppConfig } from '../../config/app-config';
 import { OneTimeTokenEntity, type OneTimeTokenPurpose } from './one-time-token.entity';
 
 /**

@@ -8,7 +8,7 @@ import {
   ManyToOne,
   PrimaryGeneratedColumn,
 } from 'typeorm';
-import { UserEntity } from '../users/user.entity';
+import { UserEntity } from '../user.entity';
 
 export type OneTimeTokenPurpose = 'invitation' | 'password-reset';
 
