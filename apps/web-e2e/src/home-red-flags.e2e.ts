@@ -85,4 +85,33 @@ describe('home page: red flags on published rosters', () => {
     await screenshot(page, 'red-flag-home-390', { fullPage: false });
     await page.setViewportSize({ width: 1360, height: 860 });
   });
+
+  it('marks the red-flag cell of the board’s cover rows with a flag and words, not colour alone', async () => {
+    const { page } = browser;
+    await page.goto(`/planning/periods/${period.id}/board`);
+    const cover = page
+      .getByRole('table', { name: 'Planning board' })
+      .locator('tbody[aria-label="Cover against needs"]');
+    await cover.locator('td[data-red-flag="true"]').first().waitFor();
+    const flagged = await cover
+      .locator('td[data-red-flag="true"]')
+      .evaluateAll((tds) => tds.map((td) => [td.getAttribute('title') ?? '', (td as HTMLElement).innerText]));
+    // The first night: 1 registered nurse of the 2 it needs (the override above), fewer than 2.
+    const night = flagged.find(([title]) =>
+      /^Mon 3 Jun, Night \(Registered nurse\): 1 on, minimum 2\b/.test(title),
+    );
+    expect(night?.[0]).toMatch(/Red flag \(NICE safe-staffing guideline SG1\): .*1 on the shift of 2 needed/);
+    expect(night?.[1]).toMatch(/short 1\s+red flag$/);
+    // Only rows of a registered skill carry red flags: none in the rows for anyone on the shift.
+    expect(flagged.every(([title]) => /^\w{3} \d{1,2} \w{3}, [^:]+ \(Registered nurse\): /.test(title))).toBe(
+      true,
+    );
+    const cell = cover.locator('td[data-red-flag="true"][title^="Mon 3 Jun, Night "]');
+    await cell.scrollIntoViewIfNeeded();
+    await screenshot(page, 'red-flag-cell', { fullPage: false });
+    await page.setViewportSize({ width: 390, height: 844 });
+    await cell.scrollIntoViewIfNeeded();
+    await screenshot(page, 'red-flag-cell-390', { fullPage: false });
+    await page.setViewportSize({ width: 1360, height: 860 });
+  });
 });

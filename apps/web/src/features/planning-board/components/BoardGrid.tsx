@@ -2,12 +2,18 @@ import type { KeyboardEvent } from 'react';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import {
   BeachRegular,
+  FlagFilled,
   PersonFeedbackFilled,
   PersonFeedbackRegular,
   PinFilled,
   WarningFilled,
 } from '@fluentui/react-icons';
-import type { AssignmentGridDto, ShiftTypeDto } from '@rotaplex/contracts';
+import {
+  type AssignmentGridDto,
+  RED_FLAG_SOURCE,
+  type RedFlagDto,
+  type ShiftTypeDto,
+} from '@rotaplex/contracts';
 import { ShiftChip } from '@/features/planning/components/ShiftChip';
 import {
   coverState,
@@ -16,6 +22,7 @@ import {
   type CoverState,
   type HoursLine,
 } from '../utils/boardSummary';
+import { coverCellKey } from '../utils/boardQuality';
 import { dayOfMonth, formatDay, formatWeekday } from '../utils/days';
 import { marksText, type CellMarks } from '../utils/requestMarks';
 
@@ -73,6 +80,21 @@ const useStyles = makeStyles({
   met: { color: tokens.colorPaletteGreenForeground1 },
   over: { backgroundColor: tokens.colorPaletteBlueBackground2, color: tokens.colorPaletteBlueForeground2 },
   none: { color: tokens.colorNeutralForeground3 },
+  // A red flag of safe staffing: a flag and the words, with a frame inside the cell (never colour alone).
+  redFlagCell: {
+    outline: `${tokens.strokeWidthThick} solid ${tokens.colorPaletteRedBorder2}`,
+    outlineOffset: `calc(-1 * ${tokens.strokeWidthThick})`,
+    // Room for the words inside the frame (the table's cells are narrow).
+    '&&': { paddingLeft: tokens.spacingHorizontalXS, paddingRight: tokens.spacingHorizontalXS },
+  },
+  redFlag: {
+    display: 'inline-flex',
+    alignItems: 'center',
+    gap: '2px',
+    whiteSpace: 'nowrap',
+    fontSize: tokens.fontSizeBase100,
+    fontWeight: tokens.fontWeightSemibold,
+  },
   hours: { whiteSpace: 'nowrap', textAlign: 'right' },
   under: { color: tokens.colorPaletteRedForeground1 },
   coverHead: { backgroundColor: tokens.colorNeutralBackground2 },
@@ -101,6 +123,8 @@ export interface BoardGridProps {
   onOpenCell: (staffMemberId: string, date: string) => void;
   /** Date requests and leave per "staffMemberId|date" (empty while they load or when unreadable). */
   marks?: Map<string, CellMarks>;
+  /** Red flags of safe staffing per cover cell (coverCellKey: shift type, skill, date). */
+  redFlags?: Map<string, RedFlagDto>;
 }
 
 const isWeekend = (date: string) => [0, 6].includes(new Date(`${date}T00:00:00Z`).getUTCDay());
@@ -141,6 +165,7 @@ export function BoardGrid({
   readOnly,
   onOpenCell,
   marks,
+  redFlags,
 }: BoardGridProps) {
   const styles = useStyles();
   const shiftCodes = new Map([...shiftTypes.values()].map((s) => [s.id, s.code]));
@@ -261,14 +286,25 @@ export function BoardGrid({
                 const state = coverState(day.count, day.need);
                 const words = COVER_WORDS[state];
                 const date = grid.dates[d];
+                const flag = redFlags?.get(coverCellKey(line.shiftType.id, line.skill?.id ?? null, date));
                 return (
                   <td
                     key={date}
-                    className={styles[state]}
-                    title={`${formatDay(date)}, ${line.shiftType.name}${line.skill ? ` (${line.skill.name})` : ''}: ${day.count} on${day.need ? `, minimum ${day.need.min}, target ${day.need.target}` : ', no need set'}${words ? `, ${words}` : ''}`}
+                    className={mergeClasses(styles[state], flag && styles.redFlagCell)}
+                    title={
+                      `${formatDay(date)}, ${line.shiftType.name}${line.skill ? ` (${line.skill.name})` : ''}: ${day.count} on${day.need ? `, minimum ${day.need.min}, target ${day.need.target}` : ', no need set'}${words ? `, ${words}` : ''}` +
+                      (flag ? `. Red flag (${RED_FLAG_SOURCE}): ${flag.text}` : '')
+                    }
+                    data-red-flag={flag ? 'true' : undefined}
                   >
                     <strong>{day.count}</strong>
                     {day.need && <div>{coverWords(state, day.count, day.need)}</div>}
+                    {flag && (
+                      <div className={styles.redFlag}>
+                        <FlagFilled aria-hidden />
+                        red flag
+                      </div>
+                    )}
                   </td>
                 );
               })}

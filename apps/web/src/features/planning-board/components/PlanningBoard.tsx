@@ -37,7 +37,7 @@ import {
 import { useSolveRun } from '../hooks/useSolveRun';
 import { coverLines, hoursAgainstContract } from '../utils/boardSummary';
 import { requestMarks } from '../utils/requestMarks';
-import { boardRedFlags, gradeUnmetNeeds, qualityLine } from '../utils/boardQuality';
+import { boardRedFlags, gradeUnmetNeeds, qualityLine, redFlagsByCell } from '../utils/boardQuality';
 import { BoardGrid } from './BoardGrid';
 import { CellDialog } from './CellDialog';
 import { SolvePanel } from './SolvePanel';
@@ -157,6 +157,7 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
     () => (grid.data ? boardRedFlags(cover, grid.data.dates) : []),
     [cover, grid.data],
   );
+  const redFlagCells = useMemo(() => redFlagsByCell(redFlags), [redFlags]);
   const qualityText = useMemo(
     () => (result ? qualityLine({ result, hours, marks }) : null),
     [result, hours, marks],
@@ -260,6 +261,7 @@ export function PlanningBoard({ period }: { period: RosterPeriodDto }) {
             readOnly={readOnly || running}
             onOpenCell={(staffMemberId, date) => setOpen({ staffMemberId, date })}
             marks={marks}
+            redFlags={redFlagCells}
           />
         )}
       </section>

@@ -1,5 +1,12 @@
 import type { ShiftTypeDto, SkillDto, UnmetNeedExplanationDto } from '@rotaplex/contracts';
-import { boardRedFlags, gapPercent, gradeUnmetNeeds, qualityLine } from './boardQuality';
+import {
+  boardRedFlags,
+  coverCellKey,
+  gapPercent,
+  gradeUnmetNeeds,
+  qualityLine,
+  redFlagsByCell,
+} from './boardQuality';
 import type { CoverLine, HoursLine } from './boardSummary';
 
 const night: ShiftTypeDto = {
@@ -136,6 +143,20 @@ describe('red flags on the board (NICE SG1 2014 via PRODUCT.md: "fewer than 2 re
       ['2027-01-06', 1, 11.5, 3],
     ]);
     expect(flags[1].text).toMatch(/^Wed 6 Jan, Night, Registered nurse \(RN\): 1 on the shift of 2 needed/);
+  });
+
+  it('marks the cover cells the red flags stand on, and no other (the RN row, not the "anyone" row)', () => {
+    const registered = cover.map((l) => (l.skill ? { ...l, skill: { ...rn, registered: true } } : l));
+    const cells = redFlagsByCell(boardRedFlags(registered, dates));
+    // The cells of the 5th and 6th in the RN row: 0 and 1 of the 2 needed (fewer than 2 on the shift).
+    expect([...cells.keys()]).toEqual([
+      coverCellKey('N', 'rn', '2027-01-05'),
+      coverCellKey('N', 'rn', '2027-01-06'),
+    ]);
+    expect(cells.get(coverCellKey('N', 'rn', '2027-01-06'))?.onShift).toBe(1);
+    // 2 of 2 on the 4th is safe; the row for anyone on the shift holds no registered skill.
+    expect(cells.has(coverCellKey('N', 'rn', '2027-01-04'))).toBe(false);
+    expect(dates.some((d) => cells.has(coverCellKey('N', null, d)))).toBe(false);
   });
 
   it('finds none when the skill is not marked registered', () => {

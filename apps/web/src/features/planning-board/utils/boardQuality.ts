@@ -90,6 +90,18 @@ export function boardRedFlags(cover: readonly CoverLine[], dates: readonly strin
   return sortRedFlags(out);
 }
 
+/** The key of one cover cell of the board: a shift type, a skill (null: anyone) and a date. */
+export const coverCellKey = (shiftTypeId: string, skillId: string | null, date: string): string =>
+  `${shiftTypeId}|${skillId ?? ''}|${date}`;
+
+/**
+ * The red flags by the cover cell they stand on (coverCellKey), for marking the board's cover rows.
+ * A cover row holds one skill, so a cell has at most one red flag.
+ */
+export function redFlagsByCell(flags: readonly RedFlagDto[]): Map<string, RedFlagDto> {
+  return new Map(flags.map((f) => [coverCellKey(f.shiftTypeId, f.skillId, f.date), f]));
+}
+
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /** The relative gap in words with one rounding (0.1 percentage point), used on the face and in details. */
