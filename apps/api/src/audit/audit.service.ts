@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { AUDIT_KINDS, type AuditKind } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
-import { type EntityManager } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { UsersService } from '../users/users.service';
 import { AuditEntryEntity } from './audit-entry.entity';
 
@@ -17,10 +17,38 @@ export interface AuditRecord {
 
 const MAX_SUMMARY_LENGTH = 1000;
 
-/** Writes the audit trail of published rosters. Always in the transaction of the change it records. */
+/**
+ * Writes the audit trail of published rosters, always in the transaction of the change it records,
+ * and reads it for other modules (no access check: the caller checks).
+ */
 @Injectable()
 export class AuditService {
-  constructor(private readonly users: UsersService) {}
+  constructor(
+    private readonly users: UsersService,
+    private readonly dataSource: DataSource,
+  ) {}
+
+  /** A page of the period's trail by time (then id), with the number of entries in all. */
+  pageOf(
+    periodId: string,
+    query: { order?: 'asc' | 'desc'; page: number; pageSize: number },
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<[AuditEntryEntity[], number]> {
+    return em.findAndCount(AuditEntryEntity, {
+      where: { rosterPeriodId: periodId },
+      order: { at: query.order === 'desc' ? 'DESC' : 'ASC', id: 'ASC' },
+      skip: (query.page - 1) * query.pageSize,
+      take: query.pageSize,
+    });
+  }
+
+  /** The period's whole trail, oldest first. */
+  ofPeriod(periodId: string, em: EntityManager = this.dataSource.manager): Promise<AuditEntryEntity[]> {
+    return em.find(AuditEntryEntity, {
+      where: { rosterPeriodId: periodId },
+      order: { at: 'ASC', id: 'ASC' },
+    });
+  }
 
   async record(em: EntityManager, entry: AuditRecord): Promise<void> {
     if (!(AUDIT_KINDS as readonly string[]).includes(entry.kind)) {

@@ -13,7 +13,7 @@ import {
   type ContractRules,
   GUARD_RAIL_DEFERRAL,
 } from '@rotaplex/contracts';
-import { Brackets, DataSource, Repository } from 'typeorm';
+import { Brackets, DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { UnitsService } from '../units/units.service';
@@ -27,6 +27,11 @@ export class ContractsService {
     private readonly units: UnitsService,
     private readonly dataSource: DataSource,
   ) {}
+
+  /** Contracts by id, any unit (for other services; unknown ids left out). */
+  async byIds(ids: string[], em: EntityManager = this.dataSource.manager): Promise<ContractEntity[]> {
+    return ids.length ? em.findBy(ContractEntity, { id: In(ids) }) : [];
+  }
 
   /** Organisation-wide contracts and those of the units the caller may see. */
   async list(user: AuthUser, query: ContractQueryDto): Promise<ContractDto[]> {

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { ContractsModule } from '../contracts/contracts.module';
 import { MailModule } from '../mail/mail.module';
 import { RosterInputModule } from '../roster-input/roster-input.module';
 import { RosterPeriodsModule } from '../roster-periods/roster-periods.module';
@@ -12,6 +13,7 @@ import { PublishingService } from './publishing.service';
 @Module({
   imports: [
     TypeOrmModule.forFeature([RosterPublicationEntity]),
+    ContractsModule,
     MailModule,
     RosterPeriodsModule,
     RosterInputModule,

@@ -1,6 +1,5 @@
 import { ConflictException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import {
-  ACTIVE_SOLVE_RUN_STATUSES,
   type AuditEntryDto,
   type Page,
   type PublishCheckDto,
@@ -11,22 +10,20 @@ import {
 } from '@rotaplex/contracts';
 import { type Roster } from '@rotaplex/roster-model';
 import { randomUUID } from 'node:crypto';
-import { DataSource, type EntityManager, In } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { checkDto, rosterOf, saveSolvedRoster } from '../assignments/assignments.service';
-import { AuditEntryEntity } from '../audit/audit-entry.entity';
+import { type AuditEntryEntity } from '../audit/audit-entry.entity';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser } from '../common/auth-user';
 import { type PageQueryDto, toPage } from '../common/pagination';
 import { AppConfig } from '../config/app-config';
-import { ContractEntity } from '../contracts/contract.entity';
+import { ContractsService } from '../contracts/contracts.service';
 import { MailService } from '../mail/mail.service';
 import { lateChangesOf, lateNotes, lateSummary } from '../roster-periods/notice-window';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { PeriodWriter } from '../roster-periods/period-writer';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
-import { SolveRunEntity } from '../solve-runs/solve-run.entity';
 import { type SolveRunMode, SolveRunsService } from '../solve-runs/solve-runs.service';
 import { toCsv } from '../common/csv';
 import { type PublishedCell, RosterPublicationEntity } from './roster-publication.entity';
@@ -48,6 +45,7 @@ export class PublishingService {
     private readonly audit: AuditService,
     private readonly solveRuns: SolveRunsService,
     private readonly writer: PeriodWriter,
+    private readonly contracts: ContractsService,
   ) {}
 
   /**
@@ -63,12 +61,7 @@ export class PublishingService {
     const roster = rosterOf(input, rows);
     const cells = publishedCells(input, rows);
     const contractIds = [...new Set(input.staff.flatMap((s) => (s.contractId ? [s.contractId] : [])))];
-    const contracts = new Map(
-      (contractIds.length ? await em.findBy(ContractEntity, { id: In(contractIds) }) : []).map((c) => [
-        c.id,
-        c,
-      ]),
-    );
+    const contracts = new Map((await this.contracts.byIds(contractIds, em)).map((c) => [c.id, c]));
     const short = belowMinimum(input, roster, true);
     const flags = redFlags(input, roster);
     const blockers: string[] = [];
@@ -106,16 +99,13 @@ export class PublishingService {
     const { version } = request;
     await this.periods.get(user, periodId); // 404 / 403 by unit
     return this.dataSource.transaction(async (em) => {
-      const period = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
+      const period = await this.periods.byIdOrFail(periodId, em);
       if (period.status !== 'draft') {
         throw new ConflictException(`Only a draft period can be published; this one is ${period.status}`);
       }
       // A stale version answers 409 with the cell changes made since it (StaleVersionDto).
       await this.writer.assertVersion(em, period, version);
-      const running = await em.findOneBy(SolveRunEntity, {
-        rosterPeriodId: periodId,
-        status: In([...ACTIVE_SOLVE_RUN_STATUSES]),
-      });
+      const running = await this.solveRuns.activeOf(periodId, em);
       if (running) {
         throw new ConflictException(
           `A solve run is ${running.status} for this period: wait for it or stop it`,
@@ -145,13 +135,9 @@ export class PublishingService {
         );
       }
       const publishedAt = new Date();
-      const updated = await em
-        .createQueryBuilder()
-        .update(RosterPeriodEntity)
-        .set({ status: 'published', publishedAt })
-        .where(`id = :id AND version = :version AND status = 'draft'`, { id: periodId, version })
-        .execute();
-      if (updated.affected !== 1) throw new ConflictException('The period was changed meanwhile: reload it');
+      if (!(await this.periods.markPublished(em, periodId, version, publishedAt))) {
+        throw new ConflictException('The period was changed meanwhile: reload it');
+      }
       await em.insert(RosterPublicationEntity, {
         id: randomUUID(),
         rosterPeriodId: periodId,
@@ -176,7 +162,7 @@ export class PublishingService {
         after: cells,
       });
       const emailed = await this.mailPeople(em, input, rosterOf(input, rows), null, 'published');
-      const saved = await em.findOneByOrFail(RosterPeriodEntity, { id: periodId });
+      const saved = await this.periods.byIdOrFail(periodId, em);
       return {
         rosterPeriodId: periodId,
         status: 'published',
@@ -202,7 +188,7 @@ export class PublishingService {
         input.problem.published = reference;
       },
       save: async (em, input, roster, run) => {
-        const period = await em.findOneBy(RosterPeriodEntity, { id: periodId });
+        const period = await this.periods.byId(periodId, em);
         if (!period || period.status !== 'published') {
           throw new Error(
             `the period was ${period ? period.status : 'deleted'} during the repair; nothing was changed`,
@@ -260,12 +246,7 @@ export class PublishingService {
 
   async auditTrail(user: AuthUser, periodId: string, query: PageQueryDto): Promise<Page<AuditEntryDto>> {
     await this.periods.get(user, periodId);
-    const [rows, total] = await this.dataSource.manager.findAndCount(AuditEntryEntity, {
-      where: { rosterPeriodId: periodId },
-      order: { at: query.order === 'desc' ? 'DESC' : 'ASC', id: 'ASC' },
-      skip: (query.page - 1) * query.pageSize,
-      take: query.pageSize,
-    });
+    const [rows, total] = await this.audit.pageOf(periodId, query);
     return toPage(rows.map(toAuditDto), total, query);
   }
 
@@ -278,10 +259,7 @@ export class PublishingService {
     await this.periods.get(user, periodId);
     const input = await this.input.load(periodId);
     const rows = await this.writer.rowsOf(periodId);
-    const trail = await this.dataSource.manager.find(AuditEntryEntity, {
-      where: { rosterPeriodId: periodId },
-      order: { at: 'ASC', id: 'ASC' },
-    });
+    const trail = await this.audit.ofPeriod(periodId);
     const staffById = new Map(input.staff.map((s) => [s.id, s]));
     const shiftById = new Map(input.shiftTypes.map((s) => [s.id, s]));
     const dayOf = new Map(input.dates.map((d, i) => [d, i]));

@@ -96,6 +96,20 @@ export class RosterPeriodsService {
   }
 
   /**
+   * Marks the draft period published at `publishedAt`, in `em`'s transaction, if it is still a
+   * draft at `version`; answers whether it did (no access or content checks: the publisher makes them).
+   */
+  async markPublished(em: EntityManager, id: string, version: number, publishedAt: Date): Promise<boolean> {
+    const updated = await em
+      .createQueryBuilder()
+      .update(RosterPeriodEntity)
+      .set({ status: 'published', publishedAt })
+      .where(`id = :id AND version = :version AND status = 'draft'`, { id, version })
+      .execute();
+    return updated.affected === 1;
+  }
+
+  /**
    * Sets how many date requests each person may make in the period (no access check: the caller
    * checks), in `em`'s transaction when given, else in one of its own; 409 unless the period is a
    * draft. Answers the saved period.

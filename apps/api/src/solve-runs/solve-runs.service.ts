@@ -167,6 +167,14 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
     await Promise.allSettled(running);
   }
 
+  /** The period's queued or running solve, if any, read in `em`'s transaction when given. */
+  activeOf(periodId: string, em: EntityManager = this.dataSource.manager): Promise<SolveRunEntity | null> {
+    return em.findOneBy(SolveRunEntity, {
+      rosterPeriodId: periodId,
+      status: In([...ACTIVE_SOLVE_RUN_STATUSES]),
+    });
+  }
+
   async start(
     user: AuthUser,
     periodId: string,
@@ -183,10 +191,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
       );
     }
     const run = await this.dataSource.transaction(async (em) => {
-      const current = await em.findOneBy(SolveRunEntity, {
-        rosterPeriodId: periodId,
-        status: In([...ACTIVE_SOLVE_RUN_STATUSES]),
-      });
+      const current = await this.activeOf(periodId, em);
       if (current) {
         throw new ConflictException(
           `A solve run is already ${current.status} for this period (${current.id}); wait for it or cancel it`,
