@@ -11,6 +11,7 @@ import {
   type UnitDto,
 } from '@rotaplex/contracts';
 import { apiCall, managerPeriod, shiftIdsByCode } from './support/api';
+import { seriousViolations } from './support/axe';
 import { openBrowser, screenshot, signIn, unnamedControls, type Session } from './support/browser';
 
 // Issue 10, items 1 and 4: the manager's home page lists red flags of safe staffing on published
@@ -106,6 +107,7 @@ describe('home page: red flags on published rosters', () => {
     expect(flagged.every(([title]) => /^\w{3} \d{1,2} \w{3}, [^:]+ \(Registered nurse\): /.test(title))).toBe(
       true,
     );
+    expect(await seriousViolations(page)).toEqual([]); // axe-core, WCAG 2.1 AA (support/axe.ts)
     const cell = cover.locator('td[data-red-flag="true"][title^="Mon 3 Jun, Night "]');
     await cell.scrollIntoViewIfNeeded();
     await screenshot(page, 'red-flag-cell', { fullPage: false });
