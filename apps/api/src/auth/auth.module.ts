@@ -3,11 +3,9 @@ import { Module } from '@nestjs/common';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { ThrottlerModule } from '@nestjs/throttler';
-import { TypeOrmModule } from '@nestjs/typeorm';
 import { AppConfig } from '../config/app-config';
 import { MailModule } from '../mail/mail.module';
 import { OrganisationModule } from '../organisation/organisation.module';
-import { UserEntity } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
 import { authThrottlers, AuthThrottlerGuard } from './auth-throttler.guard';
 import { ClusterSignInAddressLimiter } from './cluster-sign-in-address-limiter';
@@ -21,7 +19,6 @@ import { TokensModule } from '../users/credentials/tokens.module';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([UserEntity]),
     PassportModule,
     JwtModule.registerAsync({
       inject: [AppConfig],

@@ -1,15 +1,14 @@
 import { BadRequestException, Injectable, Logger, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { InjectRepository } from '@nestjs/typeorm';
 import { type MeResponse, permissionsOf, type TokenResponse, WEB_PATHS } from '@rotaplex/contracts';
-import { DataSource, Repository } from 'typeorm';
+import { DataSource } from 'typeorm';
 import { type AccessTokenPayload, type AuthUser } from '../common/auth-user';
 import { AppConfig } from '../config/app-config';
 import { MailService } from '../mail/mail.service';
 import { passwordResetMail } from '../mail/templates';
 import { OrganisationService } from '../organisation/organisation.service';
-import { toUserDto } from '../users/users.service';
-import { UserEntity } from '../users/user.entity';
+import { toUserDto, UsersService } from '../users/users.service';
+import { type UserEntity } from '../users/user.entity';
 import { OneTimeTokensService } from '../users/credentials/one-time-tokens.service';
 import { PasswordService } from '../users/credentials/password.service';
 import { RefreshTokensService } from '../users/credentials/refresh-tokens.service';
@@ -28,7 +27,7 @@ export class AuthService {
   constructor(
     private readonly config: AppConfig,
     private readonly dataSource: DataSource,
-    @InjectRepository(UserEntity) private readonly users: Repository<UserEntity>,
+    private readonly users: UsersService,
     private readonly passwords: PasswordService,
     private readonly refreshTokens: RefreshTokensService,
     private readonly oneTimeTokens: OneTimeTokensService,
@@ -38,7 +37,7 @@ export class AuthService {
   ) {}
 
   async login(email: string, password: string): Promise<SessionTokens> {
-    const user = await this.users.findOne({ where: { email }, relations: { units: true } });
+    const user = await this.users.byEmail(email, true);
     const ok =
       user?.passwordHash != null
         ? await this.passwords.verify(user.passwordHash, password)
@@ -51,10 +50,8 @@ export class AuthService {
 
   async refresh(token: string | undefined): Promise<SessionTokens> {
     if (!token) throw new UnauthorizedException('No refresh token');
-    const next = await this.refreshTokens.rotate(token, async (userId) =>
-      this.users.existsBy({ id: userId, active: true }),
-    );
-    const user = await this.users.findOneOrFail({ where: { id: next.userId }, relations: { units: true } });
+    const next = await this.refreshTokens.rotate(token, async (userId) => this.users.isActive(userId));
+    const user = await this.users.withUnitsOrFail(next.userId);
     return this.session(user, next.token, next.expiresAt);
   }
 
@@ -63,7 +60,7 @@ export class AuthService {
   }
 
   async me(caller: AuthUser): Promise<MeResponse> {
-    const user = await this.users.findOneOrFail({ where: { id: caller.id }, relations: { units: true } });
+    const user = await this.users.withUnitsOrFail(caller.id);
     return this.toMe(user);
   }
 
@@ -74,14 +71,14 @@ export class AuthService {
     next: string,
     refreshCookie: string | undefined,
   ): Promise<void> {
-    const user = await this.users.findOneByOrFail({ id: caller.id });
+    const user = await this.users.byIdOrFail(caller.id);
     if (!user.passwordHash || !(await this.passwords.verify(user.passwordHash, current))) {
       // 400, not 401: the caller is signed in; the field is wrong.
       throw new BadRequestException('currentPassword is not your current password');
     }
     const hash = await this.passwords.hash(next);
     const keep = await this.refreshTokens.familyOf(refreshCookie);
-    await this.users.update({ id: user.id }, { passwordHash: hash });
+    await this.users.setPasswordHash(user.id, hash);
     await this.refreshTokens.revokeAllForUser(user.id, keep);
   }
 
@@ -90,15 +87,15 @@ export class AuthService {
     const hash = await this.passwords.hash(password);
     await this.dataSource.transaction(async (em) => {
       const userId = await this.oneTimeTokens.consume(em, token, 'invitation');
-      const user = await em.findOneByOrFail(UserEntity, { id: userId });
+      const user = await this.users.byIdOrFail(userId, em);
       if (!user.active) throw new UnauthorizedException('This account is deactivated');
-      await em.update(UserEntity, { id: userId }, { passwordHash: hash });
+      await this.users.setPasswordHash(userId, hash, em);
     });
   }
 
   /** Always succeeds from the caller's point of view: whether the e-mail exists is not revealed. */
   async requestPasswordReset(email: string): Promise<void> {
-    const user = await this.users.findOneBy({ email });
+    const user = await this.users.byEmail(email);
     if (!user || !user.active) return;
     const token = await this.dataSource.transaction((em) =>
       this.oneTimeTokens.create(em, user.id, 'password-reset'),
@@ -122,9 +119,9 @@ export class AuthService {
     const hash = await this.passwords.hash(password);
     const userId = await this.dataSource.transaction(async (em) => {
       const id = await this.oneTimeTokens.consume(em, token, 'password-reset');
-      const user = await em.findOneByOrFail(UserEntity, { id });
+      const user = await this.users.byIdOrFail(id, em);
       if (!user.active) throw new UnauthorizedException('This account is deactivated');
-      await em.update(UserEntity, { id }, { passwordHash: hash });
+      await this.users.setPasswordHash(id, hash, em);
       return id;
     });
     await this.refreshTokens.revokeAllForUser(userId);

@@ -169,6 +169,34 @@ export class UsersService {
     return ids.length ? em.findBy(UserEntity, { id: In(ids) }) : [];
   }
 
+  /** A user by e-mail (with their units when `withUnits`), or null. */
+  byEmail(
+    email: string,
+    withUnits = false,
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<UserEntity | null> {
+    return em.findOne(UserEntity, { where: { email }, relations: { units: withUnits } });
+  }
+
+  /** A user by id with their units; TypeORM's EntityNotFoundError when there is none. */
+  withUnitsOrFail(id: string, em: EntityManager = this.dataSource.manager): Promise<UserEntity> {
+    return em.findOneOrFail(UserEntity, { where: { id }, relations: { units: true } });
+  }
+
+  /** Whether the user exists and is active. */
+  isActive(id: string, em: EntityManager = this.dataSource.manager): Promise<boolean> {
+    return em.existsBy(UserEntity, { id, active: true });
+  }
+
+  /** Stores a new password hash for the user (auth checks the old password or the link first). */
+  async setPasswordHash(
+    id: string,
+    passwordHash: string,
+    em: EntityManager = this.dataSource.manager,
+  ): Promise<void> {
+    await em.update(UserEntity, { id }, { passwordHash });
+  }
+
   /** A user of the organisation with their units, or null. */
   inOrganisationWithUnits(
     id: string,
