@@ -30,7 +30,6 @@ import { saveSolvedRoster } from '../assignments/assignments.service';
 import { type AuthUser } from '../common/auth-user';
 import { isPostgres } from '../database/data-source-options';
 import { PeriodWriter } from '../roster-periods/period-writer';
-import { RosterPeriodEntity } from '../roster-periods/roster-period.entity';
 import { RosterPeriodsService } from '../roster-periods/roster-periods.service';
 import { type RosterInput, RosterInputService } from '../roster-input/roster-input.service';
 import { type StartSolveRunDto } from './dto/solve-run.dto';
@@ -449,7 +448,7 @@ export class SolveRunsService implements OnApplicationBootstrap, OnModuleDestroy
         );
         return;
       }
-      const period = await em.findOneBy(RosterPeriodEntity, { id: input.period.id });
+      const period = await this.periods.byId(input.period.id, em);
       if (!period || period.status !== 'draft') {
         await em.update(
           SolveRunEntity,
