@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { type NoticeWindowSettingsDto, type OrganisationDto } from '@rotaplex/contracts';
-import { Repository } from 'typeorm';
+import { type EntityManager, Repository } from 'typeorm';
 import { OrganisationEntity } from './organisation.entity';
 
 @Injectable()
@@ -9,6 +9,11 @@ export class OrganisationService {
   constructor(
     @InjectRepository(OrganisationEntity) private readonly organisations: Repository<OrganisationEntity>,
   ) {}
+
+  /** The organisation by id, or null (for other services), in `em`'s transaction when given. */
+  byId(id: string, em: EntityManager = this.organisations.manager): Promise<OrganisationEntity | null> {
+    return em.findOneBy(OrganisationEntity, { id });
+  }
 
   async get(id: string): Promise<OrganisationDto> {
     const org = await this.organisations.findOneBy({ id });

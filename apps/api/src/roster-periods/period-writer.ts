@@ -7,7 +7,7 @@ import {
 } from '@rotaplex/contracts';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager, MoreThan, MoreThanOrEqual } from 'typeorm';
-import { UserEntity } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { AssignmentEntity } from './assignment.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
 import { recordLateChanges, type ShiftChange } from './notice-window';
@@ -44,7 +44,10 @@ export interface CellChangeBy {
  */
 @Injectable()
 export class PeriodWriter {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly users: UsersService,
+  ) {}
 
   /**
    * The period's cells as stored (a shift, or a pinned day off), read in `em`'s transaction when
@@ -247,10 +250,7 @@ export class PeriodWriter {
     let actorName = 'Rotaplex (system)';
     let actorUserId: string | null = null;
     if (by.actorUserId !== null) {
-      const user = await em.findOne(UserEntity, {
-        where: { id: by.actorUserId },
-        select: { id: true, displayName: true },
-      });
+      const user = await this.users.byId(by.actorUserId, em);
       actorName = user?.displayName.slice(0, 200) ?? 'a user removed since';
       actorUserId = user?.id ?? null;
     }

@@ -1,6 +1,8 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { OrganisationModule } from '../organisation/organisation.module';
 import { UnitsModule } from '../units/units.module';
+import { UsersModule } from '../users/users.module';
 import { AssignmentEntity } from './assignment.entity';
 import { LateChangeEntity } from './late-change.entity';
 import { RosterPeriodChangeEntity } from './roster-period-change.entity';
@@ -17,7 +19,9 @@ import { PeriodWriter } from './period-writer';
       LateChangeEntity,
       AssignmentEntity,
     ]),
+    OrganisationModule,
     UnitsModule,
+    UsersModule,
   ],
   controllers: [RosterPeriodsController],
   providers: [RosterPeriodsService, PeriodWriter],

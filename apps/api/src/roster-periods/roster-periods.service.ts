@@ -10,8 +10,7 @@ import { DataSource, type EntityManager, In, Not, Repository } from 'typeorm';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
 import { addDays, isRealDate } from '../common/dates';
-import { OrganisationEntity } from '../organisation/organisation.entity';
-import { toNoticeWindowDto } from '../organisation/organisation.service';
+import { OrganisationService } from '../organisation/organisation.service';
 import { UnitEntity } from '../units/unit.entity';
 import { UnitsService } from '../units/units.service';
 import {
@@ -32,6 +31,7 @@ export class RosterPeriodsService {
     @InjectRepository(RosterPeriodEntity) private readonly periods: Repository<RosterPeriodEntity>,
     private readonly units: UnitsService,
     private readonly dataSource: DataSource,
+    private readonly organisation: OrganisationService,
   ) {}
 
   /** A page of the periods the caller may see, newest first. */
@@ -149,10 +149,9 @@ export class RosterPeriodsService {
       where: { rosterPeriodId: period.id },
       order: { version: 'DESC', date: 'ASC', staffName: 'ASC', id: 'ASC' },
     });
-    const org = await em.findOneByOrFail(OrganisationEntity, { id: user.organisationId });
     return {
       rosterPeriodId: period.id,
-      settings: toNoticeWindowDto(org),
+      settings: await this.organisation.noticeWindow(user.organisationId),
       changes: rows.map(toLateChangeDto),
       owed: owedPerPerson(rows),
       caution: NOTICE_WINDOW_CAUTION,

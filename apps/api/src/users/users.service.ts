@@ -11,7 +11,7 @@ import { canSeeUser, visibleUnitIds } from '../common/unit-scope';
 import { AppConfig } from '../config/app-config';
 import { MailService } from '../mail/mail.service';
 import { invitationMail } from '../mail/templates';
-import { OrganisationEntity } from '../organisation/organisation.entity';
+import { OrganisationService } from '../organisation/organisation.service';
 import { UnitsService } from '../units/units.service';
 import { type InviteUserDto, type UpdateUserDto, type UsersQueryDto } from './dto/user.dto';
 import { UserEntity } from './user.entity';
@@ -29,6 +29,7 @@ export class UsersService {
     private readonly refreshTokens: RefreshTokensService,
     private readonly mail: MailService,
     private readonly config: AppConfig,
+    private readonly organisation: OrganisationService,
     writes: WriteGeneration,
   ) {
     this.authUsers = new GenerationCache(writes, { maxEntries: 1024, maxAgeMs: 1000 });
@@ -227,9 +228,7 @@ export class UsersService {
   }
 
   private async sendInvitation(caller: AuthUser, user: UserEntity, token: string): Promise<void> {
-    const org = await this.dataSource
-      .getRepository(OrganisationEntity)
-      .findOneBy({ id: user.organisationId });
+    const org = await this.organisation.byId(user.organisationId);
     const link = `${this.config.publicUrl}${WEB_PATHS.acceptInvitation}?token=${encodeURIComponent(token)}`;
     const content = invitationMail({
       displayName: user.displayName,
