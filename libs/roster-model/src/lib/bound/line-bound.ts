@@ -58,6 +58,12 @@ export interface LineBoundResult {
   peakLabels: number;
 }
 
+/**
+ * Exact pricing rounds a solve is expected to need (benchmark instances 1-12: 2-6 once the capped
+ * rounds have found most columns); a probe longer than the time limit / (people × this) skips it.
+ */
+const EXACT_ROUNDS_EXPECTED = 4;
+
 /** Reduced costs above this count as zero (the master's duals carry HiGHS's tolerances). */
 const RC_TOLERANCE = 1e-6;
 
@@ -154,9 +160,21 @@ export function lineBound(
     return { cost: sc.soft, indices, values: indices.map((i) => entries.get(i)!) };
   };
 
+  // A probe: one exact line; when exact pricing cannot finish or would not leave time for a few
+  // rounds, there will be no bound (benchmark instance 14: over 100,000 labels a day; instance 8:
+  // 5 s a round), so the time goes back to the caller at once.
+  const zero = new Float64Array(D * S);
+  const tProbe = performance.now();
+  exact.solve(0, zero);
+  const probeMs = performance.now() - tProbe;
+  if (P > 0 && (!exact.lowestIsExact || probeMs * P * EXACT_ROUNDS_EXPECTED > options.timeLimitMs)) {
+    result.peakLabels = exact.peakLabels;
+    result.ms = elapsed();
+    return result;
+  }
+
   // First lines: the seed's where they keep every rule, else the person's cheapest line alone.
   const first: Int16Array[] = [];
-  const zero = new Float64Array(D * S);
   for (let p = 0; p < P; p++) {
     let line: Int16Array | null = null;
     if (options.seed) {
@@ -292,7 +310,12 @@ export function lineBound(
             extra[ds] = e;
           }
           const line = dp.solve(p, extra, perWeekend);
-          if (!useExact || !dp.lowestIsExact || !Number.isFinite(dp.lowest)) complete = false;
+          if (useExact && !dp.lowestIsExact) {
+            // Too many labels for an exact answer: no bound can come from further rounds either.
+            stopped = true;
+            break;
+          }
+          if (!useExact || !Number.isFinite(dp.lowest)) complete = false;
           else lagrangian += dp.lowest;
           if (line) {
             const c = column(p, line);
