@@ -9,6 +9,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import type { RosterViolationDto } from '@rotaplex/contracts';
+import { findingMessage } from '../utils/boardQuality';
 import { formatDay } from '../utils/days';
 
 const useStyles = makeStyles({
@@ -38,7 +39,7 @@ export function ViolationList({
       {violations.map((v, i) => (
         <li key={`${v.rule}-${v.staffMemberId}-${v.dates.join()}-${i}`}>
           {names && <strong>{names.get(v.staffMemberId) ?? 'Someone'}: </strong>}
-          {v.message}
+          {names ? findingMessage(v.message, names.get(v.staffMemberId)) : v.message}
           {v.dates.length > 0 && ` (${v.dates.map(formatDay).join(', ')})`}
           {v.warning && (
             <MessageBar intent="warning">

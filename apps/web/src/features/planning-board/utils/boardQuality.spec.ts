@@ -2,6 +2,7 @@ import type { ShiftTypeDto, SkillDto, UnmetNeedExplanationDto } from '@rotaplex/
 import {
   boardRedFlags,
   coverCellKey,
+  findingMessage,
   gapPercent,
   gradeUnmetNeeds,
   qualityLine,
@@ -162,5 +163,23 @@ describe('red flags on the board (NICE SG1 2014 via PRODUCT.md: "fewer than 2 re
   it('finds none when the skill is not marked registered', () => {
     const unregistered = cover.map((l) => (l.skill ? { ...l, skill: { ...rn, registered: false } } : l));
     expect(boardRedFlags(unregistered, dates)).toEqual([]);
+  });
+});
+
+describe('rule findings under the person’s name (common practice, no source: say a name once)', () => {
+  it('drops the name the checker put first, and nothing else', () => {
+    expect(findingMessage('Agnieszka Nowak: 0 paid minutes (at least 1800)', 'Agnieszka Nowak')).toBe(
+      '0 paid minutes (at least 1800)',
+    );
+    // Another person's name, a name inside the message, or no name known: the message as it is.
+    expect(findingMessage('Agnieszka Nowak: 0 paid minutes', 'Beth Lindqvist')).toBe(
+      'Agnieszka Nowak: 0 paid minutes',
+    );
+    expect(findingMessage('Rest after Agnieszka Nowak: 8 h', 'Agnieszka Nowak')).toBe(
+      'Rest after Agnieszka Nowak: 8 h',
+    );
+    expect(findingMessage('Agnieszka Nowak: 0 paid minutes', undefined)).toBe(
+      'Agnieszka Nowak: 0 paid minutes',
+    );
   });
 });

@@ -102,6 +102,14 @@ export function redFlagsByCell(flags: readonly RedFlagDto[]): Map<string, RedFla
   return new Map(flags.map((f) => [coverCellKey(f.shiftTypeId, f.skillId, f.date), f]));
 }
 
+/**
+ * A rule finding's message to show after the person's name: the checker starts most messages with the
+ * name ("Agnieszka Nowak: …"), so a list that names the person first drops it from the message.
+ */
+export function findingMessage(message: string, name: string | undefined): string {
+  return name && message.startsWith(`${name}: `) ? message.slice(name.length + 2) : message;
+}
+
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /** The relative gap in words with one rounding (0.1 percentage point), used on the face and in details. */
