@@ -1,5 +1,5 @@
 import { PLANNING_ROUTES, type RosterPeriodDto } from '@rotaplex/contracts';
-import { apiCall, apiSignIn } from './support/api';
+import { apiCall, apiSignIn, demoPeriod, findWard } from './support/api';
 import {
   openBrowser,
   openDemoDraft,
@@ -18,7 +18,10 @@ import {
 describe('the contact centre planner generates and publishes the demo period', () => {
   let browser: Session;
   let period: RosterPeriodDto;
+  let demoId = '';
   beforeAll(async () => {
+    const token = await apiSignIn('manager2@example.com');
+    demoId = (await demoPeriod(token, (await findWard(token, 'Contact Centre North')).id)).id;
     browser = await openBrowser();
     await signIn(browser.page, 'manager2@example.com');
   });
@@ -28,7 +31,7 @@ describe('the contact centre planner generates and publishes the demo period', (
 
   it('generates the demo period and explains the short need', async () => {
     const { page } = browser;
-    await openDemoDraft(page, /^Planning board: Contact Centre North/);
+    await openDemoDraft(page, /^Planning board: Contact Centre North/, demoId);
     await page.getByRole('textbox', { name: 'Time limit (seconds)' }).fill('30');
     await pressGenerate(page);
     await page.getByTestId('quality-statement').waitFor({ timeout: 110_000 });

@@ -1,3 +1,4 @@
+import { apiSignIn, demoPeriod, findWard } from './support/api';
 import {
   openBrowser,
   openDemoDraft,
@@ -15,7 +16,10 @@ import {
 // which is kept only with a reason and then shows the rest finding with the fatigue warning.
 describe('planning board as the demo manager', () => {
   let browser: Session;
+  let demoId = '';
   beforeAll(async () => {
+    const token = await apiSignIn('manager@example.com');
+    demoId = (await demoPeriod(token, (await findWard(token)).id)).id;
     browser = await openBrowser();
     await signIn(browser.page, 'manager@example.com');
   });
@@ -28,7 +32,7 @@ describe('planning board as the demo manager', () => {
 
   it('opens the draft period of the ward from the roster periods list', async () => {
     const { page } = browser;
-    await openDemoDraft(page, /^Planning board: /);
+    await openDemoDraft(page, /^Planning board: /, demoId);
     await board().waitFor();
     expect(await board().getByRole('columnheader').count()).toBeGreaterThanOrEqual(7 + 2);
     await page.getByText(/Cover against needs/).waitFor();

@@ -1,3 +1,4 @@
+import { apiSignIn, demoPeriod, findWard } from './support/api';
 import {
   eventually,
   openBrowser,
@@ -23,7 +24,10 @@ const dayLabel = (isoDate: string) =>
 
 describe('planning calendar as the demo manager', () => {
   let browser: Session;
+  let demoId = '';
   beforeAll(async () => {
+    const token = await apiSignIn('manager@example.com');
+    demoId = (await demoPeriod(token, (await findWard(token)).id)).id;
     browser = await openBrowser({ timezoneId: 'Asia/Tokyo' });
     await signIn(browser.page, 'manager@example.com');
   });
@@ -43,7 +47,7 @@ describe('planning calendar as the demo manager', () => {
   it('sets a cell of the draft period through the dialog (PUT) on the board', async () => {
     const { page } = browser;
     expect(await page.evaluate(() => Intl.DateTimeFormat().resolvedOptions().timeZone)).toBe('Asia/Tokyo');
-    await openDemoDraft(page, /^Planning board: Ward 7/);
+    await openDemoDraft(page, /^Planning board: Ward 7/, demoId);
     await cell().waitFor();
     await page.waitForFunction(() => !document.querySelector('button[data-row]:disabled'), undefined, {
       timeout: 60_000,

@@ -77,16 +77,15 @@ export async function signOut(page: Page): Promise<void> {
 
 /**
  * Opens the demo's four-week draft period of the signed-in planner's unit from the roster periods
- * list (other journeys add periods of their own) and waits for its planning board heading.
+ * list and waits for its planning board heading. The period is named by id (support/api.ts
+ * `demoPeriod`): other journeys add periods of their own, drafts among them, in Jest's order.
  */
-export async function openDemoDraft(page: Page, heading: RegExp): Promise<void> {
+export async function openDemoDraft(page: Page, heading: RegExp, periodId: string): Promise<void> {
   await page.goto('/planning/periods');
-  const row = page
-    .getByRole('row')
-    .filter({ hasText: 'Draft' })
-    .filter({ has: page.getByRole('cell', { name: '28', exact: true }) })
-    .first();
-  await row.getByRole('link').click();
+  await page
+    .getByRole('table', { name: /Roster periods of / })
+    .locator(`a[href$="/planning/periods/${encodeURIComponent(periodId)}/board"]`)
+    .click();
   await page.getByRole('heading', { name: heading }).waitFor();
 }
 
