@@ -18,7 +18,7 @@ import {
   type SwapRequestDto,
   type WhatItWouldTakeDto,
 } from '@rotaplex/contracts';
-import { DataSource, type EntityManager, In } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { type AuthUser } from '../common/auth-user';
 import { assertUnitAccess, visibleUnitIds } from '../common/unit-scope';
@@ -32,7 +32,7 @@ import { type StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitsService } from '../units/units.service';
 import { UsersService } from '../users/users.service';
 import { ClaimCheck, evaluateChanges } from '../swaps/swap-evaluation';
-import { SwapRequestEntity, type StoredCellChange } from '../swaps/swap-request.entity';
+import { type StoredCellChange } from '../swaps/swap-request.entity';
 import { SwapsService } from '../swaps/swaps.service';
 import { dateInWords } from '../common/text/date-words';
 import { type OpenShiftQuery } from './dto/open-shift.dto';
@@ -205,15 +205,7 @@ export class OpenShiftsService implements OnModuleInit {
     const m = this.dataSource.manager;
     const input = await this.input.load(periodId);
     const rows = await this.cells.rowsOf(periodId, m);
-    const pending = await m.findBy(SwapRequestEntity, {
-      rosterPeriodId: periodId,
-      kind: 'claim',
-      status: In(['accepted']),
-    });
-    const claims = pending.map((p) => ({
-      change: (JSON.parse(p.changes) as StoredCellChange[])[0],
-      skillId: p.skillId,
-    }));
+    const claims = await this.swaps.waitingClaims(m, periodId);
     const skills = await this.skillCodes(input);
     const offers = await currentOffers(m, periodId);
     const registered = new Map(input.skills.filter((k) => k.registered).map((k) => [k.id, k]));
@@ -466,13 +458,8 @@ export class OpenShiftsService implements OnModuleInit {
           findings,
         });
       }
-      const mine = await em.findBy(SwapRequestEntity, {
-        rosterPeriodId: input.period.id,
-        proposerStaffMemberId: me.id,
-        kind: 'claim',
-        status: 'accepted',
-      });
-      if (mine.some((p) => (JSON.parse(p.changes) as StoredCellChange[])[0]?.date === body.date)) {
+      const mine = await this.swaps.waitingClaims(em, input.period.id, me.id);
+      if (mine.some((claim) => claim.change?.date === body.date)) {
         throw new ConflictException(`You already have a claim waiting for ${dateInWords(body.date)}`);
       }
       const created = await this.swaps.createClaim(

@@ -8,7 +8,7 @@ import {
   RULES,
   type Violation,
 } from '@rotaplex/roster-model';
-import { type AssignmentEntity } from '../assignments/assignment.entity';
+import { type AssignmentEntity } from '../roster-periods/assignment.entity';
 import { checkDto, rosterOf } from '../assignments/assignments.service';
 import { type RosterInput } from '../roster-input/roster-input.service';
 import { type StoredCellChange } from './swap-request.entity';

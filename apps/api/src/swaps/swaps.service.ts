@@ -10,7 +10,7 @@ import { SwapDecisions } from './swap-decisions.service';
 import { SwapMailer } from './swap-mailer';
 import { SwapPlanning } from './swap-planning.service';
 import { SwapReads } from './swap-reads.service';
-import { type StoredCellChange } from './swap-request.entity';
+import { SwapRequestEntity, type StoredCellChange } from './swap-request.entity';
 
 /**
  * What other modules ask of swaps (open shifts: who the caller is on a roster, a new claim and its
@@ -34,6 +34,27 @@ export class SwapsService {
    */
   coverOutsideFrom(source: OutsideCover): void {
     this.decisions.coverOutsideFrom(source);
+  }
+
+  /**
+   * Open-shift claims of a period waiting for a manager (of one person when given): the cell each
+   * would change and the skill it claims, in the caller's transaction.
+   */
+  async waitingClaims(
+    em: EntityManager,
+    periodId: string,
+    proposerStaffMemberId?: string,
+  ): Promise<{ change: StoredCellChange; skillId: string | null }[]> {
+    const rows = await em.findBy(SwapRequestEntity, {
+      rosterPeriodId: periodId,
+      kind: 'claim',
+      status: 'accepted',
+      ...(proposerStaffMemberId ? { proposerStaffMemberId } : {}),
+    });
+    return rows.map((row) => ({
+      change: (JSON.parse(row.changes) as StoredCellChange[])[0],
+      skillId: row.skillId,
+    }));
   }
 
   /** The caller's staff member on the period's unit (403 when they are not on its roster). */
