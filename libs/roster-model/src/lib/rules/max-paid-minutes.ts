@@ -5,6 +5,7 @@
 import type { Violation } from '../result';
 import { defineRule, type RuleModule } from '../model/context';
 import { paidMinutesOf } from './min-paid-minutes';
+import { hours } from '../explain/words';
 
 export const maxPaidMinutes: RuleModule = defineRule({
   name: 'maxPaidMinutes',
@@ -39,7 +40,7 @@ export const maxPaidMinutes: RuleModule = defineRule({
       personId: index.personId(p),
       days: [],
       amount: total - max,
-      message: `${index.personName(p)}: ${total} paid minutes (at most ${max})`,
+      message: `${index.personName(p)}: ${hours(total)} paid (the contract allows at most ${hours(max)})`,
     });
     return out;
   },

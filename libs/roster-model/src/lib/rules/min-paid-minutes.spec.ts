@@ -9,6 +9,8 @@ describe('rule minPaidMinutes', () => {
     // One early = 480 paid minutes < 960.
     const v = minPaidMinutes.check(index, grid(p, { a: 'E..' }).grid);
     expect(v[0].amount).toBe(480);
+    // In hours, as people think of contracts (issue 10: no minutes where people think in hours).
+    expect(v[0].message).toMatch(/: 8 h paid \(the contract asks for at least 16 h\)$/);
     expect(minPaidMinutes.check(index, grid(p, { a: 'EL.' }).grid)).toEqual([]);
   });
 

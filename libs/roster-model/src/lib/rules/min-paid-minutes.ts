@@ -4,6 +4,7 @@
  */
 import type { Violation } from '../result';
 import { defineRule, type RuleModule } from '../model/context';
+import { hours } from '../explain/words';
 
 export function paidMinutesOf(paid: readonly number[], row: readonly number[]): number {
   let total = 0;
@@ -34,7 +35,7 @@ export const minPaidMinutes: RuleModule = defineRule({
       personId: index.personId(p),
       days: [],
       amount: min - total,
-      message: `${index.personName(p)}: ${total} paid minutes (at least ${min})`,
+      message: `${index.personName(p)}: ${hours(total)} paid (the contract asks for at least ${hours(min)})`,
     });
     return out;
   },
