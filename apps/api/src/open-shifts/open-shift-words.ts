@@ -30,12 +30,20 @@ export function ruleInWords(v: Pick<RosterViolationDto, 'rule' | 'message'>, nam
     .replace(new RegExp(`^${who}:\\s*`), '')
     .replace(new RegExp(`\\b${who} is\\b`, 'g'), 'you are')
     .replace(new RegExp(`\\b${who} has\\b`, 'g'), 'you have')
-    .replace(new RegExp(`\\b${who}\\b`, 'g'), 'you')
+    .replace(new RegExp(`\\b${who}\\b`, 'g'), 'you');
+  return `${RULE_WORDS[v.rule] ?? 'A rule of your contract'}: ${checkerWords(message)}`;
+}
+
+/**
+ * A checker finding about a shift someone would take, in plain words: "would have" for the shift
+ * taken, dates in words, and no "day(s)".
+ */
+export function checkerWords(message: string): string {
+  return message
     .replace(/\bbut has shift\b/g, 'but would have shift')
     .replace(/\b(\d{4}-\d{2}-\d{2})\b/g, (d) => dateInWords(d))
     .replace(/\b1 day\(s\)/g, '1 day')
     .replace(/\bday\(s\)/g, 'days');
-  return `${RULE_WORDS[v.rule] ?? 'A rule of your contract'}: ${message}`;
 }
 
 /** The e-mail that tells one person about an open shift they may take (their unit's local times). */

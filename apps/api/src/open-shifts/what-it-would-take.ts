@@ -8,7 +8,7 @@ import {
 } from '@rotaplex/contracts';
 import { type CheckResult } from '@rotaplex/roster-model';
 import { type AssignmentEntity } from '../roster-periods/assignment.entity';
-import { dateInWords } from '../common/text/date-words';
+import { checkerWords } from './open-shift-words';
 import { type RosterInput } from '../roster-input/roster-input.service';
 import { evaluateChanges } from '../swaps/swap-evaluation';
 import { type StoredCellChange } from '../swaps/swap-request.entity';
@@ -46,12 +46,7 @@ export function breakInWords(v: Pick<RosterViolationDto, 'rule' | 'message'>, in
       (_all, lead: string, date: string) => `${lead}${s.name} (${s.code}) on ${date}`,
     );
   }
-  message = message
-    .replace(/\bbut has shift\b/g, 'but would have shift')
-    .replace(/\b(\d{4}-\d{2}-\d{2})\b/g, (d) => dateInWords(d))
-    .replace(/\b1 day\(s\)/g, '1 day')
-    .replace(/\bday\(s\)/g, 'days');
-  return `${RULE_LABEL[v.rule] ?? 'A rule of the contract'}: ${message}`;
+  return `${RULE_LABEL[v.rule] ?? 'A rule of the contract'}: ${checkerWords(message)}`;
 }
 
 /**
