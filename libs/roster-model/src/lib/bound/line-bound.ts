@@ -78,7 +78,7 @@ export function lineBound(
   const exact = new LineDp(index, { exact: true });
   // Capped pricing finds most columns at a fraction of the time (instance 8: ~3 s a round exact);
   // only exact rounds give a bound, run when the capped one finds nothing or time runs short.
-  const fast = new LineDp(index);
+  const fast = new LineDp(index, { cost: exact.cost });
   const lc = exact.cost;
   const needs = problem.coverNeeds;
   const N = needs.length;

@@ -52,6 +52,8 @@ export interface LineDpOptions {
    * exact unless that safety limit was hit (`lowestIsExact` says which; overrides both caps).
    */
   exact?: boolean;
+  /** The problem's line costs when the caller already built them (they are read only). */
+  cost?: LineCost;
 }
 
 /**
@@ -87,7 +89,7 @@ export class LineDp {
     readonly index: ProblemIndex,
     options: LineDpOptions = {},
   ) {
-    this.cost = new LineCost(index);
+    this.cost = options.cost ?? new LineCost(index);
     this.lineBuffer = new Int16Array(index.P * index.D);
     this.maxPerState = options.exact ? Infinity : (options.maxPerState ?? 8);
     this.exact = options.exact ?? false;
