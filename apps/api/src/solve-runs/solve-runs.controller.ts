@@ -27,7 +27,7 @@ import {
   SolveRunStartedResponse,
   StartSolveRunDto,
 } from './dto/solve-run.dto';
-import { SolveRunsService } from './solve-runs.service';
+import { type SolveRunEvent, SolveRunsService } from './solve-runs.service';
 
 /** A comment line this often keeps proxies from closing a quiet event stream. */
 const KEEP_ALIVE_MS = 15_000;
@@ -102,13 +102,17 @@ export class SolveRunsController {
     @Res() res: Response,
   ): Promise<void> {
     let open = true;
-    const send = (event: SolveRunEventName, data: unknown) => {
+    const write = (event: SolveRunEventName, data: unknown) => {
       if (!open) return;
       res.write(`event: ${event}\ndata: ${JSON.stringify(data)}\n\n`);
       if (event === 'end') close();
     };
+    // Events relayed while the run is read (from any instance, through Redis) wait for the status:
+    // written before it, they would send the response's head without its event-stream headers and
+    // come ahead of the `status` the stream promises first.
+    let early: SolveRunEvent[] | null = [];
     // Listen before reading the run, so an end between the two is not missed.
-    const unsubscribe = this.runs.subscribe(id, (e) => send(e.event, e.data));
+    const unsubscribe = this.runs.subscribe(id, (e) => (early ? early.push(e) : write(e.event, e.data)));
     const timers: NodeJS.Timeout[] = [];
     const close = () => {
       if (!open) return;
@@ -131,7 +135,11 @@ export class SolveRunsController {
     res.flushHeaders();
     req.on('close', close);
     timers.push(setInterval(() => open && res.write(': keep-alive\n\n'), KEEP_ALIVE_MS));
-    send('status', run);
-    if (isSolveRunEnded(run.status)) send('end', run);
+    write('status', run);
+    const waiting = early;
+    early = null;
+    // An ended run's own row is its end; otherwise what came meanwhile follows, in order.
+    if (isSolveRunEnded(run.status)) write('end', run);
+    else for (const e of waiting) write(e.event, e.data);
   }
 }
