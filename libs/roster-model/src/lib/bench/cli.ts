@@ -3,7 +3,7 @@
  *   npm run bench -- <instances> [--time-limit S] [--out DIR] [--gap G] [--seed N] [--no-warm-start]
  *                    [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise]
  *                    [--cores 1|2] [--beside-textbook]
- *                    [--line-share X] [--line-bound-share X]
+ *                    [--line-share X] [--line-bound-share X] [--no-column-rosters]
  * Instances are numbers 1-24 (InstanceN.txt in $ROTAPLEX_BENCHMARKS_DIR, default
  * ../shared/benchmarks/curtois-qu beside the repository), ranges such as 1-12, or paths to files
  * in the same format. Each instance is solved in turn by the product's solve path; a table is
@@ -37,6 +37,7 @@ interface CliOptions {
   besideTextbook?: boolean;
   lineShare?: number;
   lineBoundShare?: number;
+  columnRosters?: boolean;
 }
 
 const STRATEGIES = ['auto', 'mip', 'fixAndOptimise', 'mipThenFixAndOptimise'];
@@ -46,6 +47,7 @@ const USAGE =
   '       [--model product|textbook] [--strategy auto|mip|fixAndOptimise|mipThenFixAndOptimise] [--cores 1|2]\n' +
   '       [--beside-textbook] [--line-share X (share of the search for best-line moves, 0 off)]\n' +
   '       [--line-bound-share X (share of the time after the search for the column-generation bound, 0 off)]\n' +
+  '       [--no-column-rosters (no dive or line MIP after the column-generation bound)]\n' +
   '  instances: numbers 1-24, ranges like 1-12, or paths to instance files';
 
 export function parseArgs(argv: string[]): CliOptions {
@@ -76,6 +78,7 @@ export function parseArgs(argv: string[]): CliOptions {
     else if (arg === '--no-warm-start') options.warmStart = false;
     else if (arg === '--beside-textbook') options.besideTextbook = true;
     else if (arg === '--line-share') options.lineShare = Math.min(1, Math.max(0, Number(value(i++, arg))));
+    else if (arg === '--no-column-rosters') options.columnRosters = false;
     else if (arg === '--line-bound-share')
       options.lineBoundShare = Math.min(1, Math.max(0, Number(value(i++, arg))));
     else if (arg === '--cores') {
@@ -142,6 +145,7 @@ export async function main(argv: string[]): Promise<number> {
         besideTextbook: options.besideTextbook,
         lineShare: options.lineShare,
         lineBoundShare: options.lineBoundShare,
+        columnRosters: options.columnRosters,
         onProgress: progressPrinter(ref),
       });
     } catch (err) {

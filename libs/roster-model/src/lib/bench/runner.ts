@@ -46,6 +46,8 @@ export interface BenchRunOptions {
   lineShare?: number;
   /** Share of the time after the search for the column-generation bound (SolveRosterOptions.lineBoundShare; 0 off). */
   lineBoundShare?: number;
+  /** Rosters from the column-generation bound's lines (SolveRosterOptions.columnRosters). */
+  columnRosters?: boolean;
 }
 
 interface SolvedRoster {
@@ -109,6 +111,7 @@ async function solveProduct(loaded: LoadedInstance, options: BenchRunOptions): P
     strategy: options.strategy,
     lineShare: options.lineShare,
     lineBoundShare: options.lineBoundShare,
+    columnRosters: options.columnRosters,
   };
   const cores = Math.max(1, Math.floor(options.cores ?? 1));
   const result =

@@ -27,6 +27,7 @@ import { staffingSafety, staffingShortfall, staffingStatement } from '../safety/
 import { type HighsSession, isWasmFailure } from './highs-session';
 import { LineDp } from '../search/line-dp';
 import { lineBound } from '../bound/line-bound';
+import { linePack } from '../search/line-pack';
 import {
   isCancelled,
   MODEL_STATUS,
@@ -110,6 +111,11 @@ export interface SolveRosterOptions {
   lineBoundShare?: number;
   /** The MIP's gap above which 'auto' computes the column-generation bound (default LINE_BOUND_GAP). */
   lineBoundGap?: number;
+  /**
+   * After the column-generation bound, look for rosters among its lines (search/line-dive.ts and
+   * search/line-pack.ts) for COLUMN_ROSTER_SHARE of the time left (default true).
+   */
+  columnRosters?: boolean;
   /**
    * Every better roster that meets every hard rule, as it is found (the MIP's incumbents and
    * fix-and-optimise's improvements), so a solve on another core can continue from it.
@@ -196,6 +202,15 @@ export const LINE_BOUND_SHARE = 0.25;
  * 10-12), and fix-and-optimise gets the rest.
  */
 export const LINE_BOUND_SHARE_LARGE = 0.4;
+/**
+ * Once the column-generation bound has been computed, rosters from its lines (the dive, then the
+ * best roster made of the master's lines) get at most this share of the time left, the dive at
+ * most COLUMN_DIVE_SHARE of that. On benchmark instances 5-12 (docs/benchmarks.md) they find
+ * rosters within 0.5% of the optimum on 5, 6, 7 and 11 in a few seconds, where the local search and
+ * fix-and-optimise stay 2-9% above in a minute.
+ */
+export const COLUMN_ROSTER_SHARE = 0.5;
+export const COLUMN_DIVE_SHARE = 0.6;
 
 /** Share of the time limit, and most seconds, kept for proving the fewest people short of minimum. */
 export const STAFFING_SHARE = 0.1;
@@ -506,41 +521,88 @@ function wholeObjective(built: BuiltModel): boolean {
   return true;
 }
 
+/** What the column phase found: the bound and, when better than the roster it started from, a roster. */
+interface ColumnPhaseResult {
+  value: number;
+  converged: boolean;
+  better: { values: Float64Array; objective: number; roster: Roster } | null;
+}
+
 /**
  * The column-generation bound (bound/line-bound.ts) for at most `seconds`, from the best roster's
  * lines, stopping once it proves that roster optimal; rounded up when every objective is whole.
- * Skipped when `bound` (the MIP's) is within `lineBoundGap` of the roster, on huge models (half-year
- * lines: exact pricing takes too long) and without the search.
+ * Then, while the bound leaves a gap, rosters from the generated lines: the dive
+ * (search/line-dive.ts, pricing for at most COLUMN_DIVE_SHARE of `rosterSeconds`) and the best
+ * roster made of the master's lines (search/line-pack.ts, a MIP from the best roster so far, for
+ * the rest of `rosterSeconds`). Skipped when `bound` (the MIP's) is within `lineBoundGap` of the
+ * roster, on huge models (half-year lines: exact pricing takes too long) and without the search.
  */
 function lineBoundPhase(
+  problem: RosterProblem,
   built: BuiltModel,
   session: HighsSession,
   best: { roster: Roster; objective: number } | null,
   bound: number | null,
   seconds: number,
+  rosterSeconds: () => number,
   options: SolveRosterOptions,
-): { value: number; converged: boolean } | null {
+): ColumnPhaseResult | null {
   if (!usesSearch(options) || built.numX >= AUTO_HUGE_MODEL_X || isCancelled(options)) return null;
   if (!best || seconds < 0.5) return null;
   const gap = relativeGap(best.objective, bound);
   if (gap !== null && gap <= (options.lineBoundGap ?? LINE_BOUND_GAP)) return null;
   const { index } = built;
-  const { grid } = index.toGrid(best.roster);
-  const seed = new Int16Array(index.P * index.D);
-  grid.forEach((line, p) => seed.set(line, p * index.D));
+  const toLines = (roster: Roster): Int16Array => {
+    const lines = new Int16Array(index.P * index.D);
+    index.toGrid(roster).grid.forEach((line, p) => lines.set(line, p * index.D));
+    return lines;
+  };
+  const fromLines = (lines: Int16Array): Roster =>
+    index.fromGrid(
+      Array.from({ length: index.P }, (_, p) => Array.from(lines.subarray(p * index.D, (p + 1) * index.D))),
+    );
   const whole = wholeObjective(built);
   // A whole objective can stop one below the roster's: rounding up closes the gap.
   const target = best.objective - (whole ? 1 - 1e-6 : 0);
+  let rosterMs = 0;
   try {
     const result = lineBound(index, session, {
       timeLimitMs: seconds * 1000,
-      seed,
+      seed: toLines(best.roster),
       target,
+      diveMs: () => {
+        rosterMs = (options.columnRosters ?? true) ? rosterSeconds() * 1000 : 0;
+        return rosterMs * COLUMN_DIVE_SHARE;
+      },
       shouldStop: () => isCancelled(options),
     });
     if (result.bound === null) return null;
     const value = whole ? Math.ceil(result.bound - 1e-6) : result.bound;
-    return { value, converged: result.converged || value >= best.objective - 1e-9 };
+    const converged = result.converged || value >= best.objective - 1e-9;
+    let better: ColumnPhaseResult['better'] = null;
+    const offer = (lines: Int16Array | null): void => {
+      if (!lines) return;
+      const roster = fromLines(lines);
+      const check = checkRoster(problem, roster, index);
+      if (check.violations.length > 0) return;
+      if (check.objective >= (better?.objective ?? best.objective) - 1e-9) return;
+      better = { values: built.encode(roster), objective: check.objective, roster };
+      options.onRoster?.(roster, check.objective);
+    };
+    offer(result.dive?.grid ?? null);
+    const left = rosterMs - (result.dive?.ms ?? 0);
+    const current = (): number => (better as ColumnPhaseResult['better'])?.objective ?? best.objective;
+    if (left > 500 && value < current() - 1e-9 && !isCancelled(options)) {
+      const packed = linePack(index, session, result.lines, {
+        timeLimitSeconds: left / 1000,
+        start: toLines((better as ColumnPhaseResult['better'])?.roster ?? best.roster),
+        randomSeed: options.randomSeed,
+        signal: options.signal,
+        cancelFlag: options.cancelFlag,
+      });
+      offer(packed.grid);
+    }
+    return { value, converged, better };
   } catch (err) {
     if (isWasmFailure(err)) session.markBroken();
     throw err;
@@ -563,7 +625,7 @@ export async function solveRoster(
     : 0;
   const timeLimitSeconds = requestedSeconds - staffingSeconds;
   const progressClock = { last: -Infinity };
-  const startRoster = warmStartRoster(built, problem, options, timeLimitSeconds, clockStart, progressClock);
+  let startRoster = warmStartRoster(built, problem, options, timeLimitSeconds, clockStart, progressClock);
   let start = startValuesOf(built, startRoster);
   const warmStartObjective = start?.objective ?? null;
   const data = solverArrays(built);
@@ -620,16 +682,26 @@ export async function solveRoster(
   const lineShare = options.lineBoundShare;
   const lineFirst =
     auto && strategy === 'mipThenFixAndOptimise' && large && start !== null && lineShare !== 0;
+  const columnRosterSeconds = (): number => (timeLimitSeconds - elapsed()) * COLUMN_ROSTER_SHARE;
   const firstBound = lineFirst
     ? lineBoundPhase(
+        problem,
         built,
         session,
         { roster: startRoster!.roster, objective: start!.objective },
         null,
         (timeLimitSeconds - elapsed()) * (lineShare ?? LINE_BOUND_SHARE_LARGE),
+        columnRosterSeconds,
         options,
       )
     : null;
+  // A better roster from the generated lines: fix-and-optimise (or the MIP) goes on from it.
+  if (firstBound?.better) {
+    const { values, objective, roster } = firstBound.better;
+    start = { values, objective };
+    startRoster = { roster, check: checkRoster(problem, roster, built.index) };
+    onImproved(objective);
+  }
   let run: MipRunResult;
   try {
     // In 'auto', the MIP before fix-and-optimise runs past its share until its root LP has given a
@@ -696,6 +768,8 @@ export async function solveRoster(
         });
     if (elastic) run = strictRun(run, elastic.model, elastic.penalty, built, problem);
     let proven = false;
+    // A roster from the generated lines after the MIP, better than the MIP's.
+    let columnRoster: StartRoster | null = null;
     if (firstBound && (run.bound === null || run.bound < firstBound.value))
       run = { ...run, bound: firstBound.value, gap: relativeGap(run.objective, firstBound.value) };
     if (
@@ -710,15 +784,23 @@ export async function solveRoster(
       if (run.values && run.objective !== null && (!best || run.objective < best.objective))
         best = { roster: built.decode(run.values), objective: run.objective };
       const columnBound = lineBoundPhase(
+        problem,
         built,
         session,
         best,
         run.bound,
         (timeLimitSeconds - elapsed()) * (lineShare ?? LINE_BOUND_SHARE),
+        columnRosterSeconds,
         options,
       );
       if (columnBound !== null && (run.bound === null || run.bound < columnBound.value))
         run = { ...run, bound: columnBound.value, gap: relativeGap(run.objective, columnBound.value) };
+      if (columnBound?.better) {
+        const { values, objective, roster } = columnBound.better;
+        start = { values, objective };
+        columnRoster = { roster, check: checkRoster(problem, roster, built.index) };
+        onImproved(objective);
+      }
     }
     // The best roster at the bound is optimal: nothing is left for fix-and-optimise.
     if (run.bound !== null) {
@@ -735,8 +817,8 @@ export async function solveRoster(
     ) {
       // Continue from the MIP's incumbent, else from the warm start (repaired on the elastic model
       // when it breaks hard rules).
-      let from: StartRoster | null = startRoster;
-      if (run.values && run.objective !== null) {
+      let from: StartRoster | null = columnRoster ?? startRoster;
+      if (run.values && run.objective !== null && !columnRoster) {
         const roster = built.decode(run.values);
         from = { roster, check: checkRoster(problem, roster, built.index) };
       }
