@@ -58,6 +58,8 @@ export interface LineBoundResult {
   lines: PersonLine[];
   /** The dive's roster (with `diveMs`), or null. */
   dive: DiveResult | null;
+  /** Milliseconds spent diving, whether or not it gave a roster (included in `ms`). */
+  diveSpentMs: number;
 }
 
 /**
@@ -91,6 +93,7 @@ export function lineBound(
     peakLabels: 0,
     lines: [],
     dive: null,
+    diveSpentMs: 0,
   };
   // A probe: one exact line; when exact pricing cannot finish or would not leave time for a few
   // rounds, there will be no bound (benchmark instance 14: over 100,000 labels a day; instance 8:
@@ -125,8 +128,11 @@ export function lineBound(
     result.lines = columns.pool;
     generate(columns, exact, fast, options, elapsed, result);
     const diveMs = typeof options.diveMs === 'function' ? options.diveMs() : (options.diveMs ?? 0);
-    if (diveMs > 0 && result.master !== null && !options.shouldStop?.())
+    if (diveMs > 0 && result.master !== null && !options.shouldStop?.()) {
+      const t1 = performance.now();
       result.dive = lineDive(columns, fast, { timeLimitMs: diveMs, shouldStop: options.shouldStop });
+      result.diveSpentMs = performance.now() - t1;
+    }
     result.masterMs = columns.masterMs;
     result.pricingMs = columns.pricingMs;
   });

@@ -9,7 +9,8 @@
  *
  * The master always stays feasible (every cover row has its shortfall and surplus columns), and
  * every line keeps every rule of its person, so the dive always ends with a roster that keeps every
- * hard rule. Past its time limit it stops pricing and only fixes (a rounding of the LP).
+ * hard rule. Past its time limit it stops pricing and only fixes (a rounding of the LP); when the
+ * time so far says it will not finish in time, it gives up (no roster) and leaves the time to others.
  */
 import type { LineColumns } from '../bound/line-columns';
 import type { LineDp } from './line-dp';
@@ -30,6 +31,12 @@ export interface DiveResult {
   steps: number;
   ms: number;
 }
+
+/**
+ * The dive gives up once the time so far, scaled to everybody, exceeds its limit by this factor
+ * (the people fixed early go fastest, as the LP then fixes many at once).
+ */
+const GIVE_UP_FACTOR = 1.5;
 
 /** A line's value at or above this counts as taken: every such line is fixed at once. */
 const TAKEN = 0.999;
@@ -65,6 +72,12 @@ export function lineDive(columns: LineColumns, dp: LineDp, options: DiveOptions)
     }
     if (taken.length > 0) continue;
     steps++;
+    // A dive that would run out of pricing time ends in a rounding of the LP, far worse than its
+    // own end (benchmark instance 12: 6,973 against 4,040): give the time back instead.
+    let done = 0;
+    for (let p = 0; p < P; p++) if (fixed[p] >= 0) done++;
+    const spent = performance.now() - t0;
+    if (done < P && spent * (P / done) > options.timeLimitMs * GIVE_UP_FACTOR) return null;
     // Columns for the people still free, until none prices out or the time is up.
     while (performance.now() - t0 < options.timeLimitMs) {
       if (options.shouldStop?.() || !columns.solve()) return null;

@@ -167,6 +167,13 @@ export const AUTO_SEARCH_SHARE = 0.4;
 export const AUTO_HUGE_MODEL_X = 40_000;
 export const AUTO_SEARCH_SHARE_HUGE = 0.7;
 /**
+ * Large models below AUTO_HUGE_MODEL_X, where the column-generation bound and the rosters from its
+ * lines come first after the search (LINE_BOUND_SHARE_LARGE, COLUMN_ROSTER_SHARE): side by side on
+ * benchmark instances 8, 9, 10 and 12 (60 s, one core each), 0.15 against 0.4 gave 1312 / 1404,
+ * 439 / 443, 4631 (optimal, in 31 s) / 4691 and 4500 / 4570 (docs/benchmarks.md).
+ */
+export const AUTO_SEARCH_SHARE_LARGE = 0.15;
+/**
  * Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root
  * bound; on large models fix-and-optimise keeps at least 40% (it finds most of their improvements).
  */
@@ -204,13 +211,14 @@ export const LINE_BOUND_SHARE = 0.25;
 export const LINE_BOUND_SHARE_LARGE = 0.4;
 /**
  * Once the column-generation bound has been computed, rosters from its lines (the dive, then the
- * best roster made of the master's lines) get at most this share of the time left, the dive at
- * most COLUMN_DIVE_SHARE of that. On benchmark instances 5-12 (docs/benchmarks.md) they find
- * rosters within 0.5% of the optimum on 5, 6, 7 and 11 in a few seconds, where the local search and
- * fix-and-optimise stay 2-9% above in a minute.
+ * best roster made of the master's lines) get at most this share of the time left, the dive's
+ * pricing at most COLUMN_DIVE_SHARE of that (a dive that will not finish gives up early).
+ * Alone, after the bound, they reach the best known rosters of instances 5 and 11, and 439 on 9,
+ * 1,059 on 7 and 1,317 on 8 in 2-24 s, where the local search and fix-and-optimise stayed 2-15%
+ * above in a minute (docs/benchmarks.md).
  */
-export const COLUMN_ROSTER_SHARE = 0.5;
-export const COLUMN_DIVE_SHARE = 0.6;
+export const COLUMN_ROSTER_SHARE = 0.7;
+export const COLUMN_DIVE_SHARE = 0.75;
 
 /** Share of the time limit, and most seconds, kept for proving the fewest people short of minimum. */
 export const STAFFING_SHARE = 0.1;
@@ -297,9 +305,14 @@ function warmStartRoster(
     return { roster: warmStart, check: checkRoster(problem, warmStart, built.index) };
   }
   const huge = built.numX >= AUTO_HUGE_MODEL_X;
+  const columnsFirst = !huge && built.numX >= AUTO_LARGE_MODEL_X && options.lineBoundShare !== 0;
   const share = Math.min(
     1,
-    Math.max(0, options.searchShare ?? (huge ? AUTO_SEARCH_SHARE_HUGE : AUTO_SEARCH_SHARE)),
+    Math.max(
+      0,
+      options.searchShare ??
+        (huge ? AUTO_SEARCH_SHARE_HUGE : columnsFirst ? AUTO_SEARCH_SHARE_LARGE : AUTO_SEARCH_SHARE),
+    ),
   );
   const left = (): number => timeLimitSeconds * 1000 - (performance.now() - clockStart);
   // The greedy fill with a short local search of its own: the fast search below does the rest.
@@ -590,7 +603,7 @@ function lineBoundPhase(
       options.onRoster?.(roster, check.objective);
     };
     offer(result.dive?.grid ?? null);
-    const left = rosterMs - (result.dive?.ms ?? 0);
+    const left = rosterMs - result.diveSpentMs;
     const current = (): number => (better as ColumnPhaseResult['better'])?.objective ?? best.objective;
     if (left > 500 && value < current() - 1e-9 && !isCancelled(options)) {
       const packed = linePack(index, session, result.lines, {
@@ -731,7 +744,7 @@ export async function solveRoster(
           gap: relativeGap(start!.objective, firstBound.value),
           values: start!.values,
           seconds: elapsed(),
-          secondsToBest: setupSeconds,
+          secondsToBest: foImprovements.at(-1)?.seconds ?? setupSeconds,
           nodes: 0,
           improvements: [],
         }
