@@ -16,12 +16,12 @@
  */
 import fc from 'fast-check';
 import { ProblemIndex } from '../model/context';
-import { productProblemArb } from '../../external/random-instances.test-helpers';
 import { buildModel } from '../model/build-model';
 import { solveMip, solverArrays, threadSession } from '../solve/run-mip';
 import { solveRoster } from '../solve/solve';
 import { loadInstance } from '../bench/curtois-qu';
 import { lineBound } from './line-bound';
+import { fullMip, smallProblems } from './lines.test-helpers';
 
 describe('lineBound: the column-generation bound', () => {
   jest.setTimeout(300_000);
@@ -49,36 +49,26 @@ describe('lineBound: the column-generation bound', () => {
     let compared = 0;
     let comparedLp = 0;
     await fc.assert(
-      fc.asyncProperty(
-        productProblemArb({ horizons: [7, 14], maxStaff: 4, maxShiftTypes: 3 }),
-        async (problem) => {
-          const solved = await solveRoster(problem, {
-            strategy: 'mip',
-            warmStart: null,
-            explain: false,
-            staffingCheck: false,
-            timeLimitSeconds: 30,
-            session,
-          });
-          const result = lineBound(new ProblemIndex(problem), session, { timeLimitMs: 60_000 });
-          const relaxation = await solveMip(solverArrays(buildModel(problem)), { relaxIntegrality: true });
-          if (result.converged && relaxation.status === 'optimal' && relaxation.objective !== null) {
-            expect(result.bound!).toBeGreaterThanOrEqual(
-              relaxation.objective - 1e-6 * Math.max(1, relaxation.objective),
-            );
-            comparedLp++;
-          }
-          if (solved.status === 'infeasible') {
-            // No roster keeps every rule: some person has no rule-keeping line, or the lines exist
-            // but no bound says otherwise; either way the bound may not claim more than nothing.
-            return;
-          }
-          if (solved.status !== 'optimal' || solved.objective === null) return;
-          expect(result.bound).not.toBeNull();
-          expect(result.bound!).toBeLessThanOrEqual(solved.objective + 1e-6 * Math.max(1, solved.objective));
-          compared++;
-        },
-      ),
+      fc.asyncProperty(smallProblems(), async (problem) => {
+        const solved = await fullMip(problem, session);
+        const result = lineBound(new ProblemIndex(problem), session, { timeLimitMs: 60_000 });
+        const relaxation = await solveMip(solverArrays(buildModel(problem)), { relaxIntegrality: true });
+        if (result.converged && relaxation.status === 'optimal' && relaxation.objective !== null) {
+          expect(result.bound!).toBeGreaterThanOrEqual(
+            relaxation.objective - 1e-6 * Math.max(1, relaxation.objective),
+          );
+          comparedLp++;
+        }
+        if (solved.status === 'infeasible') {
+          // No roster keeps every rule: some person has no rule-keeping line, or the lines exist
+          // but no bound says otherwise; either way the bound may not claim more than nothing.
+          return;
+        }
+        if (solved.status !== 'optimal' || solved.objective === null) return;
+        expect(result.bound).not.toBeNull();
+        expect(result.bound!).toBeLessThanOrEqual(solved.objective + 1e-6 * Math.max(1, solved.objective));
+        compared++;
+      }),
       { seed: 20261205, numRuns: 30 },
     );
     expect(compared).toBeGreaterThan(10);

@@ -16,7 +16,7 @@
  */
 import type { ModelData } from 'highs';
 import type { ProblemIndex } from '../model/context';
-import type { CoverNeed } from '../problem';
+import type { CoverNeed, Roster } from '../problem';
 import { nightEligible } from '../goals/fair-nights';
 import type { LineCost, LineScore } from '../search/line-cost';
 
@@ -42,6 +42,19 @@ export interface MasterColumn {
   cost: number;
   indices: number[];
   values: number[];
+}
+
+/** The roster as lines, person-major (D days each, -1 off). */
+export function linesOf(index: ProblemIndex, roster: Roster): Int16Array {
+  const lines = new Int16Array(index.P * index.D);
+  index.toGrid(roster).grid.forEach((line, p) => lines.set(line, p * index.D));
+  return lines;
+}
+
+/** The roster of person-major lines (D days each, -1 off). */
+export function rosterOfLines(index: ProblemIndex, lines: Int16Array): Roster {
+  const { P, D } = index;
+  return index.fromGrid(Array.from({ length: P }, (_, p) => Array.from(lines.subarray(p * D, (p + 1) * D))));
 }
 
 export function nightsOf(score: LineScore): number {

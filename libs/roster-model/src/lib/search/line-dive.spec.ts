@@ -8,18 +8,16 @@
  */
 import fc from 'fast-check';
 import { ProblemIndex } from '../model/context';
-import { productProblemArb } from '../../external/random-instances.test-helpers';
 import { checkRoster } from '../check/checker';
 import { threadSession } from '../solve/run-mip';
-import { solveRoster } from '../solve/solve';
 import { loadInstance } from '../bench/curtois-qu';
 import { lineBound } from '../bound/line-bound';
+import { rosterOfLines } from '../bound/line-master';
+import { fullMip, smallProblems } from '../bound/lines.test-helpers';
 import type { RosterProblem } from '../problem';
 
 function rosterOf(problem: RosterProblem, lines: Int16Array) {
-  const index = new ProblemIndex(problem);
-  const { P, D } = index;
-  return index.fromGrid(Array.from({ length: P }, (_, p) => Array.from(lines.subarray(p * D, (p + 1) * D))));
+  return rosterOfLines(new ProblemIndex(problem), lines);
 }
 
 describe('lineDive: rosters from the column-generation master', () => {
@@ -50,33 +48,23 @@ describe('lineDive: rosters from the column-generation master', () => {
     const session = await threadSession();
     let compared = 0;
     await fc.assert(
-      fc.asyncProperty(
-        productProblemArb({ horizons: [7, 14], maxStaff: 4, maxShiftTypes: 3 }),
-        async (problem) => {
-          const result = lineBound(new ProblemIndex(problem), session, {
-            timeLimitMs: 60_000,
-            diveMs: 60_000,
-          });
-          if (result.bound === null) return; // some person has no line that keeps every rule
-          expect(result.dive).not.toBeNull();
-          const check = checkRoster(problem, rosterOf(problem, result.dive!.grid));
-          expect(check.violations).toEqual([]);
-          expect(check.objective).toBeCloseTo(result.dive!.objective, 6);
-          const solved = await solveRoster(problem, {
-            strategy: 'mip',
-            warmStart: null,
-            explain: false,
-            staffingCheck: false,
-            timeLimitSeconds: 30,
-            session,
-          });
-          if (solved.status !== 'optimal' || solved.objective === null) return;
-          expect(check.objective).toBeGreaterThanOrEqual(
-            solved.objective - 1e-6 * Math.max(1, solved.objective),
-          );
-          compared++;
-        },
-      ),
+      fc.asyncProperty(smallProblems(), async (problem) => {
+        const result = lineBound(new ProblemIndex(problem), session, {
+          timeLimitMs: 60_000,
+          diveMs: 60_000,
+        });
+        if (result.bound === null) return; // some person has no line that keeps every rule
+        expect(result.dive).not.toBeNull();
+        const check = checkRoster(problem, rosterOf(problem, result.dive!.grid));
+        expect(check.violations).toEqual([]);
+        expect(check.objective).toBeCloseTo(result.dive!.objective, 6);
+        const solved = await fullMip(problem, session);
+        if (solved.status !== 'optimal' || solved.objective === null) return;
+        expect(check.objective).toBeGreaterThanOrEqual(
+          solved.objective - 1e-6 * Math.max(1, solved.objective),
+        );
+        compared++;
+      }),
       { seed: 20261205, numRuns: 30 },
     );
     expect(compared).toBeGreaterThan(10);

@@ -10,27 +10,15 @@
  */
 import fc from 'fast-check';
 import { ProblemIndex } from '../model/context';
-import { productProblemArb } from '../../external/random-instances.test-helpers';
 import { checkRoster } from '../check/checker';
 import { construct } from '../heuristic/construct';
 import { threadSession } from '../solve/run-mip';
-import { solveRoster } from '../solve/solve';
 import { loadInstance } from '../bench/curtois-qu';
 import { lineBound } from '../bound/line-bound';
-import type { PersonLine } from '../bound/line-master';
-import type { Roster, RosterProblem } from '../problem';
+import { linesOf, type PersonLine, rosterOfLines } from '../bound/line-master';
+import { fullMip, smallProblems } from '../bound/lines.test-helpers';
+import type { RosterProblem } from '../problem';
 import { linePack } from './line-pack';
-
-function linesOf(index: ProblemIndex, roster: Roster): Int16Array {
-  const lines = new Int16Array(index.P * index.D);
-  index.toGrid(roster).grid.forEach((line, p) => lines.set(line, p * index.D));
-  return lines;
-}
-
-function rosterOf(index: ProblemIndex, lines: Int16Array): Roster {
-  const { P, D } = index;
-  return index.fromGrid(Array.from({ length: P }, (_, p) => Array.from(lines.subarray(p * D, (p + 1) * D))));
-}
 
 function poolOf(index: ProblemIndex, lines: Int16Array): PersonLine[] {
   return Array.from({ length: index.P }, (_, person) => ({
@@ -47,41 +35,31 @@ describe('linePack: the best roster made of given lines', () => {
     let compared = 0;
     let started = 0;
     await fc.assert(
-      fc.asyncProperty(
-        productProblemArb({ horizons: [7, 14], maxStaff: 4, maxShiftTypes: 3 }),
-        async (problem: RosterProblem) => {
-          const solved = await solveRoster(problem, {
-            strategy: 'mip',
-            warmStart: null,
-            explain: false,
-            staffingCheck: false,
-            timeLimitSeconds: 30,
-            session,
-          });
-          if (solved.status !== 'optimal' || solved.roster === null) return;
-          const index = new ProblemIndex(problem);
-          const bound = lineBound(index, session, { timeLimitMs: 60_000 });
-          const pool = [...bound.lines, ...poolOf(index, linesOf(index, solved.roster))];
-          const packed = linePack(index, session, pool, { timeLimitSeconds: 60 });
-          expect(packed.optimal).toBe(true);
-          const check = checkRoster(problem, rosterOf(index, packed.grid!), index);
-          expect(check.violations).toEqual([]);
-          expect(check.objective).toBeCloseTo(solved.objective!, 6);
-          compared++;
+      fc.asyncProperty(smallProblems(), async (problem: RosterProblem) => {
+        const solved = await fullMip(problem, session);
+        if (solved.status !== 'optimal' || solved.roster === null) return;
+        const index = new ProblemIndex(problem);
+        const bound = lineBound(index, session, { timeLimitMs: 60_000 });
+        const pool = [...bound.lines, ...poolOf(index, linesOf(index, solved.roster))];
+        const packed = linePack(index, session, pool, { timeLimitSeconds: 60 });
+        expect(packed.optimal).toBe(true);
+        const check = checkRoster(problem, rosterOfLines(index, packed.grid!), index);
+        expect(check.violations).toEqual([]);
+        expect(check.objective).toBeCloseTo(solved.objective!, 6);
+        compared++;
 
-          const start = construct(problem, { timeLimitMs: 200, seed: 1 });
-          const startCheck = checkRoster(problem, start, index);
-          if (startCheck.violations.length > 0) return;
-          const fromStart = linePack(index, session, bound.lines, {
-            timeLimitSeconds: 60,
-            start: linesOf(index, start),
-          });
-          const after = checkRoster(problem, rosterOf(index, fromStart.grid!), index);
-          expect(after.violations).toEqual([]);
-          expect(after.objective).toBeLessThanOrEqual(startCheck.objective + 1e-6);
-          started++;
-        },
-      ),
+        const start = construct(problem, { timeLimitMs: 200, seed: 1 });
+        const startCheck = checkRoster(problem, start, index);
+        if (startCheck.violations.length > 0) return;
+        const fromStart = linePack(index, session, bound.lines, {
+          timeLimitSeconds: 60,
+          start: linesOf(index, start),
+        });
+        const after = checkRoster(problem, rosterOfLines(index, fromStart.grid!), index);
+        expect(after.violations).toEqual([]);
+        expect(after.objective).toBeLessThanOrEqual(startCheck.objective + 1e-6);
+        started++;
+      }),
       { seed: 20261205, numRuns: 30 },
     );
     expect(compared).toBeGreaterThan(10);
@@ -95,7 +73,7 @@ describe('linePack: the best roster made of given lines', () => {
     const bound = lineBound(index, session, { timeLimitMs: 120_000 });
     const packed = linePack(index, session, bound.lines, { timeLimitSeconds: 20 });
     expect(packed.grid).not.toBeNull();
-    const check = checkRoster(problem, rosterOf(index, packed.grid!), index);
+    const check = checkRoster(problem, rosterOfLines(index, packed.grid!), index);
     expect(check.violations).toEqual([]);
     expect(check.objective).toBeCloseTo(packed.objective!, 6);
     expect(check.objective).toBeGreaterThanOrEqual(1143);

@@ -27,6 +27,7 @@ import { staffingSafety, staffingShortfall, staffingStatement } from '../safety/
 import { type HighsSession, isWasmFailure } from './highs-session';
 import { LineDp } from '../search/line-dp';
 import { lineBound } from '../bound/line-bound';
+import { linesOf, rosterOfLines } from '../bound/line-master';
 import { linePack } from '../search/line-pack';
 import {
   isCancelled,
@@ -565,15 +566,6 @@ function lineBoundPhase(
   const gap = relativeGap(best.objective, bound);
   if (gap !== null && gap <= (options.lineBoundGap ?? LINE_BOUND_GAP)) return null;
   const { index } = built;
-  const toLines = (roster: Roster): Int16Array => {
-    const lines = new Int16Array(index.P * index.D);
-    index.toGrid(roster).grid.forEach((line, p) => lines.set(line, p * index.D));
-    return lines;
-  };
-  const fromLines = (lines: Int16Array): Roster =>
-    index.fromGrid(
-      Array.from({ length: index.P }, (_, p) => Array.from(lines.subarray(p * index.D, (p + 1) * index.D))),
-    );
   const whole = wholeObjective(built);
   // A whole objective can stop one below the roster's: rounding up closes the gap.
   const target = best.objective - (whole ? 1 - 1e-6 : 0);
@@ -581,7 +573,7 @@ function lineBoundPhase(
   try {
     const result = lineBound(index, session, {
       timeLimitMs: seconds * 1000,
-      seed: toLines(best.roster),
+      seed: linesOf(index, best.roster),
       target,
       diveMs: () => {
         rosterMs = (options.columnRosters ?? true) ? rosterSeconds() * 1000 : 0;
@@ -595,7 +587,7 @@ function lineBoundPhase(
     let better: ColumnPhaseResult['better'] = null;
     const offer = (lines: Int16Array | null): void => {
       if (!lines) return;
-      const roster = fromLines(lines);
+      const roster = rosterOfLines(index, lines);
       const check = checkRoster(problem, roster, index);
       if (check.violations.length > 0) return;
       if (check.objective >= (better?.objective ?? best.objective) - 1e-9) return;
@@ -608,7 +600,7 @@ function lineBoundPhase(
     if (left > 500 && value < current() - 1e-9 && !isCancelled(options)) {
       const packed = linePack(index, session, result.lines, {
         timeLimitSeconds: left / 1000,
-        start: toLines((better as ColumnPhaseResult['better'])?.roster ?? best.roster),
+        start: linesOf(index, (better as ColumnPhaseResult['better'])?.roster ?? best.roster),
         randomSeed: options.randomSeed,
         signal: options.signal,
         cancelFlag: options.cancelFlag,
