@@ -128,7 +128,9 @@ export function lineBound(
     result.lines = columns.pool;
     generate(columns, exact, fast, options, elapsed, result);
     const diveMs = typeof options.diveMs === 'function' ? options.diveMs() : (options.diveMs ?? 0);
-    if (diveMs > 0 && result.master !== null && !options.shouldStop?.()) {
+    // No dive once the bound has reached the target (the roster it came from is then optimal).
+    const reached = options.target !== undefined && result.bound !== null && result.bound >= options.target;
+    if (diveMs > 0 && result.master !== null && !reached && !options.shouldStop?.()) {
       const t1 = performance.now();
       result.dive = lineDive(columns, fast, { timeLimitMs: diveMs, shouldStop: options.shouldStop });
       result.diveSpentMs = performance.now() - t1;

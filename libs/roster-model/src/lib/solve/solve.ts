@@ -537,7 +537,8 @@ function wholeObjective(built: BuiltModel): boolean {
 
 /** What the column phase found: the bound and, when better than the roster it started from, a roster. */
 interface ColumnPhaseResult {
-  value: number;
+  /** The bound, or null when no exact round finished (the dive may still have found a roster). */
+  value: number | null;
   converged: boolean;
   better: { values: Float64Array; objective: number; roster: Roster } | null;
 }
@@ -581,9 +582,8 @@ function lineBoundPhase(
       },
       shouldStop: () => isCancelled(options),
     });
-    if (result.bound === null) return null;
-    const value = whole ? Math.ceil(result.bound - 1e-6) : result.bound;
-    const converged = result.converged || value >= best.objective - 1e-9;
+    const value = result.bound === null ? null : whole ? Math.ceil(result.bound - 1e-6) : result.bound;
+    const converged = value !== null && (result.converged || value >= best.objective - 1e-9);
     let better: ColumnPhaseResult['better'] = null;
     const offer = (lines: Int16Array | null): void => {
       if (!lines) return;
@@ -597,7 +597,7 @@ function lineBoundPhase(
     offer(result.dive?.grid ?? null);
     const left = rosterMs - result.diveSpentMs;
     const current = (): number => (better as ColumnPhaseResult['better'])?.objective ?? best.objective;
-    if (left > 500 && value < current() - 1e-9 && !isCancelled(options)) {
+    if (left > 500 && (value === null || value < current() - 1e-9) && !isCancelled(options)) {
       const packed = linePack(index, session, result.lines, {
         timeLimitSeconds: left / 1000,
         start: linesOf(index, (better as ColumnPhaseResult['better'])?.roster ?? best.roster),
@@ -607,7 +607,7 @@ function lineBoundPhase(
       });
       offer(packed.grid);
     }
-    return { value, converged, better };
+    return value === null && better === null ? null : { value, converged, better };
   } catch (err) {
     if (isWasmFailure(err)) session.markBroken();
     throw err;
@@ -715,6 +715,7 @@ export async function solveRoster(
     // 12 under load, 2,709 against the MIP's 3,638).
     const goodFirstBound =
       firstBound !== null &&
+      firstBound.value !== null &&
       (firstBound.converged ||
         (relativeGap(start?.objective ?? null, firstBound.value) ?? 1) <= LINE_BOUND_GAP);
     const waitForBound =
@@ -775,8 +776,9 @@ export async function solveRoster(
     let proven = false;
     // A roster from the generated lines after the MIP, better than the MIP's.
     let columnRoster: StartRoster | null = null;
-    if (firstBound && (run.bound === null || run.bound < firstBound.value))
-      run = { ...run, bound: firstBound.value, gap: relativeGap(run.objective, firstBound.value) };
+    const firstValue = firstBound?.value ?? null;
+    if (firstValue !== null && (run.bound === null || run.bound < firstValue))
+      run = { ...run, bound: firstValue, gap: relativeGap(run.objective, firstValue) };
     if (
       auto &&
       strategy === 'mipThenFixAndOptimise' &&
@@ -798,8 +800,9 @@ export async function solveRoster(
         columnRosterSeconds,
         options,
       );
-      if (columnBound !== null && (run.bound === null || run.bound < columnBound.value))
-        run = { ...run, bound: columnBound.value, gap: relativeGap(run.objective, columnBound.value) };
+      const columnValue = columnBound?.value ?? null;
+      if (columnValue !== null && (run.bound === null || run.bound < columnValue))
+        run = { ...run, bound: columnValue, gap: relativeGap(run.objective, columnValue) };
       if (columnBound?.better) {
         const { values, objective, roster } = columnBound.better;
         start = { values, objective };
