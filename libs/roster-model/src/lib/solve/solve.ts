@@ -720,11 +720,14 @@ export async function solveRoster(
         (relativeGap(start?.objective ?? null, firstBound.value) ?? 1) <= LINE_BOUND_GAP);
     const waitForBound =
       auto && strategy === 'mipThenFixAndOptimise' && built.numX < AUTO_HUGE_MODEL_X && !goodFirstBound;
+    // After a column phase that gave no bound (benchmark instance 15 at 600 s: none), the MIP still
+    // gets its share of the time left to reach its root bound.
+    const boundCap = large ? MIP_BOUND_CAP_LARGE : MIP_BOUND_CAP;
     const mipCap = waitForBound
       ? Math.max(
           mipLimit,
-          setupSeconds +
-            Math.max(0, timeLimitSeconds - setupSeconds) * (large ? MIP_BOUND_CAP_LARGE : MIP_BOUND_CAP),
+          setupSeconds + Math.max(0, timeLimitSeconds - setupSeconds) * boundCap,
+          elapsed() + Math.max(0, timeLimitSeconds - elapsed()) * boundCap,
         )
       : mipLimit;
     run = firstBound?.converged
