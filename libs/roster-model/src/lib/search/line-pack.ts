@@ -51,13 +51,15 @@ export function linePack(
   const master = new LineMaster(index, options.cost ?? new LineCost(index));
   // Distinct lines only (the pricing can return a line twice across rounds).
   const lines: PersonLine[] = [];
-  const seen = new Set<string>();
+  const seen = new Map<string, number>();
   const add = (person: number, line: Int16Array): number => {
     const key = `${person}:${line.join(',')}`;
-    if (seen.has(key)) return lines.findIndex((l) => l.person === person && sameLine(l.line, line));
-    seen.add(key);
-    lines.push({ person, line });
-    return lines.length - 1;
+    let k = seen.get(key);
+    if (k === undefined) {
+      k = lines.push({ person, line }) - 1;
+      seen.set(key, k);
+    }
+    return k;
   };
   let chosen: number[] | null = null;
   if (options.start) {
@@ -110,9 +112,4 @@ export function linePack(
   for (let j = 0; j < values.length; j++) objective += model.colCost[j] * values[j];
   result.objective = objective;
   return result;
-}
-
-function sameLine(a: Int16Array, b: Int16Array): boolean {
-  for (let d = 0; d < a.length; d++) if (a[d] !== b[d]) return false;
-  return true;
 }

@@ -584,29 +584,31 @@ function lineBoundPhase(
     });
     const value = result.bound === null ? null : whole ? Math.ceil(result.bound - 1e-6) : result.bound;
     const converged = value !== null && (result.converged || value >= best.objective - 1e-9);
-    let better: ColumnPhaseResult['better'] = null;
+    // Kept in a holder: TypeScript does not follow assignments made inside `offer`.
+    const found: { better: ColumnPhaseResult['better'] } = { better: null };
     const offer = (lines: Int16Array | null): void => {
       if (!lines) return;
       const roster = rosterOfLines(index, lines);
       const check = checkRoster(problem, roster, index);
       if (check.violations.length > 0) return;
-      if (check.objective >= (better?.objective ?? best.objective) - 1e-9) return;
-      better = { values: built.encode(roster), objective: check.objective, roster };
+      if (check.objective >= (found.better?.objective ?? best.objective) - 1e-9) return;
+      found.better = { values: built.encode(roster), objective: check.objective, roster };
       options.onRoster?.(roster, check.objective);
     };
     offer(result.dive?.grid ?? null);
     const left = rosterMs - result.diveSpentMs;
-    const current = (): number => (better as ColumnPhaseResult['better'])?.objective ?? best.objective;
-    if (left > 500 && (value === null || value < current() - 1e-9) && !isCancelled(options)) {
+    const current = found.better?.objective ?? best.objective;
+    if (left > 500 && (value === null || value < current - 1e-9) && !isCancelled(options)) {
       const packed = linePack(index, session, result.lines, {
         timeLimitSeconds: left / 1000,
-        start: linesOf(index, (better as ColumnPhaseResult['better'])?.roster ?? best.roster),
+        start: linesOf(index, found.better?.roster ?? best.roster),
         randomSeed: options.randomSeed,
         signal: options.signal,
         cancelFlag: options.cancelFlag,
       });
       offer(packed.grid);
     }
+    const better = found.better;
     return value === null && better === null ? null : { value, converged, better };
   } catch (err) {
     if (isWasmFailure(err)) session.markBroken();
