@@ -38,6 +38,16 @@ describe('staffing safety', () => {
     );
   });
 
+  it('proves the fewest from the first roster and states it against the roster shown (start 10 short, shown 8)', async () => {
+    // Each nurse on 2 nights: 14 − 4 = 10 people short, a roster that keeps every rule. The proof
+    // runs from it before the solve; the roster shown is the solve's (8 short, the fewest possible).
+    const start = roster({ a: 'NN.....', b: '..NN...', c: '.......' });
+    expect(staffingShortfall(new ProblemIndex(shortNights()), start).peopleShort).toBe(10);
+    const result = await solveRoster(shortNights(), { timeLimitSeconds: 20, warmStart: start });
+    expect(result.staffing).toMatchObject({ peopleShort: 8, fewestPossible: 8, proven: true });
+    expect(result.staffingStatement).toContain('no roster can do better than 8 people short');
+  });
+
   it('counts nights with nobody of the required skill, and says nothing when every minimum is met', () => {
     const p = shortNights();
     const index = new ProblemIndex(p);
