@@ -10,30 +10,19 @@
  * HiGHS (SOLVER-NOTES.md: upstream still has open wrong-answer reports).
  *
  * This runs on the calling thread and blocks it while HiGHS works; the pool (pool/solver-pool.ts)
- * runs it in a worker thread for servers.
+ * runs it in a worker thread for servers. The phases live in phases.ts, the shares of the time limit
+ * they get (and what each was measured against) in policy.ts, the checker's verdict in agreement.ts.
  */
 import type { Roster, RosterProblem } from '../problem';
-import type { CheckResult, ConflictExplanation, SolveProgress, SolveResult, StaffingSafety } from '../result';
+import type { ConflictExplanation, SolveProgress, SolveResult, StaffingSafety } from '../result';
 import { checkRoster } from '../check/checker';
 import { explainConflicts } from '../explain/conflicts';
 import { qualityStatement } from '../explain/quality';
 import { explainRequests } from '../explain/requests';
 import { explainUnmetNeeds } from '../explain/unmet-needs';
-import { construct, improve } from '../heuristic/construct';
-import { fixAndOptimise, type SubMipSolver } from '../heuristic/fix-and-optimise';
 import { buildModel, type BuiltModel } from '../model/build-model';
-import { searchRoster } from '../search/roster-search';
-import {
-  mergedStaffingSafety,
-  staffingSafety,
-  staffingShortfall,
-  staffingStatement,
-} from '../safety/staffing';
+import { mergedStaffingSafety, staffingStatement } from '../safety/staffing';
 import { type HighsSession, isWasmFailure } from './highs-session';
-import { LineDp } from '../search/line-dp';
-import { lineBound } from '../bound/line-bound';
-import { linesOf, rosterOfLines } from '../bound/line-master';
-import { linePack } from '../search/line-pack';
 import {
   isCancelled,
   MODEL_STATUS,
@@ -43,6 +32,36 @@ import {
   threadSession,
   type MipRunResult,
 } from './run-mip';
+import {
+  AUTO_LARGE_MODEL_X,
+  AUTO_FIX_AND_OPTIMISE_SHARE,
+  AUTO_LARGE_HIGHS_OPTIONS,
+  AUTO_HUGE_MODEL_X,
+  MIP_BOUND_CAP,
+  MIP_BOUND_CAP_LARGE,
+  LINE_BOUND_GAP,
+  LINE_BOUND_SHARE,
+  LINE_BOUND_SHARE_LARGE,
+  COLUMN_ROSTER_SHARE,
+  STAFFING_SHARE,
+  STAFFING_MAX_SECONDS,
+  STAFFING_MIN_SECONDS,
+  AUTO_FIX_AND_OPTIMISE_SHARE_SMALL,
+  FIX_AND_OPTIMISE_BEFORE_COLUMNS,
+} from './policy';
+import {
+  elasticPenalty,
+  fixAndOptimisePhase,
+  lineBoundPhase,
+  proveStaffing,
+  startValuesOf,
+  strictRun,
+  usesSearch,
+  warmStartRoster,
+  type StartRoster,
+} from './phases';
+import { assertCheckerAgrees, SolverCheckError } from './agreement';
+export { assertCheckerAgrees, SolverCheckError } from './agreement';
 
 export interface SolveRosterOptions {
   /** Wall-clock limit for the whole solve, model building included (default 60 s). */
@@ -137,124 +156,6 @@ export interface SolveRosterOptions {
   incomingRoster?: () => Roster | null;
 }
 
-/**
- * From this many x columns on, 'auto' switches to 'mipThenFixAndOptimise'. On the shift scheduling
- * benchmark (SOURCES.md) instances 1-7 have 104-1,248 x columns and 8-12 have 2,158-10,452; on 10-12
- * the full MIP spends the whole minute in its root (cuts) and finds no roster beyond its first.
- */
-export const AUTO_LARGE_MODEL_X = 2000;
-/**
- * Time limit of each fix-and-optimise sub-MIP (seconds). Paired 60 s two-core runs of benchmark
- * instances 8, 10, 11 and 12 (docs/benchmarks.md): 1 s gave the better roster in 4 of 5 pairs
- * against 3 s (more, smaller neighbourhoods in the same time).
- */
-export const FIX_AND_OPTIMISE_SUB_SECONDS = 1;
-/** Share of the time for fix-and-optimise in 'auto' on large models. */
-export const AUTO_FIX_AND_OPTIMISE_SHARE = 0.8;
-/**
- * HiGHS options 'auto' sets for large models: the root LP by interior point (instance 10: first
- * bound after 11-13 s instead of 30 s; instance 12: after 27-28 s instead of none in 60 s) and more
- * heuristic effort at the root (default 0.05).
- */
-export const AUTO_LARGE_HIGHS_OPTIONS: Record<string, string | number> = {
-  mip_lp_solver: 'ipm',
-  mip_heuristic_effort: 0.3,
-};
-
-/**
- * Share of the time for the local search before HiGHS. On the demo ward (17 people, 28 days) the
- * search finds in 5-10 s a roster that 30 s of the MIP alone did not; HiGHS then proves the bound
- * from it and improves it (docs/benchmarks.md).
- */
-export const AUTO_SEARCH_SHARE = 0.4;
-/**
- * Models with this many assignment columns or more (benchmark instances 13, 20 and 21 and beyond:
- * half-year periods, a hundred people) give the local search AUTO_SEARCH_SHARE_HUGE of the time and
- * do not wait for the MIP's root bound: on instance 20 (150 s) the MIP spent 48 s without a bound or
- * a better roster while the search and fix-and-optimise were still improving.
- */
-export const AUTO_HUGE_MODEL_X = 40_000;
-export const AUTO_SEARCH_SHARE_HUGE = 0.7;
-/**
- * Large models below AUTO_HUGE_MODEL_X, where the column-generation bound and the rosters from its
- * lines come first after the search (LINE_BOUND_SHARE_LARGE, COLUMN_ROSTER_SHARE): side by side on
- * benchmark instances 8, 9, 10 and 12 (60 s, one core each), 0.15 against 0.4 gave 1312 / 1404,
- * 439 / 443, 4631 (optimal, in 31 s) / 4691 and 4500 / 4570 (docs/benchmarks.md).
- */
-export const AUTO_SEARCH_SHARE_LARGE = 0.15;
-/**
- * Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root
- * bound; on large models fix-and-optimise keeps at least 40% (it finds most of their improvements).
- */
-export const MIP_BOUND_CAP = 0.9;
-export const MIP_BOUND_CAP_LARGE = 0.6;
-
-/**
- * The search hands over to HiGHS early when it has found nothing better for this long and for half
- * its time so far: small problems then reach HiGHS (which proves them optimal) within a second or two.
- */
-const SEARCH_STALL_MS = 1000;
-
-/**
- * The search hands over after this share of its time when it has found no roster that keeps every
- * hard rule (benchmark Instances 20 and 21, 50 and 100 people over 182 days: none in 240 s under
- * load); fix-and-optimise then repairs the roster on the elastic model.
- */
-const SEARCH_GIVE_UP_SHARE = 0.25;
-
-/**
- * In 'auto', a MIP bound further than this share below the best roster gets the column-generation
- * bound for at most LINE_BOUND_SHARE of the time left; it stops as soon as it proves the roster
- * optimal. On benchmark instances 1-12 it reaches the published column-generation LP bounds (within
- * 0.3% of the optimum on 5-12, equal to it on 2-4, 10-12) where the MIP's bound after 60 s is up to
- * 18% lower; on the demo ward the MIP's bound is better (docs/benchmarks.md).
- */
-export const LINE_BOUND_GAP = 0.02;
-export const LINE_BOUND_SHARE = 0.25;
-/**
- * On large models (AUTO_LARGE_MODEL_X) the column-generation bound comes first, for at most this
- * share of the time after the search (the time the MIP would wait for its root bound); solved to
- * the end, it replaces the MIP, which on these models spends its time in the root (instances
- * 10-12), and fix-and-optimise gets the rest.
- */
-export const LINE_BOUND_SHARE_LARGE = 0.4;
-/**
- * Once the column-generation bound has been computed, rosters from its lines (the dive, then the
- * best roster made of the master's lines) get at most this share of the time left, the dive's
- * pricing at most COLUMN_DIVE_SHARE of that (a dive that will not finish gives up early).
- * Alone, after the bound, they reach the best known rosters of instances 5 and 11, and 439 on 9,
- * 1,059 on 7 and 1,317 on 8 in 2-24 s, where the local search and fix-and-optimise stayed 2-15%
- * above in a minute (docs/benchmarks.md).
- */
-export const COLUMN_ROSTER_SHARE = 0.7;
-export const COLUMN_DIVE_SHARE = 0.75;
-
-/** Share of the time limit, and most seconds, kept for proving the fewest people short of minimum. */
-export const STAFFING_SHARE = 0.1;
-export const STAFFING_MAX_SECONDS = 10;
-/** Seconds the staffing proof gets at least (when the time limit leaves them). */
-const STAFFING_MIN_SECONDS = 1;
-
-/** Progress events at most this often (HiGHS's own events keep the same interval). */
-const PROGRESS_INTERVAL_MS = 250;
-
-/** Share of the time after the search for fix-and-optimise on models below AUTO_LARGE_MODEL_X. */
-export const AUTO_FIX_AND_OPTIMISE_SHARE_SMALL = 0.6;
-/**
- * Small models in 'auto': after the MIP, fix-and-optimise gets this share of the time left before
- * the column-generation bound is considered (LINE_BOUND_GAP), and the rest after it. The gap that
- * decides is then a polished roster's: on the demo ward (30 s, one core, six seeds) the bound, which
- * does not finish there, no longer takes a quarter of the time (mean 2,399 against 2,409.3); on
- * benchmark instances 1-7 (60 s) every result stayed the same or better (docs/benchmarks.md).
- */
-export const FIX_AND_OPTIMISE_BEFORE_COLUMNS = 0.6;
-
-function usesSearch(options: SolveRosterOptions): boolean {
-  const heuristic = options.warmStart === undefined || options.warmStart === 'heuristic';
-  return heuristic && (options.searchShare ?? AUTO_SEARCH_SHARE) > 0;
-}
-
-/** What solveRoster returns: the SolveResult the product uses, plus numbers for benchmarks and logs. */
 export interface RosterSolveResult extends SolveResult {
   model: { columns: number; rows: number; nonzeros: number };
   /** Seconds spent before HiGHS started (model building and the warm-start heuristic). */
@@ -266,246 +167,6 @@ export interface RosterSolveResult extends SolveResult {
   warmStartObjective: number | null;
   /** Every improving roster's objective and the second it was found. */
   improvements: { objective: number; seconds: number }[];
-}
-
-/** The solver returned a roster that the independent checker rejects: a bug, never a user error. */
-export class SolverCheckError extends Error {
-  constructor(
-    message: string,
-    readonly check: CheckResult,
-    readonly solverObjective: number,
-  ) {
-    super(message);
-    this.name = 'SolverCheckError';
-  }
-}
-
-/** Compare the checker's verdict on a solver roster with the solver's own objective; throw on any disagreement. */
-export function assertCheckerAgrees(check: CheckResult, solverObjective: number, tolerance?: number): void {
-  if (check.violations.length > 0) {
-    const shown = check.violations
-      .slice(0, 5)
-      .map((v) => v.message)
-      .join('; ');
-    throw new SolverCheckError(
-      `Solver/checker disagreement: the solver's roster breaks ${check.violations.length} hard rule(s): ${shown}`,
-      check,
-      solverObjective,
-    );
-  }
-  const allowed = tolerance ?? 1e-6 * Math.max(1, Math.abs(solverObjective));
-  if (!(Math.abs(check.objective - solverObjective) <= allowed)) {
-    throw new SolverCheckError(
-      `Solver/checker disagreement: the solver reports objective ${solverObjective} but the checker computes ${check.objective} (terms ${JSON.stringify(check.terms)})`,
-      check,
-      solverObjective,
-    );
-  }
-}
-
-interface StartRoster {
-  roster: Roster;
-  check: CheckResult;
-}
-
-function warmStartRoster(
-  built: BuiltModel,
-  problem: RosterProblem,
-  options: SolveRosterOptions,
-  timeLimitSeconds: number,
-  clockStart: number,
-  progressClock: { last: number },
-): StartRoster | null {
-  const warmStart = options.warmStart;
-  if (warmStart === null) return null;
-  if (warmStart !== undefined && warmStart !== 'heuristic') {
-    return { roster: warmStart, check: checkRoster(problem, warmStart, built.index) };
-  }
-  const huge = built.numX >= AUTO_HUGE_MODEL_X;
-  const columnsFirst = !huge && built.numX >= AUTO_LARGE_MODEL_X && options.lineBoundShare !== 0;
-  const share = Math.min(
-    1,
-    Math.max(
-      0,
-      options.searchShare ??
-        (huge ? AUTO_SEARCH_SHARE_HUGE : columnsFirst ? AUTO_SEARCH_SHARE_LARGE : AUTO_SEARCH_SHARE),
-    ),
-  );
-  const left = (): number => timeLimitSeconds * 1000 - (performance.now() - clockStart);
-  // The greedy fill with a short local search of its own: the fast search below does the rest.
-  const heuristicMs = Math.max(0, Math.min(share > 0 ? 300 : 1000, left()));
-  const started = performance.now();
-  let roster = construct(problem, { timeLimitMs: heuristicMs });
-  let check = checkRoster(problem, roster, built.index);
-  const searchMs = share * left();
-  if (share > 0 && searchMs > 0) {
-    const elapsed = (): number => (performance.now() - clockStart) / 1000;
-    // Progress and rosters for the other core at most 4 times a second (and the last one at the end).
-    let unsent = false;
-    const send = (objective: number, grid: () => number[][]): void => {
-      progressClock.last = performance.now();
-      unsent = false;
-      options.onProgress?.({ elapsedSeconds: elapsed(), objective, bound: null, gap: null });
-      options.onRoster?.(built.index.fromGrid(grid()), objective);
-    };
-    const lineDp = options.lineShare === 0 ? null : new LineDp(built.index);
-    const found = searchRoster(built.index, roster, {
-      timeLimitMs: searchMs,
-      lineSolver: lineDp ? (p, extra) => lineDp.solve(p, extra) : undefined,
-      lineShare: options.lineShare,
-      stallMs: SEARCH_STALL_MS,
-      giveUpMs: searchMs * SEARCH_GIVE_UP_SHARE,
-      seed: (options.randomSeed ?? 0) + 1,
-      shouldStop: () => isCancelled(options),
-      onBest: (objective, grid) => {
-        if (performance.now() - progressClock.last >= PROGRESS_INTERVAL_MS) send(objective, grid);
-        else unsent = true;
-      },
-      incoming: options.incomingRoster
-        ? () => {
-            const offered = options.incomingRoster?.();
-            return offered ? built.index.toGrid(offered).grid : null;
-          }
-        : undefined,
-    });
-    // The last roster goes to the other core at once; its progress waits for the interval (HiGHS,
-    // starting from this roster, reports it).
-    if (unsent && found.feasible) options.onRoster?.(found.roster, found.objective);
-    roster = found.roster;
-    check = checkRoster(problem, roster, built.index);
-    return { roster, check };
-  }
-  // Without the fast search: a start that meets every hard rule lets HiGHS begin from a roster,
-  // which it keeps improving; without one it may spend the whole limit searching. So the
-  // heuristic's search goes on, a second at a time, while rules are broken, for at most 20% of the
-  // limit (8 s at most).
-  const extraUntil = started + Math.min(8000, timeLimitSeconds * 200);
-  for (let round = 1; check.violations.length > 0 && performance.now() + 1000 <= extraUntil; round++) {
-    roster = improve(problem, roster, { timeLimitMs: 1000, seed: round });
-    check = checkRoster(problem, roster, built.index);
-  }
-  return { roster, check };
-}
-
-/** A start for HiGHS: only a roster that meets every hard rule (HiGHS rejects any other). */
-function startValuesOf(
-  built: BuiltModel,
-  start: StartRoster | null,
-): { values: Float64Array; objective: number } | null {
-  if (!start || start.check.violations.length > 0) return null;
-  return { values: built.encode(start.roster), objective: start.check.objective };
-}
-
-/**
- * The result of a MIP run on the elastic model as a run on the strict one: its incumbent if that
- * breaks no hard rule (re-encoded in the strict model), else no incumbent. Proven optimal with a
- * broken rule means no roster meets every hard rule: reported as infeasible, so the conflicts are
- * explained on the strict model.
- */
-function strictRun(
-  elasticRun: MipRunResult,
-  elastic: BuiltModel,
-  penalty: number,
-  built: BuiltModel,
-  problem: RosterProblem,
-): MipRunResult {
-  const run = { ...elasticRun, improvements: elasticRun.improvements.filter((i) => i.objective < penalty) };
-  if (!run.values) return run;
-  const roster = elastic.decode(run.values);
-  const check = checkRoster(problem, roster, built.index);
-  if (check.violations.length === 0) {
-    const values = built.encode(roster);
-    return { ...run, values, objective: built.objectiveOf(values) };
-  }
-  // The model pays for no broken rule, yet the checker finds one: the model and the checker disagree
-  // (a defect, never infeasibility).
-  if (elasticSlack(elastic, run.values) <= 1e-6) assertCheckerAgrees(check, run.objective ?? NaN);
-  const status = run.status === 'optimal' ? 'infeasible' : run.status;
-  return {
-    ...run,
-    status,
-    modelStatusText: status === 'infeasible' ? 'infeasible' : run.modelStatusText,
-    values: null,
-    objective: null,
-    gap: null,
-    secondsToBest: null,
-  };
-}
-
-/** Total of the elastic model's slack columns (violations it prices) in `values`. */
-function elasticSlack(elastic: BuiltModel, values: ArrayLike<number>): number {
-  let total = 0;
-  const names = elastic.arrays.colNames;
-  for (let j = elastic.numX; j < names.length; j++) {
-    if (names[j].startsWith('elU_') || names[j].startsWith('elL_')) total += Math.abs(values[j]);
-  }
-  return total;
-}
-
-/** Price of one unit of hard-rule violation in the elastic model fix-and-optimise repairs a start with. */
-function elasticPenalty(built: BuiltModel): number {
-  let largest = 1;
-  for (const c of built.arrays.colCost) largest = Math.max(largest, Math.abs(c));
-  return 1000 * largest;
-}
-
-/**
- * Fix-and-optimise from the start roster for `seconds`; a start that breaks hard rules is repaired on
- * the elastic model. Returns the best roster that meets every hard rule, or null.
- */
-async function fixAndOptimisePhase(
-  problem: RosterProblem,
-  built: BuiltModel,
-  session: HighsSession,
-  start: StartRoster,
-  seconds: number,
-  options: SolveRosterOptions,
-  onImproved: (objective: number) => void,
-  targetObjective?: number,
-): Promise<{ values: Float64Array; objective: number } | null> {
-  const model =
-    start.check.violations.length > 0 ? buildModel(problem, { elastic: elasticPenalty(built) }) : built;
-  const stop = new AbortController();
-  const solveSub: SubMipSolver = async (arrays, sub) => {
-    if (isCancelled(options)) {
-      stop.abort();
-      return { values: null, optimal: false };
-    }
-    const run = runMip(session, solverArrays({ arrays }), {
-      timeLimitSeconds: sub.timeLimitSeconds,
-      startValues: sub.startValues,
-      randomSeed: sub.randomSeed,
-      signal: options.signal,
-      cancelFlag: options.cancelFlag,
-    });
-    return { values: run.values, optimal: run.status === 'optimal' };
-  };
-  let best: { values: Float64Array; objective: number } | null = startValuesOf(built, start);
-  if (best) options.onRoster?.(start.roster, best.objective);
-  const result = await fixAndOptimise(model, start.roster, solveSub, {
-    timeLimitSeconds: seconds,
-    subTimeLimitSeconds: options.fixAndOptimiseSubSeconds ?? FIX_AND_OPTIMISE_SUB_SECONDS,
-    seed: (options.randomSeed ?? 0) + 1,
-    signal: stop.signal,
-    targetObjective,
-    incoming: options.incomingRoster,
-    onImprovement: (roster) => {
-      const check = checkRoster(problem, roster, built.index);
-      if (check.violations.length > 0) return;
-      if (best && check.objective >= best.objective) return;
-      best = { values: built.encode(roster), objective: check.objective };
-      onImproved(check.objective);
-      options.onRoster?.(roster, check.objective);
-    },
-  });
-  // The last roster may have come from another solve (`incomingRoster`) and be better than any of
-  // this phase's own.
-  const last = checkRoster(problem, result.roster, built.index);
-  if (last.violations.length === 0 && (!best || last.objective < best.objective - 1e-9)) {
-    best = { values: built.encode(result.roster), objective: last.objective };
-    onImproved(last.objective);
-  }
-  return best;
 }
 
 function emptyResult(
@@ -543,114 +204,6 @@ function modelSize(built: BuiltModel): RosterSolveResult['model'] {
     rows: built.arrays.numRows,
     nonzeros: built.arrays.matrix.indices.length,
   };
-}
-
-/** True when every roster's objective is a whole number (every cost of the model is whole). */
-function wholeObjective(built: BuiltModel): boolean {
-  for (const c of built.arrays.colCost) if (!Number.isInteger(c)) return false;
-  return true;
-}
-
-/** What the column phase found: the bound and, when better than the roster it started from, a roster. */
-interface ColumnPhaseResult {
-  /** The bound, or null when no exact round finished (the dive may still have found a roster). */
-  value: number | null;
-  converged: boolean;
-  better: { values: Float64Array; objective: number; roster: Roster } | null;
-}
-
-/**
- * The column-generation bound (bound/line-bound.ts) for at most `seconds`, from the best roster's
- * lines, stopping once it proves that roster optimal; rounded up when every objective is whole.
- * Then, while the bound leaves a gap, rosters from the generated lines: the dive
- * (search/line-dive.ts, pricing for at most COLUMN_DIVE_SHARE of `rosterSeconds`) and the best
- * roster made of the master's lines (search/line-pack.ts, a MIP from the best roster so far, for
- * the rest of `rosterSeconds`). Skipped when `bound` (the MIP's) is within `lineBoundGap` of the
- * roster, on huge models (half-year lines: exact pricing takes too long) and without the search.
- */
-function lineBoundPhase(
-  problem: RosterProblem,
-  built: BuiltModel,
-  session: HighsSession,
-  best: { roster: Roster; objective: number } | null,
-  bound: number | null,
-  seconds: number,
-  rosterSeconds: () => number,
-  options: SolveRosterOptions,
-): ColumnPhaseResult | null {
-  if (!usesSearch(options) || built.numX >= AUTO_HUGE_MODEL_X || isCancelled(options)) return null;
-  if (!best || seconds < 0.5) return null;
-  const gap = relativeGap(best.objective, bound);
-  if (gap !== null && gap <= (options.lineBoundGap ?? LINE_BOUND_GAP)) return null;
-  const { index } = built;
-  const whole = wholeObjective(built);
-  // A whole objective can stop one below the roster's: rounding up closes the gap.
-  const target = best.objective - (whole ? 1 - 1e-6 : 0);
-  let rosterMs = 0;
-  try {
-    const result = lineBound(index, session, {
-      timeLimitMs: seconds * 1000,
-      seed: linesOf(index, best.roster),
-      target,
-      diveMs: () => {
-        rosterMs = (options.columnRosters ?? true) ? rosterSeconds() * 1000 : 0;
-        return rosterMs * COLUMN_DIVE_SHARE;
-      },
-      shouldStop: () => isCancelled(options),
-    });
-    const value = result.bound === null ? null : whole ? Math.ceil(result.bound - 1e-6) : result.bound;
-    const converged = value !== null && (result.converged || value >= best.objective - 1e-9);
-    // Kept in a holder: TypeScript does not follow assignments made inside `offer`.
-    const found: { better: ColumnPhaseResult['better'] } = { better: null };
-    const offer = (lines: Int16Array | null): void => {
-      if (!lines) return;
-      const roster = rosterOfLines(index, lines);
-      const check = checkRoster(problem, roster, index);
-      if (check.violations.length > 0) return;
-      if (check.objective >= (found.better?.objective ?? best.objective) - 1e-9) return;
-      found.better = { values: built.encode(roster), objective: check.objective, roster };
-      options.onRoster?.(roster, check.objective);
-    };
-    offer(result.dive?.grid ?? null);
-    const left = rosterMs - result.diveSpentMs;
-    const current = found.better?.objective ?? best.objective;
-    if (left > 500 && (value === null || value < current - 1e-9) && !isCancelled(options)) {
-      const packed = linePack(index, session, result.lines, {
-        timeLimitSeconds: left / 1000,
-        start: linesOf(index, found.better?.roster ?? best.roster),
-        randomSeed: options.randomSeed,
-        signal: options.signal,
-        cancelFlag: options.cancelFlag,
-      });
-      offer(packed.grid);
-    }
-    const better = found.better;
-    return value === null && better === null ? null : { value, converged, better };
-  } catch (err) {
-    if (isWasmFailure(err)) session.markBroken();
-    throw err;
-  }
-}
-
-/**
- * The fewest people short of minimum cover (safety/staffing.ts) proved from `roster` (which meets
- * every hard rule) within `seconds` (at least STAFFING_MIN_SECONDS when the limit leaves them).
- */
-function proveStaffing(
-  session: HighsSession,
-  index: BuiltModel['index'],
-  roster: Roster,
-  seconds: number,
-  options: SolveRosterOptions,
-): StaffingSafety {
-  try {
-    const limit = isCancelled(options) ? 0 : Math.max(seconds, STAFFING_MIN_SECONDS);
-    return staffingSafety(session, index, roster, limit, options);
-  } catch (err) {
-    if (isWasmFailure(err)) session.markBroken();
-    // The roster stands; only the proof is missing.
-    return { ...staffingShortfall(index, roster), fewestPossible: null, proven: false };
-  }
 }
 
 export async function solveRoster(
