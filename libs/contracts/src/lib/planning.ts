@@ -170,7 +170,8 @@ export interface ContractPresetDto {
   caution: string;
 }
 
-const NO_RULES: ContractRules = {
+/** Every contract rule off: the base each preset (and any generated contract) spreads its rules over. */
+export const NO_RULES: ContractRules = {
   maxShiftsPerType: null,
   minPaidMinutes: null,
   maxPaidMinutes: null,

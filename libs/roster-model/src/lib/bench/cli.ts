@@ -10,10 +10,10 @@
  * printed and `<file name without .txt>.json` is written per instance into DIR. `--model textbook`
  * solves the plain SOURCES.md §4 formulation instead (a baseline; see textbook-model.ts).
  */
-import type { SolveProgress } from '../result';
 import type { SolveRosterOptions } from '../solve/solve';
 import {
   formatTable,
+  progressPrinter,
   runInstance,
   TABLE_HEADER,
   tableRow,
@@ -105,19 +105,6 @@ export function parseArgs(argv: string[]): CliOptions {
   }
   if (options.instances.length === 0) throw new Error(`No instance given.\n${USAGE}`);
   return options;
-}
-
-/** Prints a progress line to stderr at most every 10 seconds (long runs show they are alive). */
-function progressPrinter(ref: string): (p: SolveProgress) => void {
-  let last = 0;
-  return (p) => {
-    if (p.elapsedSeconds - last < 10) return;
-    last = p.elapsedSeconds;
-    const gap = p.gap === null ? '–' : `${(p.gap * 100).toFixed(2)}%`;
-    process.stderr.write(
-      `${ref}: ${p.elapsedSeconds.toFixed(0)} s, best ${p.objective ?? '–'}, bound ${p.bound?.toFixed(1) ?? '–'}, gap ${gap}\n`,
-    );
-  };
 }
 
 export async function main(argv: string[]): Promise<number> {

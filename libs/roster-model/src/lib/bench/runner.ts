@@ -321,3 +321,16 @@ export function formatTable(rows: string[][], header: string[] = TABLE_HEADER): 
   const line = (r: string[]): string => `| ${r.map((c, i) => (c ?? '').padEnd(widths[i])).join(' | ')} |`;
   return [line(header), `| ${widths.map((w) => '-'.repeat(w)).join(' | ')} |`, ...rows.map(line)].join('\n');
 }
+
+/** Prints a progress line to stderr at most every 10 seconds (long runs show they are alive). */
+export function progressPrinter(ref: string): (p: SolveProgress) => void {
+  let last = 0;
+  return (p) => {
+    if (p.elapsedSeconds - last < 10) return;
+    last = p.elapsedSeconds;
+    const gap = p.gap === null ? '–' : `${(p.gap * 100).toFixed(2)}%`;
+    process.stderr.write(
+      `${ref}: ${p.elapsedSeconds.toFixed(0)} s, best ${p.objective ?? '–'}, bound ${p.bound?.toFixed(1) ?? '–'}, gap ${gap}\n`,
+    );
+  };
+}

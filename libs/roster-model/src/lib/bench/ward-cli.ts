@@ -8,12 +8,12 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import type { RosterProblem } from '../problem';
-import type { ObjectiveTermName, SolveProgress } from '../result';
+import type { ObjectiveTermName } from '../result';
 import { checkRoster } from '../check/checker';
 import { buildModel } from '../model/build-model';
 import { sharedSolverPool, TWO_CORE_PORTFOLIO } from '../pool/solver-pool';
 import { solveRoster, type RosterSolveResult } from '../solve/solve';
-import { formatTable } from './runner';
+import { formatTable, progressPrinter } from './runner';
 import { generateWard } from './ward';
 
 export interface WardCliOptions {
@@ -105,19 +105,6 @@ export function parseWardArgs(argv: string[]): WardCliOptions {
   }
   if (options.seeds.length === 0) throw new Error(`No seed given.\n${USAGE}`);
   return options;
-}
-
-/** A progress line on stderr at most every 10 seconds. */
-function progressPrinter(label: string): (p: SolveProgress) => void {
-  let last = 0;
-  return (p) => {
-    if (p.elapsedSeconds - last < 10) return;
-    last = p.elapsedSeconds;
-    const gap = p.gap === null ? '–' : `${(p.gap * 100).toFixed(2)}%`;
-    process.stderr.write(
-      `${label}: ${p.elapsedSeconds.toFixed(0)} s, best ${p.objective ?? '–'}, bound ${p.bound?.toFixed(1) ?? '–'}, gap ${gap}\n`,
-    );
-  };
 }
 
 async function solveWard(

@@ -20,7 +20,7 @@
  * leave credit keep that true. The minimum cover is below what the staff can give (weekends are
  * the tightest: with 2 weekends in 4, about half the people can work any one weekend).
  */
-import { contractForPeriod, type ContractRules, DATE_REQUEST_WEIGHT } from '@rotaplex/contracts';
+import { contractForPeriod, type ContractRules, DATE_REQUEST_WEIGHT, NO_RULES } from '@rotaplex/contracts';
 import type {
   Absence,
   Contract,
@@ -71,26 +71,13 @@ const TARGET_NUDGE_SHARE = 1 / 7;
 const EU_MIN_REST_MINUTES = 11 * 60;
 const EU_MAX_WEEK_MINUTES = 48 * 60;
 
-const NONE: ContractRules = {
-  maxShiftsPerType: null,
-  minPaidMinutes: null,
-  maxPaidMinutes: null,
-  targetPaidMinutes: null,
-  maxConsecutiveWorkDays: null,
-  minConsecutiveWorkDays: null,
-  minConsecutiveDaysOff: null,
-  maxWeekends: null,
-  maxConsecutiveNights: null,
-  minRestMinutes: null,
-};
-
 /**
  * Full-time: 37.5 h contracted, at least 30 h, at most the directive's 48 h average (the period is
  * the reference period); 6 days in a row at most, days off at least two together, 2 weekends in 4,
  * 4 nights in a row.
  */
 export const WARD_FULL_TIME: ContractRules = {
-  ...NONE,
+  ...NO_RULES,
   targetPaidMinutes: 2250,
   minPaidMinutes: 1800,
   maxPaidMinutes: EU_MAX_WEEK_MINUTES,
@@ -105,7 +92,7 @@ export const WARD_FULL_TIME: ContractRules = {
 export function wardPartTime(hours: number): ContractRules {
   const target = Math.round(hours * 60);
   return {
-    ...NONE,
+    ...NO_RULES,
     targetPaidMinutes: target,
     minPaidMinutes: Math.max(0, target - 450),
     maxPaidMinutes: Math.min(EU_MAX_WEEK_MINUTES, target + 450),
