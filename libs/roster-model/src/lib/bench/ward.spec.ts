@@ -70,8 +70,13 @@ describe('generateWard', () => {
 
   it('gives a short solve a roster the independent checker accepts, with the same objective', async () => {
     const problem = generateWard({ seed: 1 });
-    const result = await solveRoster(problem, { timeLimitSeconds: 5, explain: false });
+    // From the repeatable construction above (no hard violations), so a loaded machine cannot leave
+    // the solve without a roster: what it returns is never worse than its start.
+    const start = construct(problem, { seed: 1, timeLimitMs: 60_000, maxIterations: 20_000 });
+    const startObjective = checkRoster(problem, start).objective;
+    const result = await solveRoster(problem, { timeLimitSeconds: 5, explain: false, warmStart: start });
     expect(result.roster).not.toBeNull();
+    expect(result.objective!).toBeLessThanOrEqual(startObjective + 1e-6);
     const check = checkRoster(problem, result.roster!);
     expect(check.violations).toEqual([]);
     expect(result.objective).not.toBeNull();
