@@ -1,6 +1,7 @@
 export * from './lib/problem';
 export * from './lib/result';
 export * from './lib/time';
+export { creditLeave } from './lib/leave-credit';
 export { MipBuilder, type ColumnMeta, type HighsModelArrays, type RowMeta } from './lib/model/builder';
 export { ProblemIndex, ModelContext, type Grid, type RuleModule, type GoalModule } from './lib/model/context';
 export { buildModel, type BuildOptions, type BuiltModel } from './lib/model/build-model';

@@ -1,5 +1,6 @@
 import { DATE_REQUEST_WEIGHT, dayPartOf, PREFER_NOT_WEIGHT } from '@rotaplex/contracts';
-import { creditLeave, mapRequestsAndAbsences, type StaffInputRows } from './requests-mapping';
+import { creditLeave } from '@rotaplex/roster-model';
+import { mapRequestsAndAbsences, type StaffInputRows } from './requests-mapping';
 
 // Calendar facts (ISO 8601 weekdays, checked with GNU `date -d 2030-01-07 +%A`): 2030-01-07 is a Monday,
 // so 2030-01-07 … 2030-01-13 run Monday … Sunday.

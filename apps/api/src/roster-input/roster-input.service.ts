@@ -1,6 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { contractForPeriod, type ContractRules, type SolveWeights } from '@rotaplex/contracts';
 import {
+  creditLeave,
   type Contract,
   type CoverNeed,
   type Person,
@@ -19,7 +20,7 @@ import { ShiftTypeEntity } from '../shift-types/shift-type.entity';
 import { SkillEntity } from '../skills/skill.entity';
 import { StaffMemberEntity } from '../staff/staff-member.entity';
 import { UnitEntity } from '../units/unit.entity';
-import { creditLeave, mapRequestsAndAbsences, type RequestsAndAbsences } from './requests-mapping';
+import { mapRequestsAndAbsences, type RequestsAndAbsences } from './requests-mapping';
 
 /** A period's planning data as the roster model's problem, with the tables to map results back. */
 export interface RosterInput {

@@ -11,7 +11,7 @@
  *
  * The problem has the shape the API gives the engine (RosterInputService): contracts are weekly
  * rules scaled to the period by contractForPeriod, approved leave lowers minimum and target hours
- * (as creditLeave does), requests carry DATE_REQUEST_WEIGHT, no forbidden successions (the 11 h
+ * (creditLeave, shared with the API), requests carry DATE_REQUEST_WEIGHT, no forbidden successions (the 11 h
  * rest rule already forbids night → early, night → late, late → early and the like) and the
  * product's default objective weights (DEFAULT_WEIGHTS, fairness of nights and weekends included).
  *
@@ -23,7 +23,6 @@
 import { contractForPeriod, type ContractRules, DATE_REQUEST_WEIGHT, NO_RULES } from '@rotaplex/contracts';
 import type {
   Absence,
-  Contract,
   CoverNeed,
   Person,
   RosterProblem,
@@ -33,7 +32,8 @@ import type {
   SkillId,
 } from '../problem';
 import { mulberry32 } from '../random';
-import { weekdayOf } from '../time';
+import { creditLeave } from '../leave-credit';
+import { dateOf, weekdayOf } from '../time';
 
 export interface WardOptions {
   /** Number of people (default 40); the cover pattern scales with it. */
@@ -222,22 +222,13 @@ export function generateWard({ people = 40, days = 28, seed = 1 }: WardOptions =
     }
   }
 
-  // Contracts for the period; each weekday of leave lowers minimum and target hours by a fifth of a
-  // week (as the API's creditLeave does; the maximum stays).
-  const personList: Person[] = staff.map((s, p) => {
-    const contract: Contract = contractForPeriod(weekly[p], days);
-    const leaveWeekdays = [...Array(days).keys()].filter(
-      (d) => onLeave.has(`${p}|${d}`) && !isWeekend(d),
-    ).length;
-    if (leaveWeekdays > 0) {
-      const credit = (v: number): number =>
-        Math.max(0, Math.round(v - (leaveWeekdays * v) / (5 * (days / 7))));
-      if (contract.minPaidMinutes !== undefined) contract.minPaidMinutes = credit(contract.minPaidMinutes);
-      if (contract.targetPaidMinutes !== undefined)
-        contract.targetPaidMinutes = credit(contract.targetPaidMinutes);
-    }
-    return { ...s, contract };
-  });
+  // Contracts for the period, approved leave credited against the hours as the API does.
+  const dates = [...Array(days).keys()].map((d) => dateOf(base, d));
+  const personList: Person[] = creditLeave(
+    staff.map((s, p) => ({ ...s, contract: contractForPeriod(weekly[p], days) })),
+    absences,
+    dates,
+  );
 
   // Requests: 2-4 a person on days they are not on leave, at most one a day: half days off (a third
   // of those on one of two popular days, so not all can be met), a quarter shifts off, a quarter
