@@ -101,4 +101,26 @@ describe('lineBound: the column-generation bound', () => {
     expect(stopped.bound!).toBeGreaterThanOrEqual(full.bound! - 50);
     expect(stopped.iterations).toBeLessThanOrEqual(full.iterations);
   });
+
+  it("gives up, with no dive, once the master falls below the caller's threshold", async () => {
+    // Instance 1: published LP bound 558, optimum 607 (SOURCES.md §5a/§5b). The master's value only
+    // falls towards 558, so a threshold above it is crossed and one below it never is.
+    const session = await threadSession();
+    const index = new ProblemIndex(loadInstance(1).problem);
+    let diveAsked = false;
+    const diveMs = (): number => {
+      diveAsked = true;
+      return 10_000;
+    };
+    const given = lineBound(index, session, { timeLimitMs: 120_000, giveUpBelow: 800, diveMs });
+    expect(given.gaveUp).toBe(true);
+    expect(given.master!).toBeLessThan(800);
+    expect(given.converged).toBe(false);
+    expect(given.dive).toBeNull();
+    expect(diveAsked).toBe(false);
+    const kept = lineBound(index, session, { timeLimitMs: 120_000, giveUpBelow: 500 });
+    expect(kept.gaveUp).toBe(false);
+    expect(kept.converged).toBe(true);
+    expect(Math.ceil(kept.bound! - 1e-6)).toBe(558);
+  });
 });

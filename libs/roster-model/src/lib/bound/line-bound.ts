@@ -38,6 +38,12 @@ export interface LineBoundOptions {
    * most this many milliseconds more (0 or absent: none; a function is asked once the bound is done).
    */
   diveMs?: number | (() => number);
+  /**
+   * Give up once the master's value falls below this (the bound can then only be lower still: the
+   * master's value is an upper bound on it), or when three quarters of the time have gone without a
+   * bound above it; no dive follows.
+   */
+  giveUpBelow?: number;
 }
 
 export interface LineBoundResult {
@@ -54,6 +60,8 @@ export interface LineBoundResult {
   masterMs: number;
   /** Most labels the exact pricing kept on one day (search/line-dp.ts EXACT_MAX_LABELS). */
   peakLabels: number;
+  /** Stopped by `giveUpBelow`: the bound would have been worth nothing to the caller. */
+  gaveUp: boolean;
   /** The master's line columns (each keeps every rule of its person), for search/line-pack.ts. */
   lines: PersonLine[];
   /** The dive's roster (with `diveMs`), or null. */
@@ -67,6 +75,8 @@ export interface LineBoundResult {
  * rounds have found most columns); a probe longer than the time limit / (people × this) skips it.
  */
 const EXACT_ROUNDS_EXPECTED = 4;
+/** Share of the time after which a bound still below `giveUpBelow` (or none) gives up. */
+const GIVE_UP_LATE_SHARE = 0.75;
 
 export function lineBound(
   index: ProblemIndex,
@@ -94,6 +104,7 @@ export function lineBound(
     lines: [],
     dive: null,
     diveSpentMs: 0,
+    gaveUp: false,
   };
   // A probe: one exact line; when exact pricing cannot finish or would not leave time for a few
   // rounds, there will be no bound (benchmark instance 14: over 100,000 labels a day; instance 8:
@@ -127,7 +138,12 @@ export function lineBound(
   withLineColumns(index, session, master, first, (columns) => {
     result.lines = columns.pool;
     generate(columns, exact, fast, options, elapsed, result);
-    const diveMs = typeof options.diveMs === 'function' ? options.diveMs() : (options.diveMs ?? 0);
+    // A master given up on has nothing to dive on (asked for no dive time either).
+    const diveMs = result.gaveUp
+      ? 0
+      : typeof options.diveMs === 'function'
+        ? options.diveMs()
+        : (options.diveMs ?? 0);
     // No dive once the bound has reached the target (the roster it came from is then optimal).
     const reached = options.target !== undefined && result.bound !== null && result.bound >= options.target;
     if (diveMs > 0 && result.master !== null && !reached && !options.shouldStop?.()) {
@@ -157,6 +173,18 @@ function generate(
   for (;;) {
     if (!columns.solve()) break;
     result.master = columns.value();
+    // Given up when the master is already below the threshold, or when three quarters of the time
+    // have gone without a bound above it (the generated ward at 300 s: the master still at 122
+    // against a roster of 298 after 116 s, every bound negative).
+    const late = elapsed() > GIVE_UP_LATE_SHARE * options.timeLimitMs;
+    if (
+      options.giveUpBelow !== undefined &&
+      (result.master < options.giveUpBelow ||
+        (late && (result.bound === null || result.bound < options.giveUpBelow)))
+    ) {
+      result.gaveUp = true;
+      break;
+    }
     // Any multipliers give a bound (line-columns.ts keeps every slack's term finite).
     let lagrangian = columns.constant;
     let added = 0;

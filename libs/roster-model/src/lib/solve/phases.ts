@@ -29,6 +29,7 @@ import {
   SEARCH_STALL_MS,
   SEARCH_GIVE_UP_SHARE,
   LINE_BOUND_GAP,
+  LINE_BOUND_HOPELESS_GAP,
   COLUMN_DIVE_SHARE,
   STAFFING_MIN_SECONDS,
   PROGRESS_INTERVAL_MS,
@@ -292,6 +293,9 @@ export function lineBoundPhase(
       timeLimitMs: seconds * 1000,
       seed: linesOf(index, best.roster),
       target,
+      // A master far below the roster cannot give a bound worth stating (the generated ward of
+      // bench/ward.ts: 38 against rosters of 108 and more after 200 s): its time goes back.
+      giveUpBelow: best.objective > 0 ? best.objective * (1 - LINE_BOUND_HOPELESS_GAP) : undefined,
       diveMs: () => {
         rosterMs = (options.columnRosters ?? true) ? rosterSeconds() * 1000 : 0;
         return rosterMs * COLUMN_DIVE_SHARE;
