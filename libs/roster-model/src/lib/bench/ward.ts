@@ -11,8 +11,8 @@
  *
  * The problem has the shape the API gives the engine (RosterInputService): contracts are weekly
  * rules scaled to the period by contractForPeriod, approved leave lowers minimum and target hours
- * (creditLeave, shared with the API), requests carry DATE_REQUEST_WEIGHT, no forbidden successions (the 11 h
- * rest rule already forbids night → early, night → late, late → early and the like) and the
+ * (creditLeave, shared with the API), requests carry DATE_REQUEST_WEIGHT, no forbidden successions
+ * (the 11 h rest rule already forbids night → early, night → late, late → early and the like) and the
  * product's default objective weights (DEFAULT_WEIGHTS, fairness of nights and weekends included).
  *
  * Every hard rule is per person and cover shortfalls are soft, so a roster without hard violations

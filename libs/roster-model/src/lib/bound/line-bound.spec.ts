@@ -10,7 +10,9 @@
  *   the value of that model's LP relaxation (the master optimises over the convex hull of each
  *   person's rule-keeping lines, which the compact relaxation contains: a bound below it would mean
  *   a cost or a coupling row missing from the master);
- * - it stops early once it reaches a target (the solve's best roster: then proven optimal);
+ * - it stops early once it reaches a target (the solve's best roster: then proven optimal), and
+ *   gives up, with no dive, once its master falls below a threshold the bound could then never
+ *   reach (instance 1: a threshold of 800 is crossed on the way to 558, one of 500 never is);
  * - the product's solve states it on instance 4, where HiGHS's own bound after the product's 60 s
  *   is 1573.7 (docs/benchmarks.md) and the column-generation bound is the optimum, 1716.
  */
