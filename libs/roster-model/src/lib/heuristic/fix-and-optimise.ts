@@ -11,8 +11,8 @@
  */
 import type { Roster } from '../problem';
 import { checkRoster } from '../check/checker';
-import type { HighsModelArrays } from '../model/builder';
 import type { BuiltModel } from '../model/build-model';
+import { subModel, type SubModel } from './sub-model';
 import { mulberry32 } from '../random';
 
 export interface SubMipResult {
@@ -23,7 +23,7 @@ export interface SubMipResult {
 }
 
 export type SubMipSolver = (
-  arrays: HighsModelArrays,
+  arrays: SubModel['arrays'],
   options: { timeLimitSeconds: number; startValues: Float64Array; randomSeed: number },
 ) => Promise<SubMipResult>;
 
@@ -226,18 +226,17 @@ export async function fixAndOptimise(
     }
     const left = (deadline - Date.now()) / 1000;
     if (left < 0.2) break;
-    const sub = await solveSub(
-      { ...base, colLower, colUpper },
-      {
-        timeLimitSeconds: Math.min(options.subTimeLimitSeconds ?? 3, left),
-        startValues: values,
-        randomSeed: Math.floor(random() * 1e6),
-      },
-    );
+    // Only the part the free columns can change goes to HiGHS (sub-model.ts).
+    const part = subModel({ ...base, colLower, colUpper }, values);
+    const sub = await solveSub(part.arrays, {
+      timeLimitSeconds: Math.min(options.subTimeLimitSeconds ?? 3, left),
+      startValues: part.restrict(values),
+      randomSeed: Math.floor(random() * 1e6),
+    });
     if (sub.optimal) target = Math.min(totalX, Math.ceil(target * 1.15));
     else target = Math.max(20, Math.floor(target * 0.85));
     if (!sub.values) continue;
-    const candidate = built.decode(sub.values);
+    const candidate = built.decode(part.expand(sub.values));
     const candidateValues = built.encode(candidate);
     const candidateObjective = built.objectiveOf(candidateValues);
     if (candidateObjective >= objective - 1e-9) continue;

@@ -6,7 +6,7 @@
  * (textbook examples, LP relaxations).
  */
 import type { CallbackEventFor, EncodedModel, Model, ModelData, OptionValue } from 'highs';
-import type { BuiltModel } from '../model/build-model';
+import type { HighsModelArrays } from '../model/builder';
 import type { SolveProgress, SolveStatus } from '../result';
 import { HighsSession } from './highs-session';
 
@@ -313,7 +313,9 @@ export async function solveMip(
  * benchmark-sized roster (measured on instance 12, 14,489 columns), and explanations map rows back
  * through the row meta of buildModel, not through names.
  */
-export function solverArrays(built: Pick<BuiltModel, 'arrays'>): ModelData {
+export function solverArrays(built: {
+  arrays: Omit<HighsModelArrays, 'colNames' | 'rowNames'> & Partial<HighsModelArrays>;
+}): ModelData {
   const { colNames: _colNames, rowNames: _rowNames, ...rest } = built.arrays;
   return rest as unknown as ModelData;
 }
