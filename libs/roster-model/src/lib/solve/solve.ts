@@ -322,6 +322,10 @@ export async function solveRoster(
     // After a column phase that gave no bound (benchmark instance 15 at 600 s: none), the MIP still
     // gets its share of the time left to reach its root bound.
     const boundCap = large ? MIP_BOUND_CAP_LARGE : MIP_BOUND_CAP;
+    // Small models: HiGHS's own time limit ends the MIP at its share. Its root sub-MIPs (RENS, RINS)
+    // see that limit but not the interrupt callback: on the demo ward they ran 7-8 s past the share
+    // and left fix-and-optimise half its time. A root LP not done by then is solved alone (below).
+    const onTime = waitForBound && !large;
     const mipCap = waitForBound
       ? Math.max(
           mipLimit,
@@ -344,7 +348,7 @@ export async function solveRoster(
           improvements: [],
         }
       : runMip(session, elastic ? solverArrays(elastic.model) : data, {
-          timeLimitSeconds: mipCap,
+          timeLimitSeconds: onTime ? mipLimit : mipCap,
           stopWhen: waitForBound
             ? ({ elapsedSeconds, rootDone }) => rootDone && elapsedSeconds >= mipLimit
             : undefined,
@@ -374,6 +378,18 @@ export async function solveRoster(
               }
             : undefined,
         });
+    if (onTime && run.bound === null && run.status === 'timeLimit' && !isCancelled(options)) {
+      // Stopped before its root LP (a busy machine): the LP relaxation alone, within the wait's cap.
+      const lp = runMip(session, elastic ? solverArrays(elastic.model) : data, {
+        relaxIntegrality: true,
+        timeLimitSeconds: mipCap,
+        highsOptions,
+        signal: options.signal,
+        cancelFlag: options.cancelFlag,
+        clockStart,
+      });
+      if (lp.bound !== null) run = { ...run, bound: lp.bound, gap: relativeGap(run.objective, lp.bound) };
+    }
     if (elastic) run = strictRun(run, elastic.model, elastic.penalty, built, problem);
     let proven = false;
     // A roster from the generated lines after the MIP, better than the MIP's.
