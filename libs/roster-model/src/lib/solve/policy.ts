@@ -49,8 +49,11 @@ export const AUTO_SEARCH_SHARE_HUGE = 0.7;
  */
 export const AUTO_SEARCH_SHARE_LARGE = 0.15;
 /**
- * Latest end of the MIP in 'auto' (share of the time after the search) while it waits for its root
- * bound; on large models fix-and-optimise keeps at least 40% (it finds most of their improvements).
+ * Latest end of the wait for the root bound in 'auto' (share of the time after the search): large
+ * models run the MIP on past its share until then; small ones stop it at its share (HiGHS's own time
+ * limit: its root sub-MIPs do not call back, and on the demo ward ran 7-8 s past the share) and, if
+ * its root LP was not done, solve the LP relaxation alone until then. On large models
+ * fix-and-optimise keeps at least 40% (it finds most of their improvements).
  */
 export const MIP_BOUND_CAP = 0.9;
 export const MIP_BOUND_CAP_LARGE = 0.6;

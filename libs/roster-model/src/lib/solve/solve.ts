@@ -308,8 +308,9 @@ export async function solveRoster(
   }
   let run: MipRunResult;
   try {
-    // In 'auto', the MIP before fix-and-optimise runs past its share until its root LP has given a
-    // bound worth stating (a busy machine can need more than the share), at most MIP_BOUND_CAP;
+    // In 'auto', the MIP before fix-and-optimise waits for its root LP's bound (a busy machine can
+    // need more than the share), at most to MIP_BOUND_CAP(_LARGE): large models run on past their
+    // share, small ones get the LP relaxation alone after it (`onTime` below);
     // not when the column-generation bound gave one (stopped early, its bound can be weak: instance
     // 12 under load, 2,709 against the MIP's 3,638).
     const goodFirstBound =
