@@ -93,6 +93,11 @@ export interface MipRunResult {
   nodes: number;
   /** Every improving objective with the time it was found. */
   improvements: { objective: number; seconds: number }[];
+  /**
+   * The bound moved after the first one HiGHS stated, or branching began (as `stopWhen` sees it):
+   * false when HiGHS stopped before its root LP, whose bound may then be a trivial finite one.
+   */
+  rootDone: boolean;
 }
 
 /** Relative gap as HiGHS reports it, or null when it cannot be stated. */
@@ -204,13 +209,13 @@ export function runMip(
               incumbent = finiteOrNull(event.data.mip_primal_bound) ?? incumbent;
               bound = finiteOrNull(event.data.mip_dual_bound) ?? bound;
               emit(false);
+              if (firstBound === null) firstBound = bound;
+              if (!rootDone)
+                rootDone =
+                  (bound !== null && firstBound !== null && bound !== firstBound) ||
+                  Number(event.data.mip_node_count ?? 0) > 0;
               if (isCancelled(options)) event.interrupt();
               else if (options.stopWhen) {
-                if (firstBound === null) firstBound = bound;
-                if (!rootDone)
-                  rootDone =
-                    (bound !== null && firstBound !== null && bound !== firstBound) ||
-                    Number(event.data.mip_node_count ?? 0) > 0;
                 if (options.stopWhen({ elapsedSeconds: elapsed(), rootDone })) {
                   stoppedByRule = true;
                   event.interrupt();
@@ -275,6 +280,7 @@ export function runMip(
       secondsToBest,
       nodes: isMip ? (infoNumber(model, 'mip_node_count') ?? 0) : 0,
       improvements,
+      rootDone: isMip ? rootDone : modelStatus === MODEL_STATUS.optimal,
     };
   });
 }

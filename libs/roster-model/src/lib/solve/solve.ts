@@ -347,6 +347,7 @@ export async function solveRoster(
           secondsToBest: foImprovements.at(-1)?.seconds ?? setupSeconds,
           nodes: 0,
           improvements: [],
+          rootDone: true,
         }
       : runMip(session, elastic ? solverArrays(elastic.model) : data, {
           timeLimitSeconds: onTime ? mipLimit : mipCap,
@@ -379,9 +380,11 @@ export async function solveRoster(
               }
             : undefined,
         });
-    if (onTime && run.bound === null && run.status === 'timeLimit' && !isCancelled(options)) {
-      // Stopped before its root LP (a busy machine): the LP relaxation alone, within the wait's cap.
-      const lp = runMip(session, elastic ? solverArrays(elastic.model) : data, {
+    if (onTime && !run.rootDone && run.status === 'timeLimit' && !isCancelled(options)) {
+      // Stopped before its root LP (a busy machine), its bound null or trivial: the LP relaxation
+      // alone, within the wait's cap. The strict model's: no start is needed, and its bound is
+      // at least the elastic one's.
+      const lp = runMip(session, data, {
         relaxIntegrality: true,
         timeLimitSeconds: mipCap,
         highsOptions,
@@ -389,7 +392,8 @@ export async function solveRoster(
         cancelFlag: options.cancelFlag,
         clockStart,
       });
-      if (lp.bound !== null) run = { ...run, bound: lp.bound, gap: relativeGap(run.objective, lp.bound) };
+      if (lp.bound !== null && (run.bound === null || lp.bound > run.bound))
+        run = { ...run, bound: lp.bound, gap: relativeGap(run.objective, lp.bound), seconds: lp.seconds };
     }
     if (elastic) run = strictRun(run, elastic.model, elastic.penalty, built, problem);
     let proven = false;
