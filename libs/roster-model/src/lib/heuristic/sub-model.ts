@@ -28,9 +28,14 @@ export interface SubModel {
   restrict(values: ArrayLike<number>): Float64Array;
 }
 
+/** Transposes already built, by the matrix they belong to (fix-and-optimise reuses one matrix). */
+const transposes = new WeakMap<Int32Array, { starts: Int32Array; rows: Int32Array }>();
+
 /** Row indices of each column (the transpose of the row-wise matrix). */
 function rowsOfColumns(model: HighsModelArrays): { starts: Int32Array; rows: Int32Array } {
   const { starts, indices } = model.matrix;
+  const known = transposes.get(indices);
+  if (known && known.starts.length === model.numCols + 1) return known;
   const colStarts = new Int32Array(model.numCols + 1);
   for (let e = 0; e < indices.length; e++) colStarts[indices[e] + 1]++;
   for (let j = 0; j < model.numCols; j++) colStarts[j + 1] += colStarts[j];
@@ -38,7 +43,9 @@ function rowsOfColumns(model: HighsModelArrays): { starts: Int32Array; rows: Int
   const rows = new Int32Array(indices.length);
   for (let i = 0; i < model.numRows; i++)
     for (let e = starts[i]; e < starts[i + 1]; e++) rows[fill[indices[e]]++] = i;
-  return { starts: colStarts, rows };
+  const transpose = { starts: colStarts, rows };
+  transposes.set(indices, transpose);
+  return transpose;
 }
 
 /**
