@@ -74,13 +74,14 @@ async function compare(
   expect(partRun.status).toBe('optimal');
   const completed = part.expand(partRun.values!);
   expect(rowsHold(whole.arrays, completed)).toBe(true);
-  // The offset carries the fixed columns' cost: the part's objective is the whole model's.
-  expect(partRun.objective!).toBeCloseTo(wholeRun.objective!, 6);
-  expect(built.objectiveOf(completed)).toBeCloseTo(wholeRun.objective!, 6);
+  // The offset carries the fixed columns' cost: the part's objective is the whole model's. HiGHS
+  // states objectives within its tolerances (930.999999 for a roster of 931 on instance 2).
+  expect(partRun.objective!).toBeCloseTo(wholeRun.objective!, 4);
+  expect(built.objectiveOf(completed)).toBeCloseTo(wholeRun.objective!, 4);
   if (!built.elastic) {
     const check = checkRoster(problem, built.decode(completed), built.index);
     expect(check.violations).toEqual([]);
-    expect(check.objective).toBeCloseTo(wholeRun.objective!, 6);
+    expect(check.objective).toBeCloseTo(wholeRun.objective!, 4);
   }
   return { part, built };
 }
