@@ -8,7 +8,6 @@
  *   columns together through continuous columns), from a roster that keeps every hard rule.
  */
 import fc from 'fast-check';
-import type { ModelData } from 'highs';
 import { subModel } from './sub-model';
 import { construct } from './construct';
 import { checkRoster } from '../check/checker';
@@ -65,7 +64,7 @@ async function compare(
     timeLimitSeconds: 120,
     startValues: whole.values,
   });
-  const partRun = runMip(session, part.arrays as unknown as ModelData, {
+  const partRun = runMip(session, solverArrays({ arrays: part.arrays }), {
     mipRelGap: 0,
     timeLimitSeconds: 120,
     startValues: part.restrict(whole.values),
