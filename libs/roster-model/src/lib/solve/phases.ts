@@ -27,6 +27,7 @@ import {
   AUTO_SEARCH_SHARE_HUGE,
   AUTO_SEARCH_SHARE_LARGE,
   SEARCH_STALL_MS,
+  SEARCH_NO_STALL_X,
   SEARCH_GIVE_UP_SHARE,
   LINE_BOUND_GAP,
   LINE_BOUND_HOPELESS_GAP,
@@ -91,7 +92,8 @@ export function warmStartRoster(
       timeLimitMs: searchMs,
       lineSolver: lineDp ? (p, extra) => lineDp.solve(p, extra) : undefined,
       lineShare: options.lineShare,
-      stallMs: SEARCH_STALL_MS,
+      stallMs:
+        built.numX >= SEARCH_NO_STALL_X && built.numX < AUTO_LARGE_MODEL_X ? undefined : SEARCH_STALL_MS,
       giveUpMs: searchMs * SEARCH_GIVE_UP_SHARE,
       seed: (options.randomSeed ?? 0) + 1,
       shouldStop: () => isCancelled(options),
