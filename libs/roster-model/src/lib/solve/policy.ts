@@ -66,9 +66,10 @@ export const SEARCH_STALL_MS = 1000;
 /**
  * Models from this many x columns up to AUTO_LARGE_MODEL_X search their whole share without the
  * stall rule: there the search's later, longer cooling rounds keep finding better rosters after quiet
- * spells of several seconds. The demo ward (1,673 columns), 30 s, one core: better in six pairs of
- * six (mean 2,394 against 2,411.8); benchmark instance 7 (1,248 columns), 60 s: 1,059 against 1,155;
- * 6 (1,040): 1,960 both; on two cores the demo ward stayed the same (four pairs). Smaller models keep
+ * spells of several seconds. The demo ward (1,673 columns), 30 s, one core, twelve pairs: better in
+ * eight (means 2,400.2 against 2,410.5); benchmark instance 7 (1,248 columns), 60 s, two pairs:
+ * 1,059 / 1,155 and 1,092 / 1,061; 6 (1,040): equal in both; on two cores the demo ward stayed the
+ * same (four pairs). Smaller models keep
  * the rule (instances 1-5, 104-676 columns: HiGHS proves them within seconds of the hand-over), and
  * so do large ones (not measured).
  */
